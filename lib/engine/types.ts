@@ -1,0 +1,87 @@
+/**
+ * The request and result of one analysis: what the server route takes and
+ * returns, and what the views read. Plain JSON throughout.
+ */
+import type { CycleReport } from "../analysis/types";
+import type { SteadyState } from "../solver/types";
+
+export type AnalysisMode = "instantaneous" | "diurnal";
+
+/** A condition as a user states it. Every field but the altitude has a default. */
+export interface ConditionInput {
+  /** geometric altitude, km (0–86) */
+  altitude_km: number;
+  /** temperature, K (150–350); default: U.S. Standard Atmosphere 1976 */
+  T_K?: number;
+  /** pressure, hPa (> 0); default: U.S. Standard Atmosphere 1976 */
+  p_hPa?: number;
+  /** latitude, degrees north (−90–90); default 45 */
+  latitude_deg?: number;
+  /** date "YYYY-MM-DD"; default "2026-03-20" */
+  date?: string;
+  /** local solar time, h (0–24); default 12 */
+  localSolarTime_h?: number;
+  /** solar zenith angle, degrees (0–180); when given it overrides latitude/date/time for the sun */
+  zenith_deg?: number;
+  /** default "instantaneous" */
+  mode?: AnalysisMode;
+  /** held-species overrides, mixing ratio (mol/mol) by species id */
+  held?: Record<string, number>;
+  /** pool-total overrides, mixing ratio of the pool's atoms by pool id (e.g. Cly: 3.3e-9) */
+  poolTotals?: Record<string, number>;
+  /** photolysis overrides, s⁻¹ by channel */
+  J?: Record<string, number>;
+  /** factor on every computed J; default 1 */
+  jScale?: number;
+  /** hold O3 at the climatology ("held", default) or solve for it ("solved") */
+  ozone?: "held" | "solved";
+}
+
+export interface AnalysisOptions {
+  /** pathway significance threshold as a fraction of the total Ox loss rate; default 1e-4 */
+  fminRelative?: number;
+  /** odd-oxygen family: "O+O(1D)+O3" (default) or "extended" (adds NO2, NO3, 2·N2O5, ClO, BrO, …) */
+  oxDefinition?: "standard" | "extended";
+}
+
+export interface AnalysisRequest {
+  mechanismId: string;
+  condition: ConditionInput;
+  options?: AnalysisOptions;
+}
+
+/** The condition with every default filled in and the derived quantities. */
+export interface ResolvedCondition {
+  altitude_km: number;
+  T_K: number;
+  p_hPa: number;
+  /** air number density, cm⁻³ */
+  M_cm3: number;
+  latitude_deg: number;
+  date: string;
+  dayOfYear: number;
+  localSolarTime_h: number;
+  /** degrees */
+  zenith_deg: number;
+  mode: AnalysisMode;
+  ozone: "held" | "solved";
+  /** overhead ozone column, Dobson units */
+  o3ColumnAbove_DU: number;
+  /** every photolysis frequency used, s⁻¹ */
+  J_s: Record<string, number>;
+  /** held amounts used, cm⁻³ */
+  held_cm3: Record<string, number>;
+  /** pool totals used, cm⁻³ */
+  poolTotals_cm3: Record<string, number>;
+}
+
+export interface AnalysisResult {
+  engineVersion: string;
+  mechanism: { id: string; title: string };
+  condition: ResolvedCondition;
+  options: Required<AnalysisOptions>;
+  steadyState: SteadyState;
+  cycles: CycleReport;
+  /** wall time of the computation, ms */
+  elapsed_ms: number;
+}

@@ -1,0 +1,69 @@
+/**
+ * Error classes shared by every domain of the science core.
+ *
+ * Every error carries a machine-readable `code`, a message a chemist can act
+ * on, and the `path` of the offending input (e.g. `reactions[12].rate.k0`),
+ * with the line and column of the source text when one is known.
+ */
+
+export interface ErrorLocation {
+  /** Document path of the offending input, e.g. `reactions[3].rate.A`. */
+  path?: string;
+  /** 1-based line in the source text, when known. */
+  line?: number;
+  /** 1-based column in the source text, when known. */
+  column?: number;
+}
+
+export class EngineError extends Error {
+  readonly code: string;
+  readonly path?: string;
+  readonly line?: number;
+  readonly column?: number;
+
+  constructor(code: string, message: string, location: ErrorLocation = {}) {
+    super(message);
+    this.name = "EngineError";
+    this.code = code;
+    this.path = location.path;
+    this.line = location.line;
+    this.column = location.column;
+  }
+
+  toJSON(): { code: string; message: string; path?: string; line?: number; column?: number } {
+    return { code: this.code, message: this.message, path: this.path, line: this.line, column: this.column };
+  }
+}
+
+/** A mechanism document that cannot be loaded (syntax, schema, balance, limits). */
+export class MechanismError extends EngineError {
+  /** Every problem found, the first of which is also this error's message. */
+  readonly problems: Diagnostic[];
+  constructor(problems: Diagnostic[]) {
+    const first = problems[0];
+    super(first?.code ?? "mechanism", formatDiagnostic(first), first ?? {});
+    this.name = "MechanismError";
+    this.problems = problems;
+  }
+}
+
+/** A value outside its allowed range or of the wrong type (conditions, options). */
+export class InputError extends EngineError {
+  constructor(path: string, message: string, code = "invalid-input") {
+    super(code, `${path}: ${message}`, { path });
+    this.name = "InputError";
+  }
+}
+
+/** A soft or hard problem found while reading input, with where it is. */
+export interface Diagnostic extends ErrorLocation {
+  severity: "error" | "warning";
+  code: string;
+  message: string;
+}
+
+export function formatDiagnostic(d: Diagnostic | undefined): string {
+  if (!d) return "unknown problem";
+  const where = d.line !== undefined ? ` (line ${d.line}, column ${d.column ?? 1})` : "";
+  return `${d.path ? `${d.path}: ` : ""}${d.message}${where}`;
+}
