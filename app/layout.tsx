@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import type { ReactNode } from "react";
+import { SiteFooter } from "@/components/SiteFooter";
+import { SiteHeader } from "@/components/SiteHeader";
+import { ENGINE_VERSION } from "@/lib/engine/version";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: "Ozone Loss Cycles",
+  description: "Which catalytic cycles destroy stratospheric ozone, how fast, and why.",
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-screen">
+        <SiteHeader />
+        <main>{children}</main>
+        <SiteFooter engineVersion={ENGINE_VERSION} />
+      </body>
+    </html>
+  );
+}

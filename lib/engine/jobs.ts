@@ -1,0 +1,28 @@
+/**
+ * The engine's units of work, as plain messages that cross a worker-thread
+ * boundary. `runJob` executes one in the current thread.
+ */
+import { EngineError } from "../errors";
+import { compileSource, type MechanismSource } from "./mechanism-source";
+import { runAnalysis } from "./run-analysis";
+import type { AnalysisRequest, AnalysisResult } from "./types";
+
+export type EngineJob = { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] };
+
+export type EngineJobResult = { kind: "analysis"; result: AnalysisResult };
+
+export function runJob(job: EngineJob): EngineJobResult {
+  switch (job.kind) {
+    case "analysis": {
+      const mech = compileSource(job.mechanism);
+      return {
+        kind: "analysis",
+        result: runAnalysis(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.request, {
+          initialState: job.initialState,
+        }),
+      };
+    }
+    default:
+      throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);
+  }
+}

@@ -1,0 +1,60 @@
+/**
+ * Schema of an analysis request (zod), shared by the route and the worker.
+ * Ranges: altitude 0–86 km (the 1976 standard's range), T 150–350 K, p > 0,
+ * zenith 0–180°, latitude ±90°.
+ */
+import { z } from "zod";
+import { InputError } from "../errors";
+import type { AnalysisRequest } from "./types";
+
+const finite = z.number().refine(Number.isFinite, "expected a finite number");
+const mixingRatio = finite.refine((v) => v >= 0 && v <= 1, "expected a mixing ratio between 0 and 1");
+
+export const conditionSchema = z
+  .object({
+    altitude_km: finite.refine((v) => v >= 0 && v <= 86, "expected an altitude between 0 and 86 km"),
+    T_K: finite.refine((v) => v >= 150 && v <= 350, "expected a temperature between 150 and 350 K").optional(),
+    p_hPa: finite.refine((v) => v > 0 && v <= 1100, "expected a pressure above 0 and at most 1100 hPa").optional(),
+    latitude_deg: finite.refine((v) => v >= -90 && v <= 90, "expected a latitude between -90 and 90°").optional(),
+    date: z
+      .string()
+      .regex(/^\d{4}-\d{2}-\d{2}$/, "expected a date YYYY-MM-DD")
+      .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), "expected a real calendar date")
+      .optional(),
+    localSolarTime_h: finite.refine((v) => v >= 0 && v <= 24, "expected a local solar time between 0 and 24 h").optional(),
+    zenith_deg: finite.refine((v) => v >= 0 && v <= 180, "expected a zenith angle between 0 and 180°").optional(),
+    mode: z.enum(["instantaneous", "diurnal"]).optional(),
+    held: z.record(z.string(), mixingRatio).optional(),
+    poolTotals: z.record(z.string(), mixingRatio).optional(),
+    J: z.record(z.string(), finite.refine((v) => v >= 0 && v < 10, "expected a photolysis frequency in s⁻¹ (0–10)")).optional(),
+    jScale: finite.refine((v) => v >= 0 && v <= 100, "expected a factor between 0 and 100").optional(),
+    ozone: z.enum(["held", "solved"]).optional(),
+  })
+  .strict();
+
+export const analysisRequestSchema = z
+  .object({
+    mechanismId: z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected a mechanism id"),
+    condition: conditionSchema,
+    options: z
+      .object({
+        fminRelative: finite.refine((v) => v > 0 && v < 0.5, "expected a fraction between 0 and 0.5").optional(),
+        oxDefinition: z.enum(["standard", "extended"]).optional(),
+      })
+      .strict()
+      .optional(),
+  })
+  .strict();
+
+/** Parses an analysis request or throws an InputError naming the first bad field. */
+export function parseAnalysisRequest(body: unknown): AnalysisRequest {
+  return parseWith(analysisRequestSchema, body) as AnalysisRequest;
+}
+
+export function parseWith<T>(schema: z.ZodType<T>, body: unknown): T {
+  const r = schema.safeParse(body);
+  if (r.success) return r.data;
+  const issue = r.error.issues[0];
+  const path = issue.path.map((p) => (typeof p === "number" ? `[${p}]` : p)).join(".").replace(/\.\[/g, "[");
+  throw new InputError(path || "(body)", issue.message, "invalid-request");
+}

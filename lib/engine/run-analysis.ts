@@ -1,0 +1,72 @@
+/**
+ * One analysis: resolve the condition, solve the photochemical steady state
+ * (instantaneous, or the periodic 24-hour solution), and analyse the
+ * catalytic cycles and the odd-oxygen budget.
+ */
+import { analyseCycles } from "../analysis";
+import type { CompiledMechanism } from "../mechanism/types";
+import { solveDiurnal, solveSteadyState } from "../solver";
+import type { SteadyState } from "../solver/types";
+import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf } from "./resolve-condition";
+import type { AnalysisOptions, AnalysisRequest, AnalysisResult } from "./types";
+import { ENGINE_VERSION } from "./version";
+import { solarZenithAngle } from "../atmosphere";
+
+export const ANALYSIS_DEFAULTS: Required<AnalysisOptions> = {
+  fminRelative: 1e-4,
+  oxDefinition: "standard",
+};
+
+export interface RunOptions {
+  /** warm start: number densities by mechanism index from a neighbouring solve */
+  initialState?: number[];
+}
+
+export function runAnalysis(
+  mech: CompiledMechanism,
+  mechanismRef: { id: string; title: string },
+  request: AnalysisRequest,
+  run: RunOptions = {},
+): AnalysisResult {
+  const t0 = performance.now();
+  const options = { ...ANALYSIS_DEFAULTS, ...request.options };
+  const condition = resolveCondition(mech, request.condition);
+  let steadyState: SteadyState;
+  if (condition.mode === "diurnal") {
+    const diurnal = solveDiurnal(mech, {
+      conditionsAt: (t_h: number) =>
+        solveConditionsOf(
+          condition,
+          jAt(
+            mech,
+            condition,
+            request.condition,
+            solarZenithAngle({
+              latitude_deg: condition.latitude_deg,
+              dayOfYear: condition.dayOfYear,
+              localSolarTime_h: t_h,
+            }),
+          ),
+        ),
+      reportAt_h: condition.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h,
+    });
+    steadyState = diurnal.average;
+  } else {
+    steadyState = solveSteadyState(mech, solveConditionsOf(condition), { initialState: run.initialState });
+  }
+  const heldSpecies = Object.keys(condition.held_cm3);
+  const cycles = analyseCycles(mech, steadyState, {
+    fminRelative: options.fminRelative,
+    oxDefinition: options.oxDefinition,
+    heldSpecies,
+  });
+  return {
+    engineVersion: ENGINE_VERSION,
+    mechanism: mechanismRef,
+    condition,
+    options,
+    steadyState,
+    cycles,
+    elapsed_ms: performance.now() - t0,
+  };
+}

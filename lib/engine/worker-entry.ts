@@ -1,0 +1,16 @@
+/** Entry point of an engine worker thread (bundled to .engine/worker.mjs). */
+import { parentPort } from "node:worker_threads";
+import { EngineError } from "../errors";
+import { type EngineJob, runJob } from "./jobs";
+
+parentPort?.on("message", (msg: { id: number; job: EngineJob }) => {
+  try {
+    parentPort?.postMessage({ id: msg.id, ok: true, value: runJob(msg.job) });
+  } catch (e) {
+    const err =
+      e instanceof EngineError
+        ? { ...e.toJSON(), name: e.name, problems: (e as { problems?: unknown }).problems }
+        : { code: "engine-failure", message: e instanceof Error ? e.message : String(e) };
+    parentPort?.postMessage({ id: msg.id, ok: false, error: err });
+  }
+});

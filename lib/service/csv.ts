@@ -1,0 +1,88 @@
+/** CSV exports of an analysis, with units in the headers (RFC 4180 quoting). */
+import type { AnalysisResult } from "../engine/types";
+
+function cell(v: unknown): string {
+  if (v === null || v === undefined) return "";
+  const s = typeof v === "number" ? (Number.isInteger(v) ? String(v) : v.toPrecision(8)) : String(v);
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+export function toCsv(header: string[], rows: unknown[][]): string {
+  return `${[header, ...rows].map((r) => r.map(cell).join(",")).join("\r\n")}\r\n`;
+}
+
+export function ratesCsv(r: AnalysisResult): string {
+  const ox = new Map(r.cycles.perReaction.map((p) => [p.reactionId, p]));
+  return toCsv(
+    [
+      "reaction_id",
+      "equation",
+      "k (cm3 molecule-1 s-1 for bimolecular; s-1 for photolysis and first order)",
+      "rate (molecules cm-3 s-1)",
+      "ox_destroyed_via_cycles (molecules cm-3 s-1)",
+      "net_ox_change (molecules cm-3 s-1)",
+    ],
+    r.steadyState.reactions.map((x) => [
+      x.id,
+      x.equation,
+      x.k,
+      x.rate_cm3s,
+      ox.get(x.id)?.oxDestroyed_cm3s ?? 0,
+      ox.get(x.id)?.netOxChange_cm3s ?? 0,
+    ]),
+  );
+}
+
+export function speciesCsv(r: AnalysisResult): string {
+  return toCsv(
+    [
+      "species",
+      "role",
+      "number_density (molecules cm-3)",
+      "mixing_ratio (mol/mol)",
+      "production (molecules cm-3 s-1)",
+      "loss (molecules cm-3 s-1)",
+      "lifetime (s)",
+    ],
+    r.steadyState.species.map((s) => [
+      s.id,
+      s.role,
+      s.numberDensity_cm3,
+      s.mixingRatio,
+      s.production_cm3s,
+      s.loss_cm3s,
+      s.lifetime_s,
+    ]),
+  );
+}
+
+export function cyclesCsv(r: AnalysisResult): string {
+  return toCsv(
+    [
+      "cycle_id",
+      "family",
+      "net_reaction",
+      "steps",
+      "rate (molecules cm-3 s-1)",
+      "ox_per_turnover",
+      "ox_loss (molecules cm-3 s-1)",
+      "share (fraction of total Ox loss)",
+      "efficiency (fraction)",
+      "rate_limiting_step",
+      "chain_length (turnovers)",
+    ],
+    r.cycles.cycles.map((c) => [
+      c.id,
+      c.family,
+      c.netEquation,
+      c.steps.map((s) => (s.multiplicity > 1 ? `${s.multiplicity}×(${s.equation})` : s.equation)).join(" ; "),
+      c.rate_cm3s,
+      c.oxPerTurnover,
+      c.oxLoss_cm3s,
+      c.share,
+      c.efficiency,
+      c.rateLimitingStep,
+      c.chainLength,
+    ]),
+  );
+}

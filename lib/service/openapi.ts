@@ -1,0 +1,184 @@
+/** The OpenAPI 3.1 description of the service's routes. */
+import packageJson from "../../package.json";
+
+const error = {
+  type: "object",
+  required: ["error"],
+  properties: {
+    error: {
+      type: "object",
+      required: ["code", "message"],
+      properties: {
+        code: { type: "string", examples: ["invalid-request", "not-found", "body-too-large", "timeout"] },
+        message: { type: "string" },
+        path: { type: "string", description: "path of the offending input, e.g. condition.altitude_km" },
+        line: { type: "integer", description: "1-based line in an uploaded document" },
+        column: { type: "integer" },
+        problems: { type: "array", items: { $ref: "#/components/schemas/Diagnostic" } },
+      },
+    },
+  },
+};
+
+const errors = (...codes: number[]) =>
+  Object.fromEntries(
+    codes.map((c) => [
+      String(c),
+      {
+        description:
+          { 400: "invalid input", 404: "unknown id", 413: "body or document over its size limit", 422: "computation over its time limit" }[
+            c
+          ] ?? "error",
+        content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } },
+      },
+    ]),
+  );
+
+const csv = (what: string) => ({
+  get: {
+    summary: `${what} of a stored analysis as CSV, units in the header`,
+    parameters: [{ $ref: "#/components/parameters/id" }],
+    responses: { 200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } }, ...errors(404) },
+  },
+});
+
+export const openApiDocument = {
+  openapi: "3.1.0",
+  info: {
+    title: "Ozone Loss Cycles",
+    version: packageJson.version,
+    description:
+      "Photochemical steady state, odd-oxygen budget and catalytic ozone-loss cycles for a chemical mechanism at stratospheric conditions. A research and teaching tool, not for regulatory, health or operational decisions.",
+  },
+  paths: {
+    "/api/health": {
+      get: { summary: "Versions and built-in mechanisms", responses: { 200: { description: "ok" } } },
+    },
+    "/api/atmosphere": {
+      get: {
+        summary: "U.S. Standard Atmosphere 1976 at an altitude",
+        parameters: [{ name: "altitude_km", in: "query", required: true, schema: { type: "number", minimum: 0, maximum: 86 } }],
+        responses: { 200: { description: "T_K, p_hPa, M_cm3" }, ...errors(400) },
+      },
+    },
+    "/api/mechanisms": {
+      get: { summary: "Built-in mechanisms and recent uploads", responses: { 200: { description: "list" } } },
+      post: {
+        summary: "Upload a mechanism document (YAML or JSON); validated, stored by content hash",
+        requestBody: {
+          required: true,
+          content: {
+            "application/json": {
+              schema: {
+                oneOf: [
+                  { type: "object", required: ["text"], properties: { text: { type: "string" }, format: { enum: ["yaml", "json"] } } },
+                  { type: "object", description: "the JSON form of a mechanism document" },
+                ],
+              },
+            },
+            "application/yaml": { schema: { type: "string" } },
+            "text/plain": { schema: { type: "string" } },
+          },
+        },
+        responses: {
+          201: { description: "stored: id, summary (species, reactions, conserved pools), warnings" },
+          200: { description: "already stored under the same content id" },
+          ...errors(400, 413),
+        },
+      },
+    },
+    "/api/mechanisms/{id}": {
+      get: {
+        summary: "A mechanism: document text, species, reactions, pools, warnings",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "mechanism" }, ...errors(404) },
+      },
+    },
+    "/api/analyses": {
+      post: {
+        summary: "Compute and store an analysis",
+        requestBody: {
+          required: true,
+          content: { "application/json": { schema: { $ref: "#/components/schemas/AnalysisRequest" } } },
+        },
+        responses: {
+          201: {
+            description:
+              "{ id, result }: steady state, rates, budget, cycles, per-reaction ozone destroyed, diagnostics. A steady state that failed is still 201 with its status.",
+          },
+          ...errors(400, 404, 413, 422),
+        },
+      },
+    },
+    "/api/analyses/{id}": {
+      get: {
+        summary: "A stored analysis with its request and engine version",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "record" }, ...errors(404) },
+      },
+    },
+    "/api/analyses/{id}.json": {
+      get: {
+        summary: "The full stored analysis as a JSON download",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "record" }, ...errors(404) },
+      },
+    },
+    "/api/analyses/{id}/rates.csv": csv("Every reaction's rate constant, rate and ozone destroyed"),
+    "/api/analyses/{id}/species.csv": csv("Every species' number density, mixing ratio, production, loss and lifetime"),
+    "/api/analyses/{id}/cycles.csv": csv("The catalytic cycles"),
+  },
+  components: {
+    parameters: { id: { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,80}$" } } },
+    schemas: {
+      Error: error,
+      Diagnostic: {
+        type: "object",
+        properties: {
+          severity: { enum: ["error", "warning"] },
+          code: { type: "string" },
+          message: { type: "string" },
+          path: { type: "string" },
+          line: { type: "integer" },
+          column: { type: "integer" },
+        },
+      },
+      AnalysisRequest: {
+        type: "object",
+        required: ["mechanismId", "condition"],
+        additionalProperties: false,
+        properties: {
+          mechanismId: { type: "string", examples: ["reference", "oxygen", "oxygen-chlorine"] },
+          condition: {
+            type: "object",
+            required: ["altitude_km"],
+            additionalProperties: false,
+            properties: {
+              altitude_km: { type: "number", minimum: 0, maximum: 86 },
+              T_K: { type: "number", minimum: 150, maximum: 350, description: "default: U.S. Standard Atmosphere 1976" },
+              p_hPa: { type: "number", exclusiveMinimum: 0, description: "default: U.S. Standard Atmosphere 1976" },
+              latitude_deg: { type: "number", minimum: -90, maximum: 90, default: 45 },
+              date: { type: "string", format: "date", default: "2026-03-20" },
+              localSolarTime_h: { type: "number", minimum: 0, maximum: 24, default: 12 },
+              zenith_deg: { type: "number", minimum: 0, maximum: 180, description: "overrides latitude/date/time for the sun" },
+              mode: { enum: ["instantaneous", "diurnal"], default: "instantaneous" },
+              held: { type: "object", additionalProperties: { type: "number" }, description: "mixing ratios by species" },
+              poolTotals: { type: "object", additionalProperties: { type: "number" }, description: "mixing ratios of atoms by pool (Cly, Bry, NOy)" },
+              J: { type: "object", additionalProperties: { type: "number" }, description: "fixed photolysis frequencies, s-1, by channel" },
+              jScale: { type: "number", minimum: 0, default: 1 },
+              ozone: { enum: ["held", "solved"], default: "held" },
+            },
+          },
+          options: {
+            type: "object",
+            additionalProperties: false,
+            properties: {
+              fminRelative: { type: "number", default: 1e-4, description: "pathway threshold, fraction of total Ox loss" },
+              oxDefinition: { enum: ["standard", "extended"], default: "standard" },
+            },
+          },
+        },
+      },
+    },
+  },
+} as const;

@@ -1,0 +1,16 @@
+// `npm start`: builds when no build exists, then serves on PORT (default 3000)
+// with the SQLite store under OZONE_DATA_DIR (default ./data).
+import { spawn, execFileSync } from "node:child_process";
+import { existsSync } from "node:fs";
+
+if (!existsSync(".next/BUILD_ID") || !existsSync(".engine/worker.mjs")) {
+  console.log("No build found: building first (about a minute on 2 cores)…");
+  execFileSync("node", ["scripts/build.mjs"], { stdio: "inherit" });
+}
+const port = process.env.PORT ?? "3000";
+const child = spawn("node_modules/.bin/next", ["start", "-p", port], {
+  stdio: "inherit",
+  env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" },
+});
+for (const sig of ["SIGINT", "SIGTERM"]) process.on(sig, () => child.kill(sig));
+child.on("exit", (code) => process.exit(code ?? 0));
