@@ -3,7 +3,7 @@
 import { spawn, execFileSync } from "node:child_process";
 import { existsSync } from "node:fs";
 
-if (!existsSync(".next/BUILD_ID") || !existsSync(".engine/worker.mjs")) {
+if (!existsSync(`${process.env.NEXT_DIST_DIR ?? ".next"}/BUILD_ID`) || !existsSync(".engine/worker.mjs")) {
   console.log("No build found: building first (about a minute on 2 cores)…");
   execFileSync("node", ["scripts/build.mjs"], { stdio: "inherit" });
 }
