@@ -1,0 +1,14 @@
+/** Printed names of the family frames. */
+const LABELS: Record<string, string> = {
+  Ox: "Ox · odd oxygen",
+  HOx: "HOx · hydrogen radicals",
+  NOx: "NOx · nitrogen oxides",
+  ClOx: "ClOx · active chlorine",
+  BrOx: "BrOx · active bromine",
+  reservoir: "Reservoirs",
+  source: "Source gases",
+  held: "Held species",
+  other: "Other species",
+};
+
+export const familyLabel = (family: string): string => LABELS[family] ?? family;

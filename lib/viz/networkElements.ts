@@ -1,0 +1,165 @@
+/**
+ * Builds the cytoscape elements of the bipartite network (species nodes,
+ * reaction nodes, family frames, consumption and production edges) from the
+ * mechanism, its preset layout and the current analysis. Pure and
+ * deterministic: same input, same JSON, so the output is snapshot-tested.
+ *
+ * Encodings: edge colour = the reaction's flux on a log scale (sequential
+ * ramp) or its odd-oxygen value (diverging ramp); edge width and reaction-node
+ * size = log flux in both modes. Rates in molecules cm⁻³ s⁻¹.
+ */
+import type { AnalysisResult } from "../engine/types";
+import { divergingColor } from "./divergingColor";
+import { familyLabel } from "./familyLabel";
+import { familyStyle } from "./familyStyle";
+import { logScale } from "./logScale";
+import type { NetworkLayout } from "./networkLayout";
+import { parseEquation } from "./parseEquation";
+import { reactionOxValue } from "./reactionOxValue";
+import { sequentialColor } from "./sequentialColor";
+import { signedLogScale } from "./signedLogScale";
+import type { ColorMode, GraphEdge, GraphElement, GraphNode, MechanismView } from "./types";
+
+export const ELEMENTS_DEFAULTS = {
+  /** "flux" (sequential) or "ox" (diverging); default "flux" */
+  colorMode: "flux" as ColorMode,
+  /** draw held and third-body species and their edges; default true */
+  showHeld: true,
+  /** thinnest edge of a reaction with flux, px; default 1 */
+  minWidth_px: 1,
+  /** thickest edge, px; default 9 */
+  maxWidth_px: 9,
+  /** decades of flux resolved below the largest; default 8 */
+  decades: 8,
+};
+
+export type ElementsOptions = Partial<typeof ELEMENTS_DEFAULTS>;
+
+/** Colour of reactions and edges before any analysis exists, or at zero flux. */
+export const IDLE_COLOR = "#c9c7c0";
+
+export const speciesNodeId = (id: string) => `s:${id}`;
+export const reactionNodeId = (id: string) => `r:${id}`;
+export const frameNodeId = (family: string) => `f:${family}`;
+
+export function networkElements(
+  mech: Pick<MechanismView, "species" | "reactions">,
+  layout: NetworkLayout,
+  result: AnalysisResult | null,
+  options: ElementsOptions = {},
+): GraphElement[] {
+  const o = { ...ELEMENTS_DEFAULTS, ...options };
+  const rates = new Map(result?.steadyState.reactions.map((r) => [r.id, r.rate_cm3s]) ?? []);
+  const densities = new Map(result?.steadyState.species.map((s) => [s.id, s.numberDensity_cm3]) ?? []);
+  const ox = new Map(result?.cycles.perReaction.map((r) => [r.reactionId, reactionOxValue(r)]) ?? []);
+  const flux = logScale([...rates.values()], { decades: o.decades });
+  const oxScale = signedLogScale([...ox.values()]);
+
+  const shown = mech.species.filter((s) => layout.species[s.id] && (o.showHeld || s.role === "solved"));
+  const shownIds = new Set(shown.map((s) => s.id));
+  const families = [...new Set(shown.map((s) => layout.species[s.id].family))];
+  const frameOrder = layout.frames.map((f) => f.family);
+  families.sort((a, b) => frameOrder.indexOf(a) - frameOrder.indexOf(b));
+
+  const nodes: GraphNode[] = families.map((f) => {
+    const st = familyStyle(f);
+    return {
+      group: "nodes",
+      data: {
+        id: frameNodeId(f),
+        kind: "frame",
+        family: f,
+        label: familyLabel(f),
+        fill: st.frame,
+        stroke: st.frameInk,
+      },
+      classes: "frame",
+    };
+  });
+  for (const s of shown) {
+    const p = layout.species[s.id];
+    const st = familyStyle(p.family);
+    const spectator = s.role !== "solved";
+    nodes.push({
+      group: "nodes",
+      data: {
+        id: speciesNodeId(s.id),
+        kind: "species",
+        speciesId: s.id,
+        label: s.label || s.id,
+        family: p.family,
+        parent: frameNodeId(p.family),
+        role: s.role,
+        spectator,
+        fill: spectator ? "#ffffff" : st.chip,
+        stroke: st.chipStroke,
+        ink: "#1f2328",
+        numberDensity_cm3: densities.get(s.id) ?? null,
+        width: chipWidth(s.label || s.id),
+      },
+      position: { x: p.x, y: p.y },
+      classes: `species${spectator ? " spectator" : ""}`,
+    });
+  }
+
+  const edges: GraphEdge[] = [];
+  for (const r of mech.reactions) {
+    const pos = layout.reactions[r.id];
+    if (!pos) continue;
+    const rate = rates.get(r.id) ?? 0;
+    const t = flux.normalize(rate);
+    const active = result !== null && t > 0;
+    const color = !active
+      ? IDLE_COLOR
+      : o.colorMode === "flux"
+        ? sequentialColor(t)
+        : divergingColor(oxScale.normalize(ox.get(r.id) ?? 0));
+    const width = active ? round(o.minWidth_px + (o.maxWidth_px - o.minWidth_px) * t) : 0.75;
+    nodes.push({
+      group: "nodes",
+      data: {
+        id: reactionNodeId(r.id),
+        kind: "reaction",
+        reactionId: r.id,
+        label: r.id,
+        equation: r.equation,
+        rate_cm3s: rate,
+        color,
+        size: active ? round(10 + 10 * t) : 9,
+      },
+      position: { x: pos.x, y: pos.y },
+      classes: `reaction${active ? "" : " idle"}`,
+    });
+    const eq = parseEquation(r.equation);
+    const net = new Map<string, number>();
+    for (const term of eq.reactants) net.set(term.species, (net.get(term.species) ?? 0) - term.coef);
+    for (const term of eq.products) net.set(term.species, (net.get(term.species) ?? 0) + term.coef);
+    for (const [sp, c] of net) {
+      if (c === 0 || !shownIds.has(sp)) continue;
+      const direction = c < 0 ? "in" : "out";
+      edges.push({
+        group: "edges",
+        data: {
+          id: `e:${r.id}:${direction}:${sp}`,
+          kind: "edge",
+          source: direction === "in" ? speciesNodeId(sp) : reactionNodeId(r.id),
+          target: direction === "in" ? reactionNodeId(r.id) : speciesNodeId(sp),
+          reactionId: r.id,
+          speciesId: sp,
+          direction,
+          coef: Math.abs(c),
+          rate_cm3s: rate,
+          color,
+          width,
+        },
+        classes: `flow ${direction}${active ? "" : " idle"}`,
+      });
+    }
+  }
+  return [...nodes, ...edges];
+}
+
+const round = (v: number) => Math.round(v * 100) / 100;
+
+/** Chip width for a label at 12 px system sans, px (about 7.4 px a character). */
+export const chipWidth = (label: string): number => Math.max(40, Math.round(label.length * 7.4 + 20));
