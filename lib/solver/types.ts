@@ -31,6 +31,8 @@ export type SolveStatus =
 
 export interface SpeciesState {
   id: string;
+  /** index in CompiledMechanism.species (added by the solver) */
+  index?: number;
   role: "solved" | "held";
   /** molecules cm⁻³ */
   numberDensity_cm3: number;
@@ -81,4 +83,94 @@ export interface SteadyState {
   numberDensity_cm3: number[];
   /** rate of every reaction by mechanism index, molecules cm⁻³ s⁻¹ */
   rate_cm3s: number[];
+  /** soft problems (ignored condition entries, species named in a failure); added by the solver */
+  warnings?: string[];
+  /** pseudo-transient continuation steps of the cold start (0 when a warm start converged directly); added by the solver */
+  coldStartSteps?: number;
+}
+
+/** Options of `solveSteadyState`. */
+export interface SteadyStateOptions {
+  /** warm start: number densities by species id, cm⁻³ (solved species not named start cold); default none */
+  initial_cm3?: Readonly<Record<string, number>>;
+  /** warm start: number densities by mechanism index (e.g. a previous SteadyState.numberDensity_cm3), cm⁻³; default none */
+  initialState?: readonly number[];
+  /** convergence: max-norm of the scaled residual (P − L)/(P + L), dimensionless; default 1e-10 */
+  residualTolerance?: number;
+  /** maximum Newton iterations after the cold start; default 60 */
+  maxIterations?: number;
+  /** maximum pseudo-transient continuation steps of the cold start; default 200 */
+  maxColdStartSteps?: number;
+  /** effective rate constants by reaction index, overriding the kinetics evaluation (units as returned by effectiveRateConstant); default none */
+  rateConstants?: ArrayLike<number>;
+  /** factors on the rate constants by reaction index (sensitivity studies); default all 1 */
+  rateMultipliers?: ArrayLike<number>;
+}
+
+/** Options of the Rosenbrock integrator. */
+export interface IntegrateOptions {
+  /** relative tolerance of the local error, dimensionless; default 1e-4 */
+  rtol?: number;
+  /** absolute tolerance of the local error, in the units of y (cm⁻³ for chemistry); default 1e-2 */
+  atol?: number;
+  /** first trial step, s; default 1e-6 of the interval */
+  initialStep_s?: number;
+  /** largest step, s; default the whole interval */
+  maxStep_s?: number;
+  /** maximum accepted + rejected steps; default 100000 */
+  maxSteps?: number;
+  /** times (s) the integrator must step onto exactly (discontinuities, outputs); default none */
+  breakpoints_s?: readonly number[];
+}
+
+/** Result of a Rosenbrock integration. */
+export interface IntegrationResult {
+  status: "ok" | "max-steps" | "step-too-small" | "non-finite";
+  message: string;
+  /** final time, s */
+  t_s: number;
+  /** final state (cm⁻³ for chemistry, by solved index in `integrateOde`, by mechanism index in `integrate`) */
+  y: number[];
+  acceptedSteps: number;
+  rejectedSteps: number;
+  /** right-hand-side evaluations */
+  functionEvaluations: number;
+  /** Jacobian evaluations (one per step attempt) */
+  jacobianEvaluations: number;
+}
+
+/** The periodic 24-hour solution of `solveDiurnal`. */
+export interface DiurnalSteadyState {
+  status: SolveStatus;
+  message: string;
+  /**
+   * 24-hour means: numberDensity_cm3, rate_cm3s, production, loss and pool
+   * sources are means over the day; k is the mean rate constant; lifetime is
+   * mean [X] / mean loss.
+   */
+  average: SteadyState;
+  /** the instantaneous state of the periodic solution at `reportAt_h` */
+  atReportTime: SteadyState;
+  /** local solar time of `atReportTime`, h */
+  reportAt_h: number;
+  /** days integrated in total (including the spin-up) */
+  daysIntegrated: number;
+  /** max over species of |y(24 h) − y(0 h)| / (|y(0 h)| + atol) after the last day */
+  periodicityError: number;
+}
+
+/** Options of `solveDiurnal`. */
+export interface DiurnalOptions {
+  /** condition samples per day; rate constants are interpolated linearly between them; default 96 (every 15 min) */
+  samplesPerDay?: number;
+  /** convergence: periodicity error below this; default 1e-4 */
+  periodicTolerance?: number;
+  /** maximum days integrated; default 40 */
+  maxDays?: number;
+  /** Rosenbrock relative tolerance; default 1e-4 */
+  rtol?: number;
+  /** Rosenbrock absolute tolerance, cm⁻³; default 1e-3 */
+  atol?: number;
+  /** warm start by mechanism index, cm⁻³ (the state at local midnight); default the instantaneous steady state at 24-h mean rate constants */
+  initialState?: readonly number[];
 }

@@ -1,0 +1,93 @@
+/**
+ * Mass-action kinetics over the unknowns of a `ChemSystem`: reaction rates
+ * r_j = k_j Π_held [X]^ν · Π_unknown x_l^ν_lj, net tendencies
+ * F_i = Σ_j (products − reactants)_ij r_j split into production and loss, and
+ * the analytic Jacobian, in linear (∂F/∂x) or logarithmic (∂F/∂ln x) form.
+ * For u = ln x the derivative of r_j is exact and division-free:
+ * ∂r_j/∂u_l = ν_lj r_j (common practice; e.g. Sandu et al., Atmos. Environ. 31, 1997).
+ *
+ * Units: x in molecules cm⁻³, rates in molecules cm⁻³ s⁻¹.
+ */
+import type { ChemSystem } from "./buildSystem";
+
+/** kEff_j = k_j × Π over held reactants [X]^coef. */
+export function effectiveConstants(sys: ChemSystem, k: ArrayLike<number>, out: Float64Array): Float64Array {
+  for (let j = 0; j < sys.nReactions; j++) out[j] = k[j] * sys.heldFactor[j];
+  return out;
+}
+
+/** Rates of every reaction at unknown amounts x (cm⁻³). */
+export function reactionRates(sys: ChemSystem, kEff: Float64Array, x: Float64Array, rates: Float64Array): void {
+  const { rStart, rUnknown, rCoef } = sys;
+  for (let j = 0; j < sys.nReactions; j++) {
+    let r = kEff[j];
+    if (r !== 0) {
+      for (let q = rStart[j]; q < rStart[j + 1]; q++) {
+        const v = x[rUnknown[q]];
+        const c = rCoef[q];
+        r *= c === 1 ? v : c === 2 ? v * v : v ** c;
+      }
+    }
+    rates[j] = r;
+  }
+}
+
+/** Production P and loss L of every unknown from the net stoichiometry, cm⁻³ s⁻¹. */
+export function productionLoss(sys: ChemSystem, rates: Float64Array, P: Float64Array, L: Float64Array): void {
+  P.fill(0);
+  L.fill(0);
+  const { sStart, sUnknown, sNu } = sys;
+  for (let j = 0; j < sys.nReactions; j++) {
+    const r = rates[j];
+    if (r === 0) continue;
+    for (let q = sStart[j]; q < sStart[j + 1]; q++) {
+      const nu = sNu[q];
+      if (nu > 0) P[sUnknown[q]] += nu * r;
+      else L[sUnknown[q]] -= nu * r;
+    }
+  }
+}
+
+/** dF/du with u = ln x, row-major n×n, from the rates (overwrites J). */
+export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Array): void {
+  const n = sys.n;
+  J.fill(0);
+  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
+  for (let j = 0; j < sys.nReactions; j++) {
+    const r = rates[j];
+    if (r === 0) continue;
+    for (let q = rStart[j]; q < rStart[j + 1]; q++) {
+      const l = rUnknown[q];
+      const d = rCoef[q] * r;
+      for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
+    }
+  }
+}
+
+/** dF/dx, row-major n×n, at unknown amounts x ≥ 0 (exact also where some x are 0). Overwrites J. */
+export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Array, J: Float64Array): void {
+  const n = sys.n;
+  J.fill(0);
+  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
+  for (let j = 0; j < sys.nReactions; j++) {
+    const kj = kEff[j];
+    if (kj === 0) continue;
+    const q0 = rStart[j];
+    const q1 = rStart[j + 1];
+    for (let q = q0; q < q1; q++) {
+      // derivative of Π x^c with respect to the q-th factor
+      const c = rCoef[q];
+      const v = x[rUnknown[q]];
+      let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
+      for (let o = q0; o < q1; o++) {
+        if (o === q) continue;
+        const w = x[rUnknown[o]];
+        const co = rCoef[o];
+        d *= co === 1 ? w : co === 2 ? w * w : w ** co;
+      }
+      if (d === 0) continue;
+      const l = rUnknown[q];
+      for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
+    }
+  }
+}
