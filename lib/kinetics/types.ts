@@ -21,6 +21,12 @@ export type RateLaw =
    * k = k0(T)/(1 + k0(T)[M]/k∞(T)) · Fc^(1/(1 + log10(k0[M]/k∞)²)), k0 in cm³ molecule⁻¹ s⁻¹, k∞ in s⁻¹.
    */
   | { law: "chemical-activation"; k0_300: number; n: number; kinf_300: number; m: number; Fc?: number }
+  /**
+   * Lindemann form with Arrhenius limits (JPL 19-5 form of the pressure-dependent
+   * part of OH + HNO3): k = k_low[M]/(1 + k_low[M]/k_high), k_low in cm⁶ molecule⁻² s⁻¹,
+   * k_high in cm³ molecule⁻¹ s⁻¹, each A exp(−(E/R)/T). Includes [M].
+   */
+  | { law: "lindemann"; low: { A: number; EoverR_K: number }; high: { A: number; EoverR_K: number } }
   /** k = k_forward / K(T), K(T) = A exp(B/T) in cm³ molecule⁻¹ (JPL Table 3). */
   | { law: "equilibrium-reverse"; forward: RateLaw; Keq_A_cm3: number; Keq_B_K: number }
   /** J from the photolysis module for the named channel, times `factor` (default 1). */

@@ -55,6 +55,8 @@ export interface CompiledReaction {
   /** Citation, e.g. "JPL 19-5, Table 1-1 (from memory)". */
   source?: string;
   note?: string;
+  /** Reason given for a knowingly unbalanced reaction (lumped products); absent when balanced. */
+  unbalanced?: string;
 }
 
 /**
@@ -72,6 +74,14 @@ export interface ConservationRelation {
   weights: Term[];
   /** Human-readable sum, e.g. "Cl + ClO + HCl + ClONO2 + 2 Cl2O2". */
   expression: string;
+  /**
+   * True when no reaction changes the sum (an exact invariant, in the left null
+   * space of the solved-species stoichiometry); false for an element balance
+   * that reactions with held species feed or drain.
+   */
+  exact: boolean;
+  /** Reactions (indices) that change the sum: they exchange atoms with held species. */
+  externalReactions: number[];
 }
 
 /** A conserved pool whose total the user holds (e.g. Cly). */
@@ -80,6 +90,8 @@ export interface ConservedPool extends ConservationRelation {
   total?: Amount;
   /** Reactions that move atoms of this pool in or out from held species (e.g. CFCl3 photolysis). */
   externalReactions: number[];
+  /** Note from the document, e.g. "approximate, mid-latitude 2020s". */
+  note?: string;
 }
 
 export interface CompiledMechanism {
@@ -98,4 +110,98 @@ export interface CompiledMechanism {
   photolysisChannels: string[];
   /** Soft problems found while loading. */
   warnings: Diagnostic[];
+}
+
+/** Size limits of a mechanism document; beyond them loading stops with an error. */
+export interface MechanismLimits {
+  /** default 5,000 */
+  maxSpecies: number;
+  /** default 20,000 */
+  maxReactions: number;
+  /** UTF-8 bytes of the document text; default 4,194,304 (4 MiB) */
+  maxTextBytes: number;
+}
+
+/** What `loadMechanism` returns. */
+export interface LoadedMechanism {
+  mechanism: CompiledMechanism;
+  /** Canonical JSON of the parsed document (keys sorted, no whitespace), for content hashing. */
+  canonical: string;
+  /** Soft problems (also in `mechanism.warnings`). */
+  warnings: Diagnostic[];
+  /** The document text as given. */
+  text: string;
+}
+
+/** A built-in mechanism as listed for users. */
+export interface BuiltinMechanismInfo {
+  id: string;
+  title: string;
+  description: string;
+}
+
+/** Sparse stoichiometric matrix: rows are species, columns reactions, entries net coefficients (M excluded). */
+export interface SparseStoichiometry {
+  nSpecies: number;
+  nReactions: number;
+  /** Per reaction, the nonzero net coefficients (products − reactants), sorted by species index. */
+  columns: Term[][];
+  /** Per species, the reactions that change it and the net coefficient. */
+  rows: { reaction: number; coef: number }[][];
+}
+
+/*
+ * The document as written (YAML or JSON), after its shape has been checked.
+ * Field names are those of docs/mechanism-format.md.
+ */
+
+/** A rate law as written in a document; symbols of the JPL evaluation. */
+export type RateEntry =
+  | { law: "arrhenius"; A: number; "E/R"?: number; b?: number }
+  | { law: "termolecular"; k0: number; n?: number; kinf?: number; m?: number; Fc?: number }
+  | { law: "chemical-activation"; k0: number; n?: number; kinf: number; m?: number; Fc?: number }
+  | { law: "lindemann"; low: { A: number; "E/R"?: number }; high: { A: number; "E/R"?: number } }
+  | { law: "equilibrium-reverse"; forward: string | RateEntry; K: { A: number; B: number } }
+  | { law: "photolysis"; channel?: string; factor?: number; J?: number };
+
+export interface SpeciesEntry {
+  id: string;
+  role: SpeciesRole;
+  label?: string;
+  group?: string;
+  /** explicit composition for a name that is not a formula (lumped species) */
+  atoms?: Record<string, number>;
+  mixingRatio?: number;
+  /** cm⁻³ */
+  numberDensity_cm3?: number;
+  note?: string;
+}
+
+export interface TotalEntry {
+  id: string;
+  element: string;
+  label?: string;
+  mixingRatio?: number;
+  /** cm⁻³ */
+  numberDensity_cm3?: number;
+  note?: string;
+}
+
+export interface ReactionEntry {
+  id: string;
+  equation: string;
+  rate: RateEntry;
+  uncertainty?: Uncertainty;
+  source?: string;
+  note?: string;
+  unbalanced?: string;
+}
+
+export interface MechanismDocument {
+  title: string;
+  version: string;
+  description: string;
+  species: SpeciesEntry[];
+  totals: TotalEntry[];
+  reactions: ReactionEntry[];
 }

@@ -1,0 +1,10 @@
+export { arrhenius } from "./arrhenius";
+export { type ChemicalActivationParams, chemicalActivation } from "./chemicalActivation";
+export { effectiveRateConstant } from "./effectiveRateConstant";
+export { equilibriumConstant, equilibriumReverse } from "./equilibriumReverse";
+export { type LindemannParams, lindemann } from "./lindemann";
+export { photolysisRate } from "./photolysisRate";
+export { lawIncludesM, rateConstant } from "./rateConstant";
+export { falloff, type TermolecularParams, termolecular } from "./termolecular";
+export type { KineticsEnv, RateLaw, Uncertainty } from "./types";
+export { uncertaintyFactor } from "./uncertaintyFactor";

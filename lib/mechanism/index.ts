@@ -1,0 +1,17 @@
+export { builtinMechanismDir, builtinMechanisms, loadBuiltinMechanism } from "./builtinMechanisms";
+export { canonicalJson } from "./canonicalJson";
+export { compileMechanism } from "./compileMechanism";
+export { externalReactions } from "./externalReactions";
+export {
+  type ConservationSearch,
+  elementWeights,
+  findConservationRelations,
+  searchConservation,
+} from "./findConservationRelations";
+export { leftNullSpace } from "./leftNullSpace";
+export { DEFAULTS as MECHANISM_LIMITS, type LoadMechanismOptions, loadMechanism } from "./loadMechanism";
+export { type EquationTerm, type ParsedEquation, parseEquation } from "./parseEquation";
+export { parseFormula } from "./parseFormula";
+export { poolExpression, weightedSum } from "./poolExpression";
+export { stoichiometryMatrix } from "./stoichiometryMatrix";
+export type * from "./types";

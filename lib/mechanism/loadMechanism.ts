@@ -1,0 +1,147 @@
+/**
+ * Loads a mechanism document (YAML or its JSON form, docs/mechanism-format.md):
+ * parses it with the `yaml` package (v2), checks its shape, compiles it and
+ * collects every problem with its document path, line and column. Throws
+ * MechanismError with all errors; returns warnings with the mechanism.
+ */
+import { LineCounter, parseDocument } from "yaml";
+import { type Diagnostic, MechanismError } from "../errors";
+import { canonicalJson } from "./canonicalJson";
+import { compileMechanism } from "./compileMechanism";
+import { DiagnosticSink } from "./diagnostics";
+import { type Locator, lazyLocator, makeLocator } from "./locateInDocument";
+import { readDocument } from "./readDocument";
+import type { LoadedMechanism, MechanismLimits } from "./types";
+
+export const DEFAULTS: MechanismLimits = {
+  maxSpecies: 5_000,
+  maxReactions: 20_000,
+  maxTextBytes: 4 * 1024 * 1024,
+};
+
+export interface LoadMechanismOptions {
+  /** "yaml" or "json"; default: JSON when the text starts with "{", else YAML */
+  format?: "yaml" | "json";
+  /** size limits; default `DEFAULTS` (5,000 species, 20,000 reactions, 4 MiB) */
+  limits?: Partial<MechanismLimits>;
+}
+
+function utf8Length(text: string): number {
+  let n = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 0x80) n += 1;
+    else if (c < 0x800) n += 2;
+    else if (c >= 0xd800 && c <= 0xdbff) {
+      n += 4;
+      i++;
+    } else n += 3;
+  }
+  return n;
+}
+
+function fail(problems: Diagnostic[]): never {
+  throw new MechanismError(problems);
+}
+
+function lineColumnAt(text: string, offset: number): { line: number; column: number } {
+  let line = 1;
+  let start = 0;
+  for (let i = 0; i < offset && i < text.length; i++) {
+    if (text.charCodeAt(i) === 10) {
+      line++;
+      start = i + 1;
+    }
+  }
+  return { line, column: offset - start + 1 };
+}
+
+/** Parses JSON text; a syntax error gives its line and column. */
+function parseJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch (e) {
+    const msg = e instanceof Error ? e.message : String(e);
+    const m = /position (\d+)/.exec(msg);
+    let at: { line: number; column: number } = { line: 1, column: 1 };
+    if (m) at = lineColumnAt(text, Number(m[1]));
+    else {
+      const lc = new LineCounter();
+      const doc = parseDocument(text, { lineCounter: lc, prettyErrors: false });
+      const err = doc.errors[0];
+      if (err) {
+        const p = lc.linePos(err.pos[0]);
+        at = { line: p.line, column: p.col };
+      }
+    }
+    return fail([{ severity: "error", code: "json-syntax", message: `malformed JSON: ${msg.split("\n")[0]}`, ...at }]);
+  }
+}
+
+/** Parses, checks and compiles a mechanism document. */
+export function loadMechanism(text: string, options: LoadMechanismOptions = {}): LoadedMechanism {
+  const limits = { ...DEFAULTS, ...options.limits };
+  if (typeof text !== "string") {
+    fail([{ severity: "error", code: "type", message: "a mechanism document must be text (YAML or JSON)" }]);
+  }
+  const bytes = text.length > limits.maxTextBytes / 4 ? utf8Length(text) : text.length;
+  if (bytes > limits.maxTextBytes) {
+    fail([
+      {
+        severity: "error",
+        code: "too-large",
+        message: `the document is ${bytes} bytes, beyond the limit of ${limits.maxTextBytes} bytes`,
+        line: 1,
+        column: 1,
+      },
+    ]);
+  }
+  const format = options.format ?? (/^\s*[{[]/.test(text) ? "json" : "yaml");
+
+  let data: unknown;
+  let locate: Locator;
+  if (format === "json") {
+    data = parseJson(text);
+    locate = lazyLocator(text);
+  } else {
+    const lineCounter = new LineCounter();
+    const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
+    const syntax = [...doc.errors].map((err): Diagnostic => {
+      const p = lineCounter.linePos(err.pos[0]);
+      const first = err.message.split("\n")[0].replace(/ at line \d+, column \d+.*$/, "");
+      return {
+        severity: "error",
+        code: "yaml-syntax",
+        message: `malformed YAML: ${first}`,
+        line: p.line,
+        column: p.col,
+      };
+    });
+    if (syntax.length) fail(syntax);
+    try {
+      data = doc.toJS({ maxAliasCount: 100 });
+    } catch (e) {
+      fail([
+        {
+          severity: "error",
+          code: "yaml-syntax",
+          message: `malformed YAML: ${e instanceof Error ? e.message : e}`,
+          line: 1,
+          column: 1,
+        },
+      ]);
+    }
+    locate = makeLocator(doc, lineCounter);
+  }
+
+  const sink = new DiagnosticSink();
+  const read = readDocument(data, sink, limits);
+  // compile even after shape errors, so that one pass reports every problem
+  const mechanism = read ? compileMechanism(read, sink) : undefined;
+  const diagnostics = sink.resolve(locate);
+  const errors = diagnostics.filter((d) => d.severity === "error");
+  if (errors.length || !mechanism) fail(errors.length ? errors : diagnostics);
+  const warnings = diagnostics.filter((d) => d.severity === "warning");
+  mechanism.warnings = warnings;
+  return { mechanism, canonical: canonicalJson(data), warnings, text };
+}
