@@ -1,0 +1,27 @@
+import { MAX_ANSWERS_BODY, markAssessment } from "@/lib/service/assessments";
+import { csvResponse, HttpError, readBodyText, respond } from "@/lib/service/http";
+
+export const dynamic = "force-dynamic";
+
+/** Body: the class's answers as CSV (or JSON { csv }). Answers JSON marks, or CSV with ?format=csv. */
+export async function POST(req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => {
+    let text = await readBodyText(req, MAX_ANSWERS_BODY);
+    if ((req.headers.get("content-type") ?? "").includes("json")) {
+      let parsed: unknown;
+      try {
+        parsed = JSON.parse(text);
+      } catch (e) {
+        throw new HttpError(400, "invalid-json", `the body is not valid JSON: ${(e as Error).message}`, "(body)");
+      }
+      const csv = (parsed as { csv?: unknown })?.csv;
+      if (typeof csv !== "string") throw new HttpError(400, "invalid-request", "expected { csv: string }", "csv");
+      text = csv;
+    }
+    const marks = markAssessment(id, text);
+    if (new URL(req.url).searchParams.get("format") === "csv")
+      return csvResponse(marks.csv, `assessment-${id}-marks.csv`);
+    return Response.json(marks);
+  });
+}

@@ -1,0 +1,8 @@
+import { MAX_ASSESSMENT_BODY, previewAssessment } from "@/lib/service/assessments";
+import { readJsonBody, respond } from "@/lib/service/http";
+
+export const dynamic = "force-dynamic";
+
+export function POST(req: Request) {
+  return respond(async () => Response.json(await previewAssessment(await readJsonBody(req, MAX_ASSESSMENT_BODY))));
+}

@@ -1,0 +1,62 @@
+/**
+ * CSV reading and writing after RFC 4180: comma-separated, fields with a
+ * comma, quote or line break in double quotes, quotes doubled, CRLF on
+ * output; on input LF or CRLF, a leading byte-order mark and trailing blank
+ * lines are accepted (as spreadsheets write them).
+ */
+import { InputError } from "../errors";
+
+function cell(v: unknown): string {
+  if (v === null || v === undefined) return "";
+  const s = String(v);
+  return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
+
+export function writeCsv(header: string[], rows: unknown[][]): string {
+  return `${[header, ...rows].map((r) => r.map(cell).join(",")).join("\r\n")}\r\n`;
+}
+
+/** Rows of cells; throws an InputError naming the line of an unclosed quote. */
+export function readCsv(text: string): string[][] {
+  const s = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+  const rows: string[][] = [];
+  let row: string[] = [];
+  let field = "";
+  let quoted = false;
+  let line = 1;
+  let quoteLine = 0;
+  for (let i = 0; i < s.length; i++) {
+    const c = s[i];
+    if (quoted) {
+      if (c === '"') {
+        if (s[i + 1] === '"') {
+          field += '"';
+          i++;
+        } else quoted = false;
+      } else {
+        if (c === "\n") line++;
+        field += c;
+      }
+    } else if (c === '"' && field === "") {
+      quoted = true;
+      quoteLine = line;
+    } else if (c === ",") {
+      row.push(field);
+      field = "";
+    } else if (c === "\n" || c === "\r") {
+      if (c === "\r" && s[i + 1] === "\n") i++;
+      row.push(field);
+      rows.push(row);
+      row = [];
+      field = "";
+      line++;
+    } else field += c;
+  }
+  if (quoted) throw new InputError(`row ${quoteLine}`, "a quoted field is never closed", "invalid-csv");
+  if (field !== "" || row.length > 0) {
+    row.push(field);
+    rows.push(row);
+  }
+  while (rows.length > 0 && rows[rows.length - 1].every((f) => f.trim() === "")) rows.pop();
+  return rows;
+}

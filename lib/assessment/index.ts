@@ -1,0 +1,18 @@
+export { readCsv, writeCsv } from "./csv";
+export { DEFAULTS as DRAW_DEFAULTS, drawCondition, SCALAR_FIELDS } from "./drawCondition";
+export { answerTemplateCsv, keyCsv, keyJson, marksCsv } from "./exports";
+export { formatAnswer, formatTolerance } from "./formatKey";
+export type { GeneratedAssessment, GenerateOptions, VariantAnalyses } from "./generateAssessment";
+export { DEFAULTS as GENERATE_DEFAULTS, generateAssessment, questionInfo } from "./generateAssessment";
+export { markAnswer, withinTolerance } from "./markAnswer";
+export { LIMITS as MARKING_LIMITS, markClass } from "./markClass";
+export { mulberry32 } from "./mulberry32";
+export { normaliseName, parseNumberAnswer } from "./parseAnswer";
+export { formatMixingRatio, sheetConditions } from "./sheetConditions";
+export { formatSignificant, roundToSignificant } from "./significant";
+export type { MechanismOffer } from "./specSchema";
+export { assessmentSpecSchema, checkAgainstMechanism, LIMITS as SPEC_LIMITS, parseAssessmentSpec } from "./specSchema";
+export { studentView } from "./studentView";
+export { QUESTION_TEMPLATES, templateOf } from "./templates";
+export type * from "./types";
+export { fmix32, variantSeed } from "./variantSeed";

@@ -1,0 +1,64 @@
+/**
+ * Shared wording for the cycle questions: find a cycle by its stable id, list
+ * its steps in the mechanism's reaction order (never by rate, which would
+ * give the rate-limiting step away), and letter the choices.
+ */
+import type { CatalyticCycle } from "../../analysis/types";
+import type { AnalysisResult } from "../../engine/types";
+import type { Choice } from "../types";
+
+export const LETTERS = "abcdefghijklmnopqrstuvwxyz";
+
+export function findCycle(result: AnalysisResult, cycleId: string | undefined): CatalyticCycle | undefined {
+  return result.cycles.cycles.find((c) => c.id === cycleId);
+}
+
+/** The cycle's steps in the order of the mechanism's reaction list. */
+export function stepsInMechanismOrder(result: AnalysisResult, cycle: CatalyticCycle) {
+  const order = new Map(result.steadyState.reactions.map((r, i) => [r.id, i]));
+  return [...cycle.steps].sort(
+    (a, b) =>
+      (order.get(a.reactionId) ?? 1e9) - (order.get(b.reactionId) ?? 1e9) || a.reactionId.localeCompare(b.reactionId),
+  );
+}
+
+export function stepText(s: { equation: string; multiplicity: number }): string {
+  return s.multiplicity > 1 ? `${s.multiplicity} × (${s.equation})` : s.equation;
+}
+
+/** "Cl + O3 -> ClO + O2; ClO + O -> Cl + O2 (net: O + O3 -> 2 O2)" */
+export function cycleDescription(result: AnalysisResult, cycle: CatalyticCycle): string {
+  return `${stepsInMechanismOrder(result, cycle).map(stepText).join("; ")} (net: ${cycle.netEquation})`;
+}
+
+export function lettered(items: { value: string; text: string }[]): Choice[] {
+  return items.map((it, i) => ({ letter: LETTERS[i], value: it.value, text: it.text }));
+}
+
+/** Canonical order of the families on a sheet; coupled and unknown ones follow alphabetically. */
+const FAMILY_ORDER = ["Ox", "HOx", "NOx", "ClOx", "BrOx"];
+
+export function sortFamilies(families: Iterable<string>): string[] {
+  const rank = (f: string) => {
+    const i = FAMILY_ORDER.indexOf(f);
+    return i < 0 ? FAMILY_ORDER.length : i;
+  };
+  return [...new Set(families)].sort((a, b) => rank(a) - rank(b) || a.localeCompare(b));
+}
+
+export function familyText(f: string): string {
+  if (f === "Ox") return "Ox (oxygen only)";
+  if (f.includes("-")) return `${f.replace(/-/g, "–")} (coupled)`;
+  return f;
+}
+
+/** "O, O(1D), O3" from the budget's definition. */
+export function oddOxygenText(result: AnalysisResult): string {
+  const def = result.cycles.budget.definition;
+  return def.length > 0 ? def.join(" + ") : "O + O(1D) + O3";
+}
+
+export function converged(result: AnalysisResult): string | null {
+  const s = result.steadyState;
+  return s.status === "converged" ? null : `the steady state did not converge (${s.status}: ${s.message})`;
+}

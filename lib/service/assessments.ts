@@ -1,0 +1,186 @@
+/**
+ * Assessments: validate the instructor's request, generate the variants with
+ * the engine pool (every analysis of every variant started at once), store
+ * two records under two unrelated random ids: "assessment" (everything, the
+ * key included; the instructor link) and "assessment-student" (questions and
+ * conditions only; the student link). Student routes read only the second.
+ */
+import "server-only";
+import { randomBytes } from "node:crypto";
+import { z } from "zod";
+import {
+  type AssessmentSpec,
+  type ClassMarks,
+  checkAgainstMechanism,
+  generateAssessment,
+  type InstructorAssessment,
+  markClass,
+  marksCsv,
+  parseAssessmentSpec,
+  type StudentAssessment,
+  sheetConditions,
+  studentView,
+} from "../assessment";
+import { sortFamilies, stepsInMechanismOrder, stepText } from "../assessment/templates/cycleText";
+import { enginePool } from "../engine/pool";
+import { conditionSchema, parseWith } from "../engine/request-schema";
+import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
+import { ENGINE_VERSION } from "../engine/version";
+import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { notFound } from "./http";
+import { mechanismDetail, mechanismSource } from "./mechanisms";
+
+export const ASSESSMENT_KIND = "assessment";
+export const STUDENT_KIND = "assessment-student";
+/** Largest assessment request, bytes. */
+export const MAX_ASSESSMENT_BODY = 64 * 1024;
+/** Largest answers upload, bytes. */
+export const MAX_ANSWERS_BODY = 1024 * 1024;
+
+export const instructorPath = (id: string) => `/assess/i/${id}`;
+export const studentPath = (id: string) => `/assess/s/${id}`;
+
+function analyser(mechanismId: string) {
+  const src = mechanismSource(mechanismId);
+  return async (request: AnalysisRequest): Promise<AnalysisResult> =>
+    (await enginePool().run({ kind: "analysis", mechanism: src, request })).result;
+}
+
+function offerOf(mechanismId: string) {
+  const m = mechanismDetail(mechanismId);
+  return {
+    title: m.title,
+    solvedSpecies: m.species.filter((s) => s.role === "solved").map((s) => s.id),
+    pools: m.pools.map((p) => p.id),
+  };
+}
+
+const previewSchema = z
+  .object({
+    mechanismId: z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected a mechanism id"),
+    condition: conditionSchema,
+  })
+  .strict();
+
+/** What the builder needs to offer questions: the cycles, families and species at the base condition. Nothing is stored. */
+export async function previewAssessment(body: unknown) {
+  const { mechanismId, condition } = parseWith(previewSchema, body) as {
+    mechanismId: string;
+    condition: ConditionInput;
+  };
+  const offer = offerOf(mechanismId);
+  const result = await analyser(mechanismId)({ mechanismId, condition });
+  return {
+    mechanism: result.mechanism,
+    status: result.steadyState.status,
+    message: result.steadyState.message,
+    conditions: sheetConditions(condition, result.condition),
+    families: sortFamilies(result.cycles.budget.byFamily.map((f) => f.family)),
+    cycles: result.cycles.cycles.map((c) => ({
+      id: c.id,
+      family: c.family,
+      netEquation: c.netEquation,
+      steps: stepsInMechanismOrder(result, c).map(stepText),
+      share: c.share,
+      hasChainLength: c.chainLength !== null && Number.isFinite(c.chainLength),
+    })),
+    solvedSpecies: offer.solvedSpecies,
+    pools: offer.pools,
+  };
+}
+
+export async function createAssessment(
+  body: unknown,
+): Promise<{
+  instructorId: string;
+  studentId: string;
+  instructorUrl: string;
+  studentUrl: string;
+  assessment: InstructorAssessment;
+}> {
+  const parsed = parseAssessmentSpec(body);
+  const offer = offerOf(parsed.mechanismId);
+  checkAgainstMechanism(parsed, offer);
+  const spec: AssessmentSpec & { seed: number } = { ...parsed, seed: parsed.seed ?? randomBytes(4).readUInt32BE(0) };
+  const generated = await generateAssessment(spec, { analyse: analyser(spec.mechanismId) });
+
+  const store = getStore();
+  const createdAt = new Date().toISOString();
+  const analyses: InstructorAssessment["analyses"] = [];
+  for (const a of generated.analyses) {
+    for (const [role, request, result] of [
+      ["base", a.baseRequest, a.base],
+      ["doubled-Cly", a.extraRequest, a.extra],
+    ] as const) {
+      if (!request || !result) continue;
+      const id = newRecordId();
+      store.putAnalysis({
+        id,
+        mechanismId: spec.mechanismId,
+        engineVersion: ENGINE_VERSION,
+        request,
+        result,
+        createdAt,
+      });
+      analyses.push({ variant: a.variant, role, analysisId: id });
+    }
+  }
+  const instructorId = newRecordId();
+  const studentId = newRecordId();
+  const assessment: InstructorAssessment = {
+    instructorId,
+    studentId,
+    title: spec.title,
+    instructions: generated.instructions,
+    spec,
+    mechanism: generated.mechanism,
+    engineVersion: ENGINE_VERSION,
+    createdAt,
+    variants: generated.variants,
+    questions: generated.questions,
+    key: generated.key,
+    analyses,
+    sheets: generated.sheets,
+    warnings: generated.warnings,
+  };
+  store.putRecord({
+    kind: STUDENT_KIND,
+    id: studentId,
+    engineVersion: ENGINE_VERSION,
+    body: studentView(assessment),
+    createdAt,
+  });
+  store.putRecord({
+    kind: ASSESSMENT_KIND,
+    id: instructorId,
+    engineVersion: ENGINE_VERSION,
+    body: assessment,
+    createdAt,
+  });
+  return {
+    instructorId,
+    studentId,
+    instructorUrl: instructorPath(instructorId),
+    studentUrl: studentPath(studentId),
+    assessment,
+  };
+}
+
+export function getInstructorAssessment(id: string): InstructorAssessment {
+  const r = ID_PATTERN.test(id) ? getStore().getRecord(ASSESSMENT_KIND, id) : null;
+  if (!r) throw notFound("assessment", id);
+  return r.body as InstructorAssessment;
+}
+
+/** Reads only the student record: the key is not in it. */
+export function getStudentAssessment(id: string): StudentAssessment {
+  const r = ID_PATTERN.test(id) ? getStore().getRecord(STUDENT_KIND, id) : null;
+  if (!r) throw notFound("student sheet", id);
+  return r.body as StudentAssessment;
+}
+
+export function markAssessment(id: string, csvText: string): ClassMarks & { csv: string } {
+  const a = getInstructorAssessment(id);
+  const marks = markClass(csvText, a.key, { variants: a.variants.length, questions: a.questions.length });
+  return { ...marks, csv: marksCsv(marks, a.questions.length) };
+}
