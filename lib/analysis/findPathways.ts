@@ -1,0 +1,285 @@
+/**
+ * Significant pathways of a reaction system from its reaction rates, after
+ * Lehmann, R. (2004), "An algorithm for the determination of all significant
+ * pathways in chemical reaction systems", J. Atmos. Chem. 47, 45–78.
+ *
+ * Every reaction with a non-zero rate starts as a pathway. Branching-point
+ * species are taken in order of increasing chemical lifetime τ = [X]/D(X)
+ * (only below a lifetime limit; species of interest and held species never).
+ * At each branching point b every pathway producing b (net coefficient p > 0)
+ * is connected with every pathway consuming it (−d < 0): multiplicities
+ * a·x_k + c·x_l with a·p = c·d = L (smallest integers), rate
+ * f_kl = (f_k p)(f_l d)/(T L), T = max(P_b, D_b), where P_b and D_b include
+ * the flux of pathways deleted earlier so that the branching probabilities
+ * are those of the full system. An imbalance P_b ≠ D_b (a held or
+ * pool-replaced species, a 24-hour average) is kept as a storage pathway (the
+ * producer's unconnected share, b still in its net) or a release pathway.
+ * New pathways below f_min, and the shares that would have connected to
+ * deleted pathways, are deleted with their net effect added to a per-species
+ * deleted budget, so that Σ kept f·net + deleted = Σ_j r_j S_j exactly.
+ * Non-elementary new pathways are split (elementaryModes.ts); pathways with
+ * identical multiplicity vectors are merged by key; null cycles (zero net
+ * effect on every species) are dropped and their total rate reported.
+ *
+ * Units: rates in molecules cm⁻³ s⁻¹, lifetimes in s.
+ */
+import { InputError } from "../errors";
+import type { CompiledMechanism } from "../mechanism/types";
+import type { SteadyState } from "../solver/types";
+import { decomposeElementary, isElementary } from "./elementaryModes";
+import { gcd, matchingMultipliers, rationalOrThrow } from "./rational";
+import { reactionNet } from "./reactionNet";
+import { axpy, type SparseVector, valueAt, weightedSum } from "./sparseVector";
+import type { Pathway, PathwayOptions, PathwaySet } from "./types";
+import { validateState } from "./validateState";
+
+export const PATHWAY_DEFAULTS: Required<Omit<PathwayOptions, "track">> = {
+  fmin_cm3s: 0,
+  notBranching: [],
+  lifetimeLimit_s: 1e7,
+  maxPathways: 50_000,
+};
+
+interface Work {
+  rx: number[];
+  mx: number[];
+  net: SparseVector;
+  rate: number;
+  key: string;
+}
+
+const keyOf = (rx: number[], mx: number[]) => rx.map((r, i) => `${r}*${mx[i]}`).join(",");
+
+export function findPathways(
+  mech: CompiledMechanism,
+  state: Pick<SteadyState, "numberDensity_cm3" | "rate_cm3s">,
+  options: PathwayOptions = {},
+): PathwaySet {
+  const opt = { ...PATHWAY_DEFAULTS, ...options };
+  const warnings = validateState(mech, state);
+  if (!(opt.fmin_cm3s >= 0) || !Number.isFinite(opt.fmin_cm3s))
+    throw new InputError("options.fmin_cm3s", `invalid threshold ${opt.fmin_cm3s}: give a finite rate ≥ 0`);
+  if (!(opt.lifetimeLimit_s > 0))
+    throw new InputError("options.lifetimeLimit_s", `invalid lifetime limit ${opt.lifetimeLimit_s}: give a time > 0 s`);
+  if (!(opt.maxPathways >= 1))
+    throw new InputError("options.maxPathways", `invalid limit ${opt.maxPathways}: give a count ≥ 1`);
+  for (const id of opt.notBranching)
+    if (mech.speciesIndex[id] === undefined)
+      throw new InputError("options.notBranching", `unknown species "${id}": not in mechanism "${mech.title}"`);
+
+  const nS = mech.species.length;
+  const nets = reactionNet(mech);
+  const rates = state.rate_cm3s.map((r) => Math.max(r, 0));
+  const fmin = opt.fmin_cm3s;
+  const tracked = Object.entries(options.track ?? {});
+
+  const deletedNet = new Float64Array(nS);
+  const deletedPos = new Float64Array(nS);
+  const deletedNeg = new Float64Array(nS);
+  const deletedTracked: Record<string, { produced_cm3s: number; destroyed_cm3s: number }> = {};
+  for (const [name] of tracked) deletedTracked[name] = { produced_cm3s: 0, destroyed_cm3s: 0 };
+  let nullRate = 0;
+
+  const remove = (rate: number, net: SparseVector) => {
+    if (!(rate > 0)) return;
+    for (let i = 0; i < net.idx.length; i++) {
+      const v = rate * net.val[i];
+      const s = net.idx[i];
+      deletedNet[s] += v;
+      if (v > 0) deletedPos[s] += v;
+      else deletedNeg[s] -= v;
+    }
+    for (const [name, w] of tracked) {
+      const dx = rate * weightedSum(net, w);
+      if (dx > 0) deletedTracked[name].produced_cm3s += dx;
+      else deletedTracked[name].destroyed_cm3s -= dx;
+    }
+  };
+
+  let current = new Map<string, Work>();
+  const add = (map: Map<string, Work>, w: Work) => {
+    if (w.net.idx.length === 0) {
+      nullRate += w.rate;
+      return;
+    }
+    if (w.rate < fmin) {
+      remove(w.rate, w.net);
+      return;
+    }
+    const old = map.get(w.key);
+    if (old) old.rate += w.rate;
+    else map.set(w.key, w);
+  };
+
+  // Gross production and loss by species, and the eligible branching points.
+  const P0 = new Float64Array(nS);
+  const D0 = new Float64Array(nS);
+  nets.forEach((net, j) => {
+    const r = rates[j];
+    if (!(r > 0)) return;
+    for (let i = 0; i < net.idx.length; i++) {
+      if (net.val[i] > 0) P0[net.idx[i]] += r * net.val[i];
+      else D0[net.idx[i]] -= r * net.val[i];
+    }
+    add(current, { rx: [j], mx: [1], net, rate: r, key: `${j}*1` });
+  });
+
+  const excluded = new Set(opt.notBranching.map((id) => mech.speciesIndex[id]));
+  const order = mech.species
+    .map((sp, i) => ({ i, tau: D0[i] > 0 ? state.numberDensity_cm3[i] / D0[i] : Number.POSITIVE_INFINITY, sp }))
+    .filter((c) => c.sp.role === "solved" && !excluded.has(c.i) && c.tau < opt.lifetimeLimit_s)
+    .sort((x, y) => x.tau - y.tau || x.i - y.i);
+
+  const processed = new Uint8Array(nS);
+  const storage: PathwaySet["storage"] = [];
+  let truncated = false;
+
+  for (const { i: b } of order) {
+    const producers: Work[] = [];
+    const consumers: Work[] = [];
+    const next = new Map<string, Work>();
+    let Pcur = 0;
+    let Dcur = 0;
+    for (const w of current.values()) {
+      const v = valueAt(w.net, b);
+      if (v > 0) {
+        producers.push(w);
+        Pcur += w.rate * v;
+      } else if (v < 0) {
+        consumers.push(w);
+        Dcur -= w.rate * v;
+      } else next.set(w.key, w);
+    }
+    processed[b] = 1;
+    const dP = deletedPos[b];
+    const dD = deletedNeg[b];
+    const P = Pcur + dP;
+    const D = Dcur + dD;
+    const T = Math.max(P, D);
+    storage.push({ species: mech.species[b].id, rate_cm3s: P - D });
+    if (!(T > 0)) {
+      current = next;
+      continue;
+    }
+    const pq = producers.map((w, k) =>
+      rationalOrThrow(valueAt(w.net, b), `pathway producing ${mech.species[b].id} [${k}]`),
+    );
+    const dq = consumers.map((w, l) =>
+      rationalOrThrow(-valueAt(w.net, b), `pathway consuming ${mech.species[b].id} [${l}]`),
+    );
+
+    const created = new Map<string, Work>();
+    producers.forEach((k, ik) => {
+      const fp = k.rate * (pq[ik][0] / pq[ik][1]);
+      consumers.forEach((l, il) => {
+        const fd = l.rate * (dq[il][0] / dq[il][1]);
+        const { a, c, L } = matchingMultipliers(pq[ik], dq[il]);
+        let rate = (fp * fd) / (T * L);
+        // merged multiplicities a·x_k + c·x_l, made coprime
+        const rx: number[] = [];
+        const mx: number[] = [];
+        let p = 0;
+        let q = 0;
+        while (p < k.rx.length || q < l.rx.length) {
+          const rk = p < k.rx.length ? k.rx[p] : Number.POSITIVE_INFINITY;
+          const rl = q < l.rx.length ? l.rx[q] : Number.POSITIVE_INFINITY;
+          if (rk === rl) {
+            rx.push(rk);
+            mx.push(a * k.mx[p++] + c * l.mx[q++]);
+          } else if (rk < rl) {
+            rx.push(rk);
+            mx.push(a * k.mx[p++]);
+          } else {
+            rx.push(rl);
+            mx.push(c * l.mx[q++]);
+          }
+        }
+        let g = 0;
+        for (const m of mx) g = gcd(g, m);
+        if (g > 1) for (let t = 0; t < mx.length; t++) mx[t] /= g;
+        rate *= g;
+        const net = axpy(a / g, k.net, c / g, l.net);
+        const key = keyOf(rx, mx);
+        const old = created.get(key);
+        if (old) old.rate += rate;
+        else created.set(key, { rx, mx, net, rate, key });
+      });
+      // unconnected shares: storage of b, and the share that fed deleted consumers
+      if (T > D) add(next, { ...k, rate: (k.rate * (T - D)) / T });
+      remove((k.rate * dD) / T, k.net);
+    });
+    for (const l of consumers) {
+      if (T > P) add(next, { ...l, rate: (l.rate * (T - P)) / T });
+      remove((l.rate * dP) / T, l.net);
+    }
+
+    for (const w of created.values()) {
+      if (next.has(w.key) || w.net.idx.length === 0) {
+        add(next, w);
+        continue;
+      }
+      const isRow = (s: number) => processed[s] === 1 && valueAt(w.net, s) === 0;
+      if (isElementary(w.rx, nets, isRow)) {
+        add(next, w);
+        continue;
+      }
+      const parts = decomposeElementary(
+        w.mx.map((m) => m * w.rate),
+        w.rx,
+        nets,
+        isRow,
+      );
+      if (!parts) {
+        warnings.push(
+          `a pathway through ${mech.species[b].id} could not be split into elementary pathways; kept whole`,
+        );
+        add(next, w);
+        continue;
+      }
+      for (const part of parts) {
+        const rx: number[] = [];
+        const mx: number[] = [];
+        let net: SparseVector = { idx: [], val: [] };
+        part.multiplicity.forEach((m, t) => {
+          if (m > 0) {
+            rx.push(w.rx[t]);
+            mx.push(m);
+            net = axpy(1, net, m, nets[w.rx[t]]);
+          }
+        });
+        add(next, { rx, mx, net, rate: part.rate, key: keyOf(rx, mx) });
+      }
+    }
+
+    if (next.size > opt.maxPathways) {
+      const sorted = [...next.values()].sort((x, y) => y.rate - x.rate);
+      for (const w of sorted.slice(opt.maxPathways)) {
+        remove(w.rate, w.net);
+        next.delete(w.key);
+      }
+      truncated = true;
+    }
+    current = next;
+  }
+  if (truncated)
+    warnings.push(
+      `more than ${opt.maxPathways} pathways at some branching point: the slowest were deleted (raise fminRelative to avoid this)`,
+    );
+
+  const pathways: Pathway[] = [...current.values()]
+    .sort((x, y) => y.rate - x.rate)
+    .map((w) => ({
+      steps: w.rx.map((reaction, t) => ({ reaction, multiplicity: w.mx[t] })),
+      rate_cm3s: w.rate,
+      net: w.net.idx.map((species, t) => ({ species, coef: w.net.val[t] })),
+    }));
+  return {
+    pathways,
+    branchingPoints: order.map((o) => mech.species[o.i].id),
+    fmin_cm3s: fmin,
+    deleted: { net_cm3s: Array.from(deletedNet), tracked: deletedTracked },
+    nullCycleRate_cm3s: nullRate,
+    storage,
+    warnings,
+  };
+}

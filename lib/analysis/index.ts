@@ -1,0 +1,10 @@
+export { analyseCycles, CYCLE_DEFAULTS } from "./analyseCycles";
+export { CARRIER_MEMBERS, FAMILY_ORDER, familiesOfSpecies, familyName } from "./carrierFamilies";
+export { describePathway, netEquation } from "./describePathway";
+export { directOxLoss, directOxWeights } from "./directOxLoss";
+export { dominantFluxPath } from "./dominantFluxPath";
+export { findPathways, PATHWAY_DEFAULTS } from "./findPathways";
+export { oxBudget } from "./oxBudget";
+export { EXTENDED_OX, oxWeights, STANDARD_OX } from "./oxWeights";
+export { reactionNode, speciesNode, speciesReactionGraph } from "./speciesReactionGraph";
+export type * from "./types";
