@@ -1,0 +1,44 @@
+import type { Metadata } from "next";
+import { Explorer } from "@/components/explorer";
+import { listMechanisms, mechanismDetail } from "@/lib/service/mechanisms";
+import { parseExplorerQuery } from "@/lib/viz/explorerQuery";
+import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Explorer · Ozone Loss Cycles" };
+
+type Search = Promise<Record<string, string | string[] | undefined>>;
+
+/** Reads the condition from the address and hands the explorer the mechanism list and the chosen mechanism. */
+export default async function ExplorePage({ searchParams }: { searchParams: Search }) {
+  const q = parseExplorerQuery(await searchParams);
+  const { mechanisms, mechanism } = loadMechanisms(q.mechanismId);
+  return (
+    <Explorer
+      mechanisms={mechanisms}
+      initialMechanism={mechanism}
+      mechanismId={q.mechanismId}
+      condition={q.condition}
+      view={q.view}
+      queryWarnings={q.warnings}
+    />
+  );
+}
+
+/** Server-side first look-up; on failure the explorer fetches them itself and shows the error where it happens. */
+export function loadMechanisms(id: string): { mechanisms: MechanismSummary[]; mechanism: MechanismView | null } {
+  let mechanisms: MechanismSummary[] = [];
+  let mechanism: MechanismView | null = null;
+  try {
+    mechanisms = listMechanisms().mechanisms;
+  } catch {
+    mechanisms = [];
+  }
+  try {
+    const d = mechanismDetail(id);
+    mechanism = { ...d, text: undefined } as MechanismView;
+  } catch {
+    mechanism = null;
+  }
+  return { mechanisms, mechanism };
+}

@@ -1,0 +1,297 @@
+"use client";
+/**
+ * Where and when: mechanism, altitude (T and p from the 1976 standard
+ * atmosphere unless overridden), the sun (latitude, date, local time, or a
+ * zenith angle), instantaneous or 24-hour, and the amounts held.
+ */
+import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
+import { formatNumber } from "@/lib/viz/formatNumber";
+import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
+import type { Problem } from "./api";
+import { MechanismPicker } from "./MechanismPicker";
+import { NumberField } from "./NumberField";
+import { Panel } from "./Panel";
+
+/** Amount fields offered when the mechanism has them: id, kind, display unit and factor to mol/mol. */
+const AMOUNTS: { id: string; kind: "pool" | "held"; unit: string; factor: number; label: string }[] = [
+  { id: "Cly", kind: "pool", unit: "ppbv", factor: 1e-9, label: "Cly total (Cl atoms)" },
+  { id: "Bry", kind: "pool", unit: "pptv", factor: 1e-12, label: "Bry total (Br atoms)" },
+  { id: "NOy", kind: "pool", unit: "ppbv", factor: 1e-9, label: "NOy total (N atoms)" },
+  { id: "H2O", kind: "held", unit: "ppmv", factor: 1e-6, label: "H2O" },
+  { id: "CH4", kind: "held", unit: "ppmv", factor: 1e-6, label: "CH4" },
+];
+
+interface Props {
+  mechanisms: MechanismSummary[];
+  mechanismId: string;
+  mechanism: MechanismView | null;
+  onMechanism(id: string): void;
+  onUploaded(m: { id: string; title: string; warnings: Problem[] }): void;
+  condition: ConditionInput;
+  onCondition(c: ConditionInput): void;
+  /** the condition as the last analysis resolved it (defaults filled) */
+  resolved: ResolvedCondition | null;
+  /** error message by condition field ("T_K", "poolTotals.Cly", …) */
+  fieldErrors: Record<string, string>;
+}
+
+const sig = (v: number, d = 4) => Number(v.toPrecision(d));
+
+export function ConditionsPanel(p: Props) {
+  const c = p.condition;
+  const set = (patch: Partial<ConditionInput>) => {
+    const next = { ...c, ...patch };
+    for (const k of Object.keys(patch) as (keyof ConditionInput)[]) if (patch[k] === undefined) delete next[k];
+    p.onCondition(next);
+  };
+  const sameAltitude = p.resolved && p.resolved.altitude_km === c.altitude_km;
+  const bySun = c.zenith_deg === undefined;
+  const M = p.resolved?.M_cm3;
+  const pools = new Set(p.mechanism?.pools.map((x) => x.id) ?? []);
+  const held = new Set(p.mechanism?.species.filter((s) => s.role === "held").map((s) => s.id) ?? []);
+  const amounts = AMOUNTS.filter((a) => (a.kind === "pool" ? pools.has(a.id) : held.has(a.id)));
+  const setAmount = (a: (typeof AMOUNTS)[number], v: number | undefined) => {
+    const key = a.kind === "pool" ? "poolTotals" : "held";
+    const rec = { ...(c[key] ?? {}) };
+    if (v === undefined) delete rec[a.id];
+    else rec[a.id] = sig(v * a.factor, 6);
+    set({ [key]: Object.keys(rec).length ? rec : undefined });
+  };
+
+  return (
+    <Panel title="Conditions" id="conditions-title" className="flex min-h-0 flex-col">
+      <form
+        className="min-h-0 space-y-3 overflow-y-auto px-3 py-2"
+        onSubmit={(e) => e.preventDefault()}
+        aria-label="Conditions"
+      >
+        <MechanismPicker
+          mechanisms={p.mechanisms}
+          mechanismId={p.mechanismId}
+          mechanism={p.mechanism}
+          onMechanism={p.onMechanism}
+          onUploaded={p.onUploaded}
+        />
+
+        <fieldset className="space-y-2">
+          <legend className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">
+            Place in the atmosphere
+          </legend>
+          <div>
+            <label htmlFor="altitude" className="flex items-baseline justify-between text-[12px] text-stone-600">
+              <span>Altitude</span>
+              <span className="tabular-nums text-[13px] font-semibold text-stone-900">
+                <output htmlFor="altitude" data-testid="altitude-value">
+                  {c.altitude_km}
+                </output>{" "}
+                km
+              </span>
+            </label>
+            <input
+              id="altitude"
+              type="range"
+              min={0}
+              max={60}
+              step={0.5}
+              value={Math.min(60, c.altitude_km)}
+              onChange={(e) => set({ altitude_km: Number(e.target.value) })}
+              className="mt-1 w-full accent-stone-800"
+              aria-valuetext={`${c.altitude_km} kilometres`}
+            />
+            <div className="flex justify-between text-[10px] text-stone-400" aria-hidden>
+              <span>0</span>
+              <span>15</span>
+              <span>30</span>
+              <span>45</span>
+              <span>60 km</span>
+            </div>
+            {p.fieldErrors.altitude_km ? (
+              <p role="alert" className="text-[11px] text-red-700">
+                {p.fieldErrors.altitude_km}
+              </p>
+            ) : null}
+          </div>
+          <div className="grid grid-cols-2 gap-2">
+            <NumberField
+              id="temperature"
+              label="Temperature"
+              unit="K"
+              value={c.T_K}
+              onChange={(v) => set({ T_K: v })}
+              placeholder={p.resolved && sameAltitude ? `${sig(p.resolved.T_K)} (std)` : "standard"}
+              error={p.fieldErrors.T_K}
+            />
+            <NumberField
+              id="pressure"
+              label="Pressure"
+              unit="hPa"
+              value={c.p_hPa}
+              onChange={(v) => set({ p_hPa: v })}
+              placeholder={p.resolved && sameAltitude ? `${sig(p.resolved.p_hPa)} (std)` : "standard"}
+              error={p.fieldErrors.p_hPa}
+            />
+          </div>
+          <p className="text-[11px] text-stone-500">
+            Empty fields use the U.S. Standard Atmosphere 1976 at this altitude
+            {M ? `; air density ${formatNumber(M)} cm⁻³` : ""}.
+          </p>
+        </fieldset>
+
+        <fieldset className="space-y-2">
+          <legend className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">Sun</legend>
+          <div className="flex gap-3 text-[12px]" role="radiogroup" aria-label="Sun position from">
+            <label className="flex items-center gap-1">
+              <input type="radio" name="sun" checked={bySun} onChange={() => set({ zenith_deg: undefined })} />
+              place and time
+            </label>
+            <label className="flex items-center gap-1">
+              <input
+                type="radio"
+                name="sun"
+                checked={!bySun}
+                onChange={() => set({ zenith_deg: sig(p.resolved?.zenith_deg ?? 45, 3) })}
+              />
+              zenith angle
+            </label>
+          </div>
+          {bySun ? (
+            <>
+              <div className="grid grid-cols-2 gap-2">
+                <NumberField
+                  id="latitude"
+                  label="Latitude"
+                  unit="°N"
+                  value={c.latitude_deg}
+                  onChange={(v) => set({ latitude_deg: v })}
+                  placeholder="45"
+                  error={p.fieldErrors.latitude_deg}
+                />
+                <div>
+                  <label htmlFor="date" className="text-[12px] text-stone-600">
+                    Date
+                  </label>
+                  <input
+                    id="date"
+                    type="date"
+                    value={c.date ?? ""}
+                    onChange={(e) => set({ date: e.target.value || undefined })}
+                    className="mt-0.5 w-full rounded border border-stone-300 bg-white px-1 py-[3px] text-[13px] focus:outline-2 focus:outline-stone-800"
+                  />
+                  {p.fieldErrors.date ? (
+                    <p role="alert" className="text-[11px] text-red-700">
+                      {p.fieldErrors.date}
+                    </p>
+                  ) : null}
+                </div>
+              </div>
+              {c.mode !== "diurnal" ? (
+                <div>
+                  <label htmlFor="time" className="flex items-baseline justify-between text-[12px] text-stone-600">
+                    <span>Local solar time</span>
+                    <span className="tabular-nums font-semibold text-stone-900">
+                      {formatTime(c.localSolarTime_h ?? 12)}
+                    </span>
+                  </label>
+                  <input
+                    id="time"
+                    type="range"
+                    min={0}
+                    max={24}
+                    step={0.25}
+                    value={c.localSolarTime_h ?? 12}
+                    onChange={(e) => set({ localSolarTime_h: Number(e.target.value) })}
+                    className="w-full accent-stone-800"
+                    aria-valuetext={formatTime(c.localSolarTime_h ?? 12)}
+                  />
+                </div>
+              ) : null}
+              {p.resolved && c.mode !== "diurnal" ? (
+                <p className="text-[11px] text-stone-500">
+                  Solar zenith angle {sig(p.resolved.zenith_deg, 3)}°
+                  {p.resolved.zenith_deg >= 90 ? " (sun below the horizon)" : ""}; ozone column above{" "}
+                  {sig(p.resolved.o3ColumnAbove_DU, 3)} DU.
+                </p>
+              ) : null}
+            </>
+          ) : (
+            <NumberField
+              id="zenith"
+              label="Solar zenith angle"
+              unit="°"
+              value={c.zenith_deg}
+              onChange={(v) => set({ zenith_deg: v ?? 45 })}
+              error={p.fieldErrors.zenith_deg}
+              hint="0° = sun overhead; above 90° = night."
+            />
+          )}
+          <div className="flex gap-3 text-[12px]" role="radiogroup" aria-label="Averaging">
+            <label className="flex items-center gap-1">
+              <input
+                type="radio"
+                name="mode"
+                checked={c.mode !== "diurnal"}
+                onChange={() => set({ mode: "instantaneous" })}
+              />
+              instantaneous
+            </label>
+            <label className="flex items-center gap-1">
+              <input
+                type="radio"
+                name="mode"
+                checked={c.mode === "diurnal"}
+                onChange={() => set({ mode: "diurnal" })}
+              />
+              24-hour average
+            </label>
+          </div>
+        </fieldset>
+
+        <fieldset className="space-y-2">
+          <legend className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">Amounts held</legend>
+          {amounts.length === 0 ? (
+            <p className="text-[11px] text-stone-500">This mechanism holds no pool totals.</p>
+          ) : null}
+          <div className="grid grid-cols-2 gap-2">
+            {amounts.map((a) => {
+              const key = a.kind === "pool" ? "poolTotals" : "held";
+              const mr = c[key]?.[a.id];
+              const used = a.kind === "pool" ? p.resolved?.poolTotals_cm3[a.id] : p.resolved?.held_cm3[a.id];
+              return (
+                <NumberField
+                  key={a.id}
+                  id={`amount-${a.id}`}
+                  label={a.label}
+                  unit={a.unit}
+                  value={mr === undefined ? undefined : sig(mr / a.factor, 6)}
+                  onChange={(v) => setAmount(a, v)}
+                  placeholder={used !== undefined && M ? `${sig(used / M / a.factor, 3)}` : "default"}
+                  error={p.fieldErrors[`${key}.${a.id}`]}
+                />
+              );
+            })}
+          </div>
+          <div className="flex items-center gap-2 text-[12px]">
+            <label htmlFor="ozone" className="text-stone-600">
+              Ozone
+            </label>
+            <select
+              id="ozone"
+              value={c.ozone ?? "held"}
+              onChange={(e) => set({ ozone: e.target.value === "solved" ? "solved" : undefined })}
+              className="rounded border border-stone-300 bg-white px-1 py-0.5 focus:outline-2 focus:outline-stone-800"
+            >
+              <option value="held">held at the climatology</option>
+              <option value="solved">solved for steady state</option>
+            </select>
+          </div>
+        </fieldset>
+      </form>
+    </Panel>
+  );
+}
+
+function formatTime(h: number): string {
+  const hh = Math.floor(h);
+  const mm = Math.round((h - hh) * 60);
+  return `${String(hh).padStart(2, "0")}:${String(mm).padStart(2, "0")}`;
+}

@@ -1,0 +1,76 @@
+"use client";
+/** Choose a built-in or uploaded mechanism, or upload a new one. */
+import { useState } from "react";
+import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
+import type { Problem } from "./api";
+import { UploadBox } from "./UploadBox";
+
+interface Props {
+  mechanisms: MechanismSummary[];
+  mechanismId: string;
+  mechanism: MechanismView | null;
+  onMechanism(id: string): void;
+  onUploaded(m: { id: string; title: string; warnings: Problem[] }): void;
+}
+
+export function MechanismPicker({ mechanisms, mechanismId, mechanism, onMechanism, onUploaded }: Props) {
+  const [uploading, setUploading] = useState(false);
+  const builtins = mechanisms.filter((m) => m.builtin);
+  const uploads = mechanisms.filter((m) => !m.builtin);
+  const known = mechanisms.some((m) => m.id === mechanismId);
+  const current = mechanisms.find((m) => m.id === mechanismId);
+  return (
+    <div>
+      <label htmlFor="mechanism" className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">
+        Mechanism
+      </label>
+      <div className="mt-0.5 flex gap-1">
+        <select
+          id="mechanism"
+          value={mechanismId}
+          onChange={(e) => onMechanism(e.target.value)}
+          className="min-w-0 flex-1 rounded border border-stone-300 bg-white px-1 py-1 text-[13px] focus:outline-2 focus:outline-stone-800"
+        >
+          {!known ? <option value={mechanismId}>{mechanism?.title ?? mechanismId}</option> : null}
+          <optgroup label="Built-in">
+            {builtins.map((m) => (
+              <option key={m.id} value={m.id}>
+                {m.title}
+              </option>
+            ))}
+          </optgroup>
+          {uploads.length ? (
+            <optgroup label="Uploaded">
+              {uploads.map((m) => (
+                <option key={m.id} value={m.id}>
+                  {m.title}
+                </option>
+              ))}
+            </optgroup>
+          ) : null}
+        </select>
+        <button
+          type="button"
+          aria-expanded={uploading}
+          onClick={() => setUploading((u) => !u)}
+          className="shrink-0 rounded border border-stone-300 bg-white px-2 text-[12px] hover:border-stone-500 focus:outline-2 focus:outline-stone-800"
+        >
+          Upload…
+        </button>
+      </div>
+      <p className="mt-0.5 text-[11px] text-stone-500">
+        {current ? `${current.speciesCount} species, ${current.reactionCount} reactions. ` : ""}
+        {current?.description ?? mechanism?.description ?? ""}
+      </p>
+      {uploading ? (
+        <UploadBox
+          onClose={() => setUploading(false)}
+          onUploaded={(m) => {
+            setUploading(false);
+            onUploaded(m);
+          }}
+        />
+      ) : null}
+    </div>
+  );
+}

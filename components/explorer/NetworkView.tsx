@@ -1,0 +1,166 @@
+"use client";
+/**
+ * The cytoscape canvas. Elements, positions and the stylesheet come from
+ * lib/viz; this component only keeps one cytoscape instance per mechanism in
+ * step with them (data updated in place, so the view does not jump when the
+ * numbers change) and reports clicks.
+ */
+import type { Core, ElementDefinition, StylesheetJson } from "cytoscape";
+import { forwardRef, useEffect, useImperativeHandle, useRef } from "react";
+import type { Highlight } from "@/lib/viz/cycleHighlight";
+import type { StyleRule } from "@/lib/viz/networkStyle";
+import type { GraphElement, Point } from "@/lib/viz/types";
+
+export interface NetworkHandle {
+  /** PNG of the whole graph as a Blob */
+  png(): Promise<Blob | null>;
+  /** current node positions by id, px */
+  positions(): Record<string, Point>;
+  fit(): void;
+}
+
+interface Props {
+  layoutKey: string;
+  elements: GraphElement[];
+  stylesheet: StyleRule[];
+  highlight: Highlight;
+  selected: string | null;
+  onSelect(id: string | null): void;
+}
+
+declare global {
+  interface Window {
+    /** read-only view of the canvas for the browser tests */
+    __ozoneNetwork?: {
+      edges(): { id: string; color: string; width: number; classes: string[] }[];
+      nodes(): { id: string; classes: string[] }[];
+    };
+  }
+}
+
+export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView(
+  { layoutKey, elements, stylesheet, highlight, selected, onSelect },
+  ref,
+) {
+  const box = useRef<HTMLDivElement>(null);
+  const cyRef = useRef<Core | null>(null);
+  const latest = useRef({ elements, highlight, selected, onSelect });
+  latest.current = { elements, highlight, selected, onSelect };
+
+  useImperativeHandle(ref, () => ({
+    async png() {
+      const cy = cyRef.current;
+      if (!cy) return null;
+      return cy.png({ output: "blob-promise", full: true, scale: 2, bg: "#ffffff" });
+    },
+    positions() {
+      const out: Record<string, Point> = {};
+      cyRef.current?.nodes().forEach((n) => {
+        if (n.data("kind") !== "frame") out[n.id()] = { ...n.position() };
+      });
+      return out;
+    },
+    fit() {
+      cyRef.current?.fit(undefined, 24);
+    },
+  }));
+
+  // one instance per mechanism layout
+  // biome-ignore lint/correctness/useExhaustiveDependencies: recreated only when the mechanism changes
+  useEffect(() => {
+    let cancelled = false;
+    let cy: Core | null = null;
+    import("cytoscape").then(({ default: cytoscape }) => {
+      if (cancelled || !box.current) return;
+      cy = cytoscape({
+        container: box.current,
+        elements: latest.current.elements as unknown as ElementDefinition[],
+        style: stylesheet as unknown as StylesheetJson,
+        layout: { name: "preset" },
+        minZoom: 0.15,
+        maxZoom: 4,
+        wheelSensitivity: 0.3,
+        boxSelectionEnabled: false,
+        autoungrabify: false,
+        selectionType: "single",
+      });
+      cy.fit(undefined, 24);
+      cy.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
+      cy.on("tap", (ev) => {
+        if (ev.target === cy) latest.current.onSelect(null);
+      });
+      cyRef.current = cy;
+      window.__ozoneNetwork = {
+        edges: () =>
+          (cyRef.current?.edges().map((e) => ({
+            id: e.id(),
+            color: e.data("color"),
+            width: e.data("width"),
+            classes: e.classes(),
+          })) ?? []) as { id: string; color: string; width: number; classes: string[] }[],
+        nodes: () => cyRef.current?.nodes().map((n) => ({ id: n.id(), classes: n.classes() })) ?? [],
+      };
+      apply(cy, latest.current.elements, latest.current.highlight, latest.current.selected);
+      box.current.dataset.ready = "true";
+    });
+    return () => {
+      cancelled = true;
+      cy?.destroy();
+      cyRef.current = null;
+      if (box.current) box.current.dataset.ready = "false";
+    };
+  }, [layoutKey]);
+
+  useEffect(() => {
+    if (cyRef.current) apply(cyRef.current, elements, highlight, selected);
+  }, [elements, highlight, selected]);
+
+  return (
+    <div
+      ref={box}
+      data-testid="network"
+      className="absolute inset-0"
+      role="img"
+      aria-label="Reaction network: species chips grouped by family, reaction hexagons between them; click one to inspect it"
+    />
+  );
+});
+
+function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): void {
+  cy.batch(() => {
+    const want = new Set(elements.map((e) => e.data.id));
+    cy.elements().forEach((el) => {
+      if (!want.has(el.id())) el.remove();
+    });
+    // frames first so that children find their parent
+    const sorted = [...elements].sort((a, b) => rank(a) - rank(b));
+    for (const el of sorted) {
+      const ex = cy.getElementById(el.data.id);
+      if (ex.nonempty()) {
+        // id, parent and edge ends are fixed for a given layout; cytoscape refuses to change them through data()
+        const { id: _id, ...rest } = el.data as unknown as Record<string, unknown>;
+        delete rest.parent;
+        delete rest.source;
+        delete rest.target;
+        ex.data(rest);
+        ex.classes(el.classes);
+      } else {
+        cy.add(el as unknown as ElementDefinition);
+      }
+    }
+    const on = new Set(hl.on);
+    if (on.size) {
+      cy.elements().forEach((el) => {
+        const lit = on.has(el.id());
+        el.toggleClass("hl", lit);
+        el.toggleClass("dim", !lit);
+      });
+    } else {
+      cy.elements().removeClass("hl dim");
+    }
+    cy.elements().unselect();
+    if (selected) cy.getElementById(selected).select();
+  });
+}
+
+const rank = (e: GraphElement) => (e.data.kind === "frame" ? 0 : e.group === "nodes" ? 1 : 2);

@@ -1,0 +1,67 @@
+/** Above the network: colour mode, held species, fit, and the status of the analysis. */
+import type { ColorMode } from "@/lib/viz/types";
+
+interface Props {
+  colorMode: ColorMode;
+  onColorMode(m: ColorMode): void;
+  showHeld: boolean;
+  onShowHeld(v: boolean): void;
+  onFit(): void;
+  loading: boolean;
+  status: string | null;
+}
+
+const seg = (on: boolean) =>
+  `px-2 py-0.5 text-[12px] focus-within:outline-2 focus-within:outline-stone-800 cursor-pointer ${on ? "bg-stone-800 text-white" : "bg-white text-stone-700 hover:bg-stone-100"}`;
+
+export function Toolbar({ colorMode, onColorMode, showHeld, onShowHeld, onFit, loading, status }: Props) {
+  return (
+    <div className="flex flex-wrap items-center gap-x-4 gap-y-1">
+      <fieldset className="flex items-center gap-1.5">
+        <legend className="sr-only">Colour the network by</legend>
+        <span className="text-[12px] text-stone-500" aria-hidden>
+          Colour by
+        </span>
+        <span className="flex overflow-hidden rounded border border-stone-400">
+          <label className={seg(colorMode === "flux")}>
+            <input
+              type="radio"
+              name="color-mode"
+              value="flux"
+              className="sr-only"
+              checked={colorMode === "flux"}
+              onChange={() => onColorMode("flux")}
+            />
+            reaction rate
+          </label>
+          <label className={`${seg(colorMode === "ox")} border-l border-stone-400`}>
+            <input
+              type="radio"
+              name="color-mode"
+              value="ox"
+              className="sr-only"
+              checked={colorMode === "ox"}
+              onChange={() => onColorMode("ox")}
+            />
+            ozone destroyed
+          </label>
+        </span>
+      </fieldset>
+      <label className="flex items-center gap-1 text-[12px] text-stone-700">
+        <input type="checkbox" checked={showHeld} onChange={(e) => onShowHeld(e.target.checked)} />
+        show held species
+      </label>
+      <button
+        type="button"
+        onClick={onFit}
+        className="rounded border border-stone-300 bg-white px-2 py-0.5 text-[12px] hover:border-stone-500 focus:outline-2 focus:outline-stone-800"
+      >
+        Fit to view
+      </button>
+      <p data-testid="status" aria-live="polite" className="ml-auto min-w-0 truncate text-[11px] text-stone-500">
+        {loading ? "Computing… " : ""}
+        {status ?? (loading ? "" : "No analysis yet")}
+      </p>
+    </div>
+  );
+}

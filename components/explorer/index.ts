@@ -1,0 +1,1 @@
+export { Explorer, type StoredAnalysis } from "./Explorer";
