@@ -134,6 +134,9 @@ export const fixtureResult: AnalysisResult = {
         efficiency: 0.89,
         rateLimitingStep: "C2",
         chainLength: 400,
+        entryStep: "C2",
+        chainCarrier: "ClOx",
+        net: { O: -1, O3: -1, O2: 2 },
       },
       {
         id: "K3",
@@ -148,6 +151,9 @@ export const fixtureResult: AnalysisResult = {
         efficiency: 1,
         rateLimitingStep: "K3",
         chainLength: null,
+        entryStep: "K3",
+        chainCarrier: null,
+        net: { O: -1, O3: -1, O2: 2 },
       },
       {
         id: "2C1+C3+C4",
@@ -166,6 +172,9 @@ export const fixtureResult: AnalysisResult = {
         efficiency: 0.05,
         rateLimitingStep: "C3",
         chainLength: 25,
+        entryStep: "C3",
+        chainCarrier: "ClOx",
+        net: { O3: -2, O2: 3 },
       },
     ],
     budget: {
@@ -178,6 +187,15 @@ export const fixtureResult: AnalysisResult = {
       ],
       directLoss_cm3s: 2.9e6,
       unassignedLoss_cm3s: 2.0e4,
+      unassignedProduction_cm3s: 0,
+      weights: { O: 1, "O(1D)": 1, O3: 1 },
+      netChange_cm3s: -2.52e6,
+      directTerms: [
+        { reactionId: "C2", equation: "ClO + O -> Cl + O2", weight: 2, loss_cm3s: 1.6e6 },
+        { reactionId: "K3", equation: "O + O3 -> 2 O2", weight: 2, loss_cm3s: 1.2e6 },
+        { reactionId: "C3", equation: "2 ClO + M -> Cl2O2 + M", weight: 2, loss_cm3s: 1.0e5 },
+      ],
+      directMismatch: 0.0069,
     },
     perReaction: [
       { reactionId: "J1", oxDestroyed_cm3s: 0, netOxChange_cm3s: 4.0e5 },
@@ -195,6 +213,19 @@ export const fixtureResult: AnalysisResult = {
     pathwayCount: 3,
     fmin_cm3s: 292,
     warnings: [],
+    otherLossPathways: [],
+    branchingPoints: ["O(1D)", "Cl", "ClO"],
+    carrierFamilies: [
+      {
+        family: "ClOx",
+        members: { Cl: 1, ClO: 1, Cl2O2: 2 },
+        lossToReservoirs_cm3s: 2.0e3,
+        productionFromReservoirs_cm3s: 2.0e3,
+      },
+    ],
+    nullCycleRate_cm3s: 2.4e7,
+    oxDefinition: "standard",
+    heldTendencies: [{ species: "O3", tendency_cm3s: -2.52e6 }],
   },
   elapsed_ms: 12,
 };
