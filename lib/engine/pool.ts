@@ -41,9 +41,19 @@ export class EnginePool {
     for (let i = 0; i < options.size; i++) this.slots.push(this.spawn());
   }
 
-  run(job: EngineJob, timeout_ms = this.options.timeout_ms): Promise<EngineJobResult> {
+  /** Runs a job in a worker; the result has the job's kind. */
+  run<K extends EngineJob["kind"]>(
+    job: Extract<EngineJob, { kind: K }>,
+    timeout_ms = this.options.timeout_ms,
+  ): Promise<Extract<EngineJobResult, { kind: K }>> {
     return new Promise((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, job, timeout_ms, resolve, reject });
+      this.queue.push({
+        id: this.nextId++,
+        job,
+        timeout_ms,
+        resolve: resolve as (v: EngineJobResult) => void,
+        reject,
+      });
       this.dispatch();
     });
   }

@@ -55,7 +55,7 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
   const zenith_deg =
     input.zenith_deg ?? solarZenithAngle({ latitude_deg, dayOfYear: doy, localSolarTime_h: localSolarTime_h });
 
-  const clim = climatologyAt(z);
+  const clim: Readonly<Record<string, number>> = climatologyAt(z);
   const held_cm3: Record<string, number> = {};
   for (const sp of mech.species) {
     if (sp.role !== "held" && !(sp.id === "O3" && ozone === "held")) continue;
