@@ -3,13 +3,19 @@
  * boundary. `runJob` executes one in the current thread.
  */
 import { EngineError } from "../errors";
+import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
 import { compileSource, type MechanismSource } from "./mechanism-source";
 import { runAnalysis } from "./run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "./types";
 
-export type EngineJob = { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] };
+export type EngineJob =
+  | { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] }
+  /** neighbouring levels of a profile sweep, each warm-started from the one before (lib/profiles) */
+  | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch };
 
-export type EngineJobResult = { kind: "analysis"; result: AnalysisResult };
+export type EngineJobResult =
+  | { kind: "analysis"; result: AnalysisResult }
+  | { kind: "profile-levels"; result: LevelBatchResult };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -20,6 +26,13 @@ export function runJob(job: EngineJob): EngineJobResult {
         result: runAnalysis(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.request, {
           initialState: job.initialState,
         }),
+      };
+    }
+    case "profile-levels": {
+      const mech = compileSource(job.mechanism);
+      return {
+        kind: "profile-levels",
+        result: runLevelBatch(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.batch),
       };
     }
     default:
