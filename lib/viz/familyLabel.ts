@@ -8,6 +8,9 @@ const LABELS: Record<string, string> = {
   reservoir: "Reservoirs",
   source: "Source gases",
   held: "Held species",
+  bath: "Bath gases",
+  organic: "Organic radicals",
+  product: "End products",
   other: "Other species",
 };
 

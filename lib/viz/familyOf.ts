@@ -8,7 +8,20 @@
 import type { MechanismSpeciesView } from "./types";
 
 /** Families in display order; unknown groups follow, sorted by name. */
-export const FAMILY_ORDER = ["Ox", "HOx", "NOx", "ClOx", "BrOx", "reservoir", "source", "held", "other"] as const;
+export const FAMILY_ORDER = [
+  "Ox",
+  "HOx",
+  "NOx",
+  "ClOx",
+  "BrOx",
+  "reservoir",
+  "source",
+  "organic",
+  "bath",
+  "held",
+  "product",
+  "other",
+] as const;
 
 const ALIASES: Record<string, string> = {
   ox: "Ox",
@@ -24,6 +37,10 @@ const ALIASES: Record<string, string> = {
   source: "source",
   sources: "source",
   held: "held",
+  bath: "bath",
+  organic: "organic",
+  product: "product",
+  products: "product",
   other: "other",
 };
 

@@ -25,6 +25,7 @@ const HUES: Record<string, number> = {
   BrOx: 20,
   reservoir: 250,
   source: 95,
+  organic: 165,
 };
 
 export function familyStyle(family: string): FamilyStyle {

@@ -1,0 +1,181 @@
+import { expect, type Page, test } from "@playwright/test";
+
+/**
+ * The explorer as a new user meets it, in real Chromium: open it, move the
+ * altitude, switch the colour mode, pick a cycle, reopen the permalink, upload
+ * a broken mechanism. Screenshots go to test-results/screenshots/.
+ */
+
+const shot = (page: Page, name: string) => page.screenshot({ path: `test-results/screenshots/${name}.png` });
+
+type EdgeInfo = { id: string; color: string; width: number; classes: string[] };
+const edges = (page: Page) => page.evaluate(() => window.__ozoneNetwork?.edges() ?? []) as Promise<EdgeInfo[]>;
+const nodes = (page: Page) =>
+  page.evaluate(() => window.__ozoneNetwork?.nodes() ?? []) as Promise<{ id: string; classes: string[] }[]>;
+
+async function openExplorer(page: Page, query: string) {
+  await page.goto(`/explore?${query}`);
+  await expect(page.getByTestId("network")).toHaveAttribute("data-ready", "true", { timeout: 30_000 });
+  await expect(page.getByTestId("status")).toContainText("converged", { timeout: 60_000 });
+  await expect(page.getByTestId("computing")).toHaveCount(0);
+}
+
+/** The numbers a reader takes away: the budget rows and the cycle rows. */
+async function numbers(page: Page) {
+  return {
+    budget: await page.getByTestId("budget").innerText(),
+    cycles: await page.getByTestId("cycles").innerText(),
+  };
+}
+
+test("the explorer opens with a network, cycles and a budget at the conditions in its address", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=40&lat=45&date=2026-03-20&t=12&mode=instantaneous");
+  await expect(page.getByRole("heading", { name: "Conditions" })).toBeVisible();
+  await expect(page.getByLabel("Altitude")).toHaveValue("40");
+  await expect(page.getByTestId("status")).toContainText("40 km");
+  await expect(page.getByTestId("cycle").first()).toBeVisible();
+  await expect(page.getByTestId("budget")).toContainText("Ox loss");
+  await expect(page.getByTestId("legend")).toContainText("molecules cm⁻³ s⁻¹");
+  const e = await edges(page);
+  expect(e.length).toBeGreaterThan(50);
+  await shot(page, "explorer-40km");
+});
+
+test("moving the altitude slider recomputes, changes the numbers and the address, and keeps the layout", async ({
+  page,
+}) => {
+  await openExplorer(page, "m=reference&z=30");
+  const before = await numbers(page);
+  const widthsBefore = (await edges(page)).map((e) => e.width);
+  const slider = page.getByLabel("Altitude");
+  await slider.focus();
+  for (let i = 0; i < 20; i++) await page.keyboard.press("ArrowRight");
+  await expect(page.getByTestId("altitude-value")).toHaveText("40");
+  await expect(page.getByTestId("status")).toContainText("40 km", { timeout: 60_000 });
+  await expect(page.getByTestId("computing")).toHaveCount(0);
+  const after = await numbers(page);
+  expect(after.budget).not.toBe(before.budget);
+  expect((await edges(page)).map((e) => e.width)).not.toEqual(widthsBefore);
+  await expect(page).toHaveURL(/[?&]z=40(&|$)/);
+  await shot(page, "explorer-after-slider");
+});
+
+test("switching the colour mode recolours the edges and the legend", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=35");
+  const flux = await edges(page);
+  await page.getByText("ozone destroyed", { exact: true }).click();
+  await expect(page.getByTestId("legend")).toContainText("Ox produced");
+  await expect(page).toHaveURL(/color=ox/);
+  const ox = await edges(page);
+  expect(ox.map((e) => e.id)).toEqual(flux.map((e) => e.id));
+  const changed = ox.filter((e, i) => e.color !== flux[i].color).length;
+  expect(changed).toBeGreaterThan(flux.length / 4);
+  await shot(page, "explorer-ox-mode");
+});
+
+test("selecting a cycle lights its steps in the graph and dims the rest", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=40");
+  const first = page.getByTestId("cycle").first();
+  const button = first.getByRole("button").first();
+  await button.click();
+  await expect(button).toHaveAttribute("aria-pressed", "true");
+  await expect(page).toHaveURL(/cycle=/);
+  const steps = await first.locator("table tbody tr").count();
+  expect(steps).toBeGreaterThan(0);
+  const n = await nodes(page);
+  const lit = n.filter((x) => x.classes.includes("hl") && x.id.startsWith("r:"));
+  const dim = n.filter((x) => x.classes.includes("dim"));
+  expect(lit.length).toBe(steps);
+  expect(dim.length).toBeGreaterThan(n.length / 2);
+  await shot(page, "explorer-cycle-selected");
+  // the same button turns it off again
+  await button.click();
+  await expect(button).toHaveAttribute("aria-pressed", "false");
+  expect((await nodes(page)).some((x) => x.classes.includes("dim"))).toBe(false);
+});
+
+test("a species and a reaction can be inspected", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=40&sel=s%3AClO");
+  const insp = page.getByTestId("inspector");
+  await expect(insp).toContainText("number density");
+  await expect(insp).toContainText("Lost by");
+  await insp.getByRole("button").filter({ hasText: "->" }).first().click();
+  await expect(insp).toContainText("k at these conditions");
+  await expect(insp).toContainText("source");
+  await shot(page, "explorer-inspector");
+});
+
+test("the permalink opens in a fresh page with the same numbers", async ({ page, browser }) => {
+  await openExplorer(page, "m=reference&z=42&lat=30&date=2026-06-21&t=10");
+  const link = await page.getByTestId("permalink").inputValue();
+  expect(link).toMatch(/\/a\/[\w-]+$/);
+  const original = await numbers(page);
+  const fresh = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+  const other = await fresh.newPage();
+  await other.goto(link);
+  await expect(other.getByTestId("stored-banner")).toBeVisible();
+  await expect(other.getByTestId("network")).toHaveAttribute("data-ready", "true", { timeout: 30_000 });
+  expect(await numbers(other)).toEqual(original);
+  await expect(other.getByLabel("Altitude")).toHaveValue("42");
+  await shot(other, "permalink");
+  await fresh.close();
+});
+
+test("an unknown permalink says so", async ({ page }) => {
+  const res = await page.goto("/a/does-not-exist-0000");
+  expect(res?.status()).toBe(404);
+  await expect(page.getByRole("heading", { level: 1 })).toContainText("No stored analysis");
+});
+
+test("a broken mechanism upload shows the problem at its line", async ({ page }) => {
+  await openExplorer(page, "m=oxygen&z=30");
+  const doc = [
+    "title: Broken test document (invented)",
+    'version: "0.1"',
+    "description: an upload with an unknown species",
+    "species:",
+    "  - { id: O2, role: held, group: bath, mixingRatio: 0.2095 }",
+    "  - { id: M, role: third-body }",
+    "  - { id: O, role: solved, group: Ox }",
+    "  - { id: O3, role: solved, group: Ox }",
+    "reactions:",
+    "  - id: J1",
+    "    equation: O2 + hv -> 2 O",
+    "    rate: { law: photolysis, channel: O2 }",
+    "  - id: K1",
+    "    equation: O + O2 + M -> O3 + M",
+    "    rate: { law: termolecular, k0: 6.0e-34, n: 2.4 }",
+    "  - id: K2",
+    "    equation: O + Xq3 -> 2 O2",
+    "    rate: { law: arrhenius, A: 8.0e-12, E/R: 2060 }",
+  ].join("\n");
+  const badLine = 17;
+  await page.getByRole("button", { name: "Upload…" }).click();
+  await page.getByLabel("Mechanism document (YAML or JSON)").fill(doc);
+  await page.getByRole("button", { name: "Check and use" }).click();
+  const problems = page.getByTestId("upload-problems");
+  await expect(problems).toBeVisible();
+  await expect(problems).toContainText("did not accept");
+  const marked = problems.locator(`[data-line="${badLine}"][data-problem]`);
+  await expect(marked).toBeVisible();
+  await expect(marked).toContainText("Xq3");
+  await shot(page, "upload-error");
+});
+
+test("a bad condition is reported beside its field", async ({ page }) => {
+  await openExplorer(page, "m=oxygen&z=30");
+  await page.getByLabel("Temperature").fill("900");
+  const field = page.locator("#temperature-error");
+  await expect(field).toBeVisible({ timeout: 30_000 });
+  await expect(field).toContainText("temperature");
+  await shot(page, "condition-error");
+});
+
+test("the page stays usable on a narrow screen", async ({ page }) => {
+  await page.setViewportSize({ width: 420, height: 900 });
+  await openExplorer(page, "m=oxygen-chlorine&z=40");
+  await expect(page.getByLabel("Altitude")).toBeVisible();
+  await page.getByTestId("cycles").scrollIntoViewIfNeeded();
+  await expect(page.getByTestId("cycle").first()).toBeVisible();
+  await page.screenshot({ path: "test-results/screenshots/narrow.png", fullPage: true });
+});
