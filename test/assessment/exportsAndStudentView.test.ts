@@ -105,8 +105,8 @@ describe("the key exports", () => {
     ]);
     expect(rows).toHaveLength(61);
     const q3 = rows.find((r) => r[0] === "1" && r[2] === "3") as string[];
-    const k3 = a.key.find((k) => k.variant === 1 && k.question === 3);
-    expect(Number(q3[4])).toBe(Number((k3?.value as number).toPrecision(8)));
+    const k3 = a.key.find((k) => k.variant === 1 && k.question === 3) as (typeof a.key)[number];
+    expect(Number(q3[4])).toBe(Number((k3.value as number).toPrecision(8)));
     expect(q3[6]).toBe("turnovers");
     expect(q3[7]).toBe("± 10.0 %");
     expect(rows.find((r) => r[2] === "1")?.[7]).toBe("exact");
