@@ -25,7 +25,9 @@ const DEFAULTS = {
   /** bounds of a swept value, cm⁻³ */
   floor_cm3: 1e-20,
   /** upper bound, fraction of [M] */
-  ceilingFraction: 1,
+  ceilingFraction: 3e-5,
+  /** only species with a loss frequency above this (s⁻¹) get the quasi-steady estimate */
+  fastLossFrequency_s: 1e-4,
 };
 
 /** Rescales the members of every pool so that Σ w x = total (sequentially over pools). */
@@ -70,7 +72,7 @@ export function coldGuess(
       }
       const P = ws.P[i];
       const lossFrequency = ws.L[i] / x[i];
-      if (!(P > 0) || !(lossFrequency > 0)) continue;
+      if (!(P > 0) || !(lossFrequency >= DEFAULTS.fastLossFrequency_s)) continue;
       let target = P / lossFrequency;
       target = Math.min(ceiling, Math.max(DEFAULTS.floor_cm3, target));
       x[i] = Math.exp((1 - DEFAULTS.damping) * Math.log(x[i]) + DEFAULTS.damping * Math.log(target));
@@ -108,12 +110,33 @@ export function toLog(x: Float64Array, u: Float64Array): void {
  * For each pool total, the member with the largest weighted amount (the
  * dominant reservoir) gives up its balance equation; greedily distinct across
  * pools, in mechanism order. Ties go to the longest-lived member (smallest
- * loss frequency `lossFrequency[i]`). Returns true when any choice changed.
+ * loss frequency `lossFrequency[i]`). With `hysteresis` > 1 a current choice is
+ * kept unless another member is larger by that factor. Returns true when any
+ * choice changed.
  */
-export function chooseReplaced(sys: ChemSystem, x: Float64Array, lossFrequency?: Float64Array): boolean {
+export function chooseReplaced(
+  sys: ChemSystem,
+  x: Float64Array,
+  lossFrequency?: Float64Array,
+  hysteresis = 1,
+): boolean {
   const taken = new Set<number>();
   let changed = false;
   for (const c of sys.constraints) {
+    if (hysteresis > 1 && c.replaced >= 0 && !taken.has(c.replaced)) {
+      // keep the current choice unless another member exceeds it by the factor `hysteresis`
+      let current = 0;
+      let largest = 0;
+      for (let q = 0; q < c.members.length; q++) {
+        const a = c.weights[q] * x[c.members[q]];
+        if (c.members[q] === c.replaced) current = a;
+        if (!taken.has(c.members[q])) largest = Math.max(largest, a);
+      }
+      if (current * hysteresis >= largest) {
+        taken.add(c.replaced);
+        continue;
+      }
+    }
     let best = -1;
     let bestAmount = -1;
     for (let q = 0; q < c.members.length; q++) {

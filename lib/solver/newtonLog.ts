@@ -15,6 +15,7 @@
  */
 import type { ChemSystem } from "./buildSystem";
 import { luFactor, luSolve } from "./denseLu";
+import { chooseReplaced } from "./initialGuess";
 import { jacobianLog, productionLoss, reactionRates } from "./massAction";
 
 export const NEWTON_DEFAULTS = {
@@ -27,7 +28,7 @@ export const NEWTON_DEFAULTS = {
   /** above this pseudo-time step (s) the iteration is treated as Newton's method */
   tauNewton_s: 1e10,
   /** largest change of ln x in one step */
-  maxLogStep: 3,
+  maxLogStep: 50,
   /** bounds of ln x: 1e-250 … 1e30 cm⁻³ */
   uMin: Math.log(1e-250),
   uMax: Math.log(1e30),
@@ -51,6 +52,9 @@ export interface NewtonLogResult {
   /** max |r_i| */
   residualNorm: number;
 }
+
+/** ln of the factor by which a species falls when the linear step would make it ≤ 0 */
+const OVERSHOOT = Math.log(1e3);
 
 /** Work buffers for one system size; reused across calls of the same solve. */
 export class NewtonWorkspace {
@@ -137,29 +141,36 @@ function step(sys: ChemSystem, tau: number, ws: NewtonWorkspace): number {
     const row = i * n;
     for (let l = 0; l < n; l++) A[row + l] = -A[row + l] * s;
     if (invTau !== 0 && !isConstraintRow[i]) A[row + i] += x[i] * invTau * s;
-    du[i] = r[i];
+    // equilibrate the row so that the singularity test is relative to each row
+    let big = 0;
+    for (let l = 0; l < n; l++) big = Math.max(big, Math.abs(A[row + l]));
+    const e = big > 0 ? 1 / big : 1;
+    for (let l = 0; l < n; l++) A[row + l] *= e;
+    du[i] = r[i] * e;
   }
-  const bad = luFactor(A, n, ws.pivot);
+  const bad = luFactor(A, n, ws.pivot, 1e-22);
   if (bad >= 0) return bad;
   luSolve(A, n, ws.pivot, du);
-  let big = 0;
-  for (let i = 0; i < n; i++) {
-    const a = Math.abs(du[i]);
-    if (!(a <= big)) big = a;
-  }
-  if (!Number.isFinite(big)) return 0;
-  if (big > NEWTON_DEFAULTS.maxLogStep) {
-    const f = NEWTON_DEFAULTS.maxLogStep / big;
-    for (let i = 0; i < n; i++) du[i] *= f;
-  }
+  for (let i = 0; i < n; i++) if (!Number.isFinite(du[i])) return i;
   return -1;
 }
 
+/**
+ * The linear system is solved for δ = δx/x (relative change). Applying it as
+ * u + ln(1 + δ) is the Newton (or implicit-Euler) update of x itself, exact
+ * for a species with first-order loss and a fixed source, where u + δ would
+ * only move ln x by ≈ −1 per iteration for a species far above its balance;
+ * where x + δx would be ≤ 0 the species is divided by e^OVERSHOOT instead.
+ * Both agree with u + δ to second order, so quadratic convergence is kept.
+ */
 function trial(u: Float64Array, du: Float64Array, lambda: number, out: Float64Array): void {
-  const { uMin, uMax } = NEWTON_DEFAULTS;
+  const { uMin, uMax, maxLogStep } = NEWTON_DEFAULTS;
   for (let i = 0; i < u.length; i++) {
-    const v = u[i] + lambda * du[i];
-    out[i] = Math.min(uMax, Math.max(uMin, v));
+    const d = lambda * du[i];
+    let s = d > -1 + 1e-15 ? Math.log1p(d) : -OVERSHOOT;
+    if (s > maxLogStep) s = maxLogStep;
+    else if (s < -maxLogStep) s = -maxLogStep;
+    out[i] = Math.min(uMax, Math.max(uMin, u[i] + s));
   }
 }
 
@@ -179,6 +190,8 @@ export function newtonLog(
   let ptcSteps = 0;
   let fallbacks = 0;
   let norm = evaluateResidual(sys, kEff, u, ws);
+  const rOld = new Float64Array(n);
+  const scale0 = new Float64Array(n);
   const result = (converged: boolean, singularRow = -1, nonFinite = false): NewtonLogResult => ({
     converged,
     singularRow,
@@ -206,14 +219,21 @@ export function newtonLog(
     if (newton) {
       newtonIterations++;
       const phi0 = halfSquare(ws.r);
+      scale0.set(ws.scale);
       let lambda = 1;
       let accepted = false;
       let maxStep = 0;
       for (let i = 0; i < n; i++) maxStep = Math.max(maxStep, Math.abs(ws.du[i]));
+      if (maxStep > 1e6) lambda = 1e6 / maxStep;
       while (lambda >= 1 / 256) {
         trial(u, ws.du, lambda, ws.uTrial);
         const m = evaluateResidual(sys, kEff, ws.uTrial, ws);
-        if (Number.isFinite(m) && halfSquare(ws.r) <= (1 - 1e-4 * lambda) * phi0) {
+        // merit with the row scaling frozen at the current iterate: the Newton
+        // direction is a descent direction for it (it is not, in general, for
+        // the re-scaled residual when P + L of a row changes along the step)
+        let phi = 0;
+        for (let i = 0; i < n; i++) phi += (ws.F[i] * scale0[i]) ** 2;
+        if (Number.isFinite(m) && 0.5 * phi <= (1 - 1e-4 * lambda) * phi0) {
           u.set(ws.uTrial);
           norm = m;
           accepted = true;
@@ -230,6 +250,7 @@ export function newtonLog(
       }
     } else {
       ptcSteps++;
+      rOld.set(ws.r);
       trial(u, ws.du, 1, ws.uTrial);
       const m = evaluateResidual(sys, kEff, ws.uTrial, ws);
       if (!Number.isFinite(m)) {
@@ -238,10 +259,19 @@ export function newtonLog(
         if (tau < 1e-12) return result(false, -1, true);
         continue;
       }
-      const ratio = norm / Math.max(m, 1e-300);
+      // switched evolution relaxation on the 2-norm of the scaled residual
+      const phiOld = halfSquare(rOld);
+      const ratio = Math.sqrt(phiOld / Math.max(halfSquare(ws.r), 1e-300));
       u.set(ws.uTrial);
       norm = m;
-      tau *= ratio >= 1 ? Math.min(10, Math.max(2, ratio)) : ratio > 0.3 ? 1.5 : 0.5;
+      // Keep each pool's replaced equation on its dominant member while the state moves.
+      if (sys.constraints.length > 0 && chooseReplaced(sys, ws.x, undefined, 4)) {
+        ws.isConstraintRow.fill(0);
+        for (const c of sys.constraints) ws.isConstraintRow[c.replaced] = 1;
+        norm = evaluateResidual(sys, kEff, u, ws);
+        rOld.set(ws.r);
+      }
+      tau *= ratio >= 0.9 ? Math.min(10, Math.max(2, ratio)) : ratio > 0.5 ? 1.2 : 0.5;
       if (tau >= NEWTON_DEFAULTS.tauNewton_s || (norm < 1e-4 && fallbacks === 0)) tau = Number.POSITIVE_INFINITY;
     }
   }
