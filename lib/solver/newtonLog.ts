@@ -27,8 +27,12 @@ export const NEWTON_DEFAULTS = {
   tau0_s: 1,
   /** above this pseudo-time step (s) the iteration is treated as Newton's method */
   tauNewton_s: 1e10,
-  /** largest change of ln x in one step */
+  /** largest change of ln x in one Newton step */
   maxLogStep: 50,
+  /** largest rise of ln x of one species in one pseudo-time step (falls are exact implicit-Euler decay) */
+  maxPtcLogStep: 5,
+  /** a pseudo-time step that multiplies ‖r‖₂ by more than this is retried with Δτ/4 */
+  maxPtcGrowth: 3,
   /** bounds of ln x: 1e-250 … 1e30 cm⁻³ */
   uMin: Math.log(1e-250),
   uMax: Math.log(1e30),
@@ -163,12 +167,12 @@ function step(sys: ChemSystem, tau: number, ws: NewtonWorkspace): number {
  * where x + δx would be ≤ 0 the species is divided by e^OVERSHOOT instead.
  * Both agree with u + δ to second order, so quadratic convergence is kept.
  */
-function trial(u: Float64Array, du: Float64Array, lambda: number, out: Float64Array): void {
+function trial(u: Float64Array, du: Float64Array, lambda: number, out: Float64Array, maxRise: number): void {
   const { uMin, uMax, maxLogStep } = NEWTON_DEFAULTS;
   for (let i = 0; i < u.length; i++) {
     const d = lambda * du[i];
     let s = d > -1 + 1e-15 ? Math.log1p(d) : -OVERSHOOT;
-    if (s > maxLogStep) s = maxLogStep;
+    if (s > maxRise) s = maxRise;
     else if (s < -maxLogStep) s = -maxLogStep;
     out[i] = Math.min(uMax, Math.max(uMin, u[i] + s));
   }
@@ -207,14 +211,11 @@ export function newtonLog(
     const newton = !Number.isFinite(tau);
     const bad = step(sys, tau, ws);
     if (bad >= 0) {
-      if (newton) {
-        // A singular Newton matrix can be regularised by a finite pseudo-time step.
-        tau = 1e6;
-        evaluateResidual(sys, kEff, u, ws);
-        if (++fallbacks > 5) return result(false, bad);
-        continue;
-      }
-      return result(false, bad);
+      // A singular matrix is regularised by a (shorter) finite pseudo-time step.
+      tau = newton ? 1e6 : tau / 10;
+      evaluateResidual(sys, kEff, u, ws);
+      if (++fallbacks > 8 || tau < 1e-9) return result(false, bad);
+      continue;
     }
     if (newton) {
       newtonIterations++;
@@ -226,7 +227,7 @@ export function newtonLog(
       for (let i = 0; i < n; i++) maxStep = Math.max(maxStep, Math.abs(ws.du[i]));
       if (maxStep > 1e6) lambda = 1e6 / maxStep;
       while (lambda >= 1 / 256) {
-        trial(u, ws.du, lambda, ws.uTrial);
+        trial(u, ws.du, lambda, ws.uTrial, NEWTON_DEFAULTS.maxLogStep);
         const m = evaluateResidual(sys, kEff, ws.uTrial, ws);
         // merit with the row scaling frozen at the current iterate: the Newton
         // direction is a descent direction for it (it is not, in general, for
@@ -251,10 +252,11 @@ export function newtonLog(
     } else {
       ptcSteps++;
       rOld.set(ws.r);
-      trial(u, ws.du, 1, ws.uTrial);
+      trial(u, ws.du, 1, ws.uTrial, NEWTON_DEFAULTS.maxPtcLogStep);
       const m = evaluateResidual(sys, kEff, ws.uTrial, ws);
-      if (!Number.isFinite(m)) {
-        tau /= 10;
+      const grew = halfSquare(ws.r) > NEWTON_DEFAULTS.maxPtcGrowth ** 2 * halfSquare(rOld) && tau > 1e-6;
+      if (!Number.isFinite(m) || grew) {
+        tau /= grew ? 4 : 10;
         norm = evaluateResidual(sys, kEff, u, ws);
         if (tau < 1e-12) return result(false, -1, true);
         continue;
