@@ -12,7 +12,7 @@ import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import { carrierWeights } from "./carrierFamilies";
 import { type DescribeContext, describePathway } from "./describePathway";
-import { directOxLoss } from "./directOxLoss";
+import { directOxLoss, directOxWeights } from "./directOxLoss";
 import { findPathways } from "./findPathways";
 import { oxWeights } from "./oxWeights";
 import { reactionNet } from "./reactionNet";
@@ -129,8 +129,16 @@ export function analyseCycles(
   const ctx: DescribeContext = { mech, rates, oxWeights: weights, held, carrierLoss };
   const cycles: CatalyticCycle[] = [];
   const other: CatalyticCycle[] = [];
-  let production = set.deleted.tracked.Ox.produced_cm3s;
-  let loss = set.deleted.tracked.Ox.destroyed_cm3s;
+  // Deleted pathways are often unfinished (radicals unresolved), so their gross Ox loss is measured with the
+  // direct-formula weights of the reaction flux they carried; production follows so that the net stays exact.
+  const del = set.deleted.tracked;
+  const dW = directOxWeights(mech, state);
+  const deletedDirect = set.deleted.flux_cm3s.reduce((s, f, j) => s + f * dW[j], 0);
+  const deletedNet = del.Ox.produced_cm3s - del.Ox.destroyed_cm3s;
+  const unassigned = Math.max(deletedDirect, -deletedNet, 0);
+  const unassignedProduction = unassigned + deletedNet;
+  let production = unassignedProduction;
+  let loss = unassigned;
   const oxDestroyed = new Float64Array(mech.reactions.length);
   for (const p of set.pathways) {
     let d = 0;
@@ -152,7 +160,6 @@ export function analyseCycles(
   }
   cycles.sort((a, b) => b.oxLoss_cm3s - a.oxLoss_cm3s);
   other.sort((a, b) => b.oxLoss_cm3s - a.oxLoss_cm3s);
-  const unassigned = set.deleted.tracked.Ox.destroyed_cm3s;
   const byFamily: FamilyShare[] = [...byName.entries()]
     .map(([family, l]) => ({ family, oxLoss_cm3s: l, fraction: loss > 0 ? l / loss : 0 }))
     .sort((a, b) => b.oxLoss_cm3s - a.oxLoss_cm3s);
@@ -167,7 +174,7 @@ export function analyseCycles(
     byFamily,
     directLoss_cm3s: direct.loss_cm3s,
     unassignedLoss_cm3s: unassigned,
-    unassignedProduction_cm3s: set.deleted.tracked.Ox.produced_cm3s,
+    unassignedProduction_cm3s: unassignedProduction,
     weights: members,
     netChange_cm3s: netChange,
     directTerms: direct.terms,

@@ -80,8 +80,11 @@ export function findPathways(
   for (const [name] of tracked) deletedTracked[name] = { produced_cm3s: 0, destroyed_cm3s: 0 };
   let nullRate = 0;
 
-  const remove = (rate: number, net: SparseVector) => {
+  const deletedFlux = new Float64Array(mech.reactions.length);
+  const remove = (rate: number, w: Pick<Work, "rx" | "mx" | "net">) => {
     if (!(rate > 0)) return;
+    const net = w.net;
+    for (let t = 0; t < w.rx.length; t++) deletedFlux[w.rx[t]] += rate * w.mx[t];
     for (let i = 0; i < net.idx.length; i++) {
       const v = rate * net.val[i];
       const s = net.idx[i];
@@ -103,7 +106,7 @@ export function findPathways(
       return;
     }
     if (w.rate < fmin) {
-      remove(w.rate, w.net);
+      remove(w.rate, w);
       return;
     }
     const old = map.get(w.key);
@@ -206,11 +209,11 @@ export function findPathways(
       });
       // unconnected shares: storage of b, and the share that fed deleted consumers
       if (T > D) add(next, { ...k, rate: (k.rate * (T - D)) / T });
-      remove((k.rate * dD) / T, k.net);
+      remove((k.rate * dD) / T, k);
     });
     for (const l of consumers) {
       if (T > P) add(next, { ...l, rate: (l.rate * (T - P)) / T });
-      remove((l.rate * dP) / T, l.net);
+      remove((l.rate * dP) / T, l);
     }
 
     for (const w of created.values()) {
@@ -254,7 +257,7 @@ export function findPathways(
     if (next.size > opt.maxPathways) {
       const sorted = [...next.values()].sort((x, y) => y.rate - x.rate);
       for (const w of sorted.slice(opt.maxPathways)) {
-        remove(w.rate, w.net);
+        remove(w.rate, w);
         next.delete(w.key);
       }
       truncated = true;
@@ -277,7 +280,7 @@ export function findPathways(
     pathways,
     branchingPoints: order.map((o) => mech.species[o.i].id),
     fmin_cm3s: fmin,
-    deleted: { net_cm3s: Array.from(deletedNet), tracked: deletedTracked },
+    deleted: { net_cm3s: Array.from(deletedNet), flux_cm3s: Array.from(deletedFlux), tracked: deletedTracked },
     nullCycleRate_cm3s: nullRate,
     storage,
     warnings,

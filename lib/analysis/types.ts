@@ -177,6 +177,8 @@ export interface PathwaySet {
   deleted: {
     /** Σ over deleted pathways of rate × net effect, by species index, molecules cm⁻³ s⁻¹ */
     net_cm3s: number[];
+    /** Σ over deleted pathways of rate × multiplicity, by reaction index: the reaction flux they carried, molecules cm⁻³ s⁻¹ */
+    flux_cm3s: number[];
     /** gross positive and negative change of each tracked weighted sum in deleted pathways, molecules cm⁻³ s⁻¹ */
     tracked: Record<string, { produced_cm3s: number; destroyed_cm3s: number }>;
   };
