@@ -1,0 +1,7 @@
+export { AssessmentBuilder } from "./AssessmentBuilder";
+export { CopyLink } from "./CopyLink";
+export { Field } from "./Field";
+export { MarkingPanel } from "./MarkingPanel";
+export { PrintButton } from "./PrintButton";
+export { StudentSheetView } from "./StudentSheetView";
+export type { MechanismOption, Preview, TemplateOption } from "./types";
