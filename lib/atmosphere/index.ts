@@ -1,0 +1,35 @@
+export { airNumberDensity_cm3 } from "./airNumberDensity";
+export { chapmanGrazing } from "./chapmanGrazing";
+export { climatologyAt, climatologyMixingRatio, climatologySources, climatologySpecies } from "./climatologyAt";
+export {
+  airColumnAbove_cm2,
+  airScaleHeight_km,
+  columnAboveFromProfile,
+  type DensityProfile,
+  defaultOzoneDensity_cm3,
+  o2ColumnAbove_cm2,
+  ozoneColumnAbove_cm2,
+} from "./columnAbove";
+export { type ColumnsAboveLevelsOptions, columnsAboveLevels } from "./columnsAboveLevels";
+export {
+  AVOGADRO_mol,
+  BOLTZMANN_J_K,
+  DOBSON_UNIT_cm2,
+  EARTH_RADIUS_km,
+  N2_FRACTION,
+  O2_FRACTION,
+} from "./constants";
+export { type DaylightInput, daylightHours } from "./daylightHours";
+export { dayOfYear, isLeapYear } from "./dayOfYear";
+export { DEMO_PROFILES, INVENTED_COLD_PROFILE, INVENTED_WARM_PROFILE } from "./demo-profiles";
+export { equationOfTime_min } from "./equationOfTime";
+export { erfcx } from "./erfcx";
+export { fractionalYear_rad } from "./fractionalYear";
+export { geometricToGeopotential_km, geopotentialToGeometric_km } from "./geopotential";
+export { hourAngle_deg } from "./hourAngle";
+export { noonZenith } from "./noonZenith";
+export { solarDeclination } from "./solarDeclination";
+export { solarZenithAngle } from "./solarZenithAngle";
+export { standardAtmosphere } from "./standardAtmosphere";
+export { sunsetZenith_deg } from "./sunsetZenith";
+export type * from "./types";

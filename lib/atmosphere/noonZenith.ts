@@ -1,0 +1,14 @@
+/**
+ * Solar zenith angle at apparent (true) solar noon: |φ − δ|, with the NOAA
+ * declination at 12 h (NOAA GML "General Solar Position Calculations").
+ * Units: degrees.
+ */
+
+import { solarDeclination } from "./solarDeclination";
+import { checkLatitude } from "./solarZenithAngle";
+
+/** Noon zenith angle, degrees, for a latitude (°N) and day of year. */
+export function noonZenith(input: { latitude_deg: number; dayOfYear: number }): number {
+  checkLatitude(input.latitude_deg);
+  return Math.abs(input.latitude_deg - solarDeclination(input.dayOfYear, 12));
+}

@@ -1,0 +1,15 @@
+export { actinicFlux } from "./actinicFlux";
+export { brclCrossSection_cm2 } from "./brclCrossSection";
+export { PHOTOLYSIS_CHANNELS, type PhotolysisChannel, photolysisChannels } from "./channels";
+export { cl2CrossSection_cm2 } from "./cl2CrossSection";
+export { type AtmosphericCondition, conditionAt } from "./conditionAt";
+export { expint1, expint2 } from "./expint";
+export { n2oCrossSection_cm2 } from "./n2oCrossSection";
+export { o1dQuantumYield } from "./o1dQuantumYield";
+export { o3CrossSection_cm2 } from "./o3CrossSection";
+export { photolysisFrequencies } from "./photolysisFrequencies";
+export { type PhotolysisProfileInput, photolysisProfile } from "./photolysisProfile";
+export { rayleighCrossSection_cm2 } from "./rayleighCrossSection";
+export { defaultO3ScaleHeight_km, slantColumns } from "./slantColumns";
+export type * from "./types";
+export { solarPhotonFlux_cm2snm, WAVELENGTH_GRID, type WavelengthGrid } from "./wavelengthGrid";
