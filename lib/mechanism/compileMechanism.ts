@@ -160,11 +160,13 @@ export function compileMechanism(
       if (off.length) {
         const count = (terms: Term[], el: string) =>
           terms.reduce((s, t) => s + (species[t.species].atoms[el] ?? 0) * t.coef, 0);
-        const detail = off.map(([el]) => `${el} ${count(reactants, el)} → ${count(products, el)}`).join(", ");
+        const detail = off.map(
+          ([el]) => `${el} ${count(reactants, el)} on the left, ${count(products, el)} on the right`,
+        );
         sink.error(
           [...path, "equation"],
           "unbalanced",
-          `the equation is not balanced (${detail}); fix it, or mark a knowingly lumped reaction with unbalanced: <reason>`,
+          `the equation is not balanced: ${detail.join("; ")}. Fix it, or mark a knowingly lumped reaction with "unbalanced: <reason>"`,
         );
         return;
       }

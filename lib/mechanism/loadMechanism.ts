@@ -106,7 +106,8 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
   } else {
     const lineCounter = new LineCounter();
     const doc = parseDocument(text, { lineCounter, prettyErrors: false, uniqueKeys: true });
-    const syntax = [...doc.errors].map((err): Diagnostic => {
+    // the first syntax error is reported: the parser's later ones usually follow from it
+    const syntax = doc.errors.slice(0, 1).map((err): Diagnostic => {
       const p = lineCounter.linePos(err.pos[0]);
       const first = err.message.split("\n")[0].replace(/ at line \d+, column \d+.*$/, "");
       return {
@@ -138,7 +139,11 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
   const read = readDocument(data, sink, limits);
   // compile even after shape errors, so that one pass reports every problem
   const mechanism = read ? compileMechanism(read, sink) : undefined;
-  const diagnostics = sink.resolve(locate);
+  const diagnostics = sink
+    .resolve(locate)
+    .map((d, i) => ({ d, i }))
+    .sort((a, b) => (a.d.line ?? 0) - (b.d.line ?? 0) || (a.d.column ?? 0) - (b.d.column ?? 0) || a.i - b.i)
+    .map(({ d }) => d);
   const errors = diagnostics.filter((d) => d.severity === "error");
   if (errors.length || !mechanism) fail(errors.length ? errors : diagnostics);
   const warnings = diagnostics.filter((d) => d.severity === "warning");

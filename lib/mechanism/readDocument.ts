@@ -45,17 +45,27 @@ const kind = (v: unknown): string =>
 class Reader {
   constructor(private readonly sink: DiagnosticSink) {}
 
-  keys(o: Obj, path: DocPath, allowed: string[], what: string): Obj {
+  keys(o: Obj, path: DocPath, allowed: string[], what: string, law?: string): Obj {
     const out: Obj = {};
     for (const [k0, v] of Object.entries(o)) {
       const k = ALIASES[k0] ?? k0;
       if (!allowed.includes(k)) {
-        this.sink.error(
-          [...path, k0],
-          "unknown-key",
-          `unknown field "${k0}" in ${what}; expected one of ${allowed.join(", ")}`,
-          true,
-        );
+        if (law) {
+          const params = allowed.filter((a) => a !== "law").join(", ");
+          this.sink.error(
+            [...path, k0],
+            "unknown-parameter",
+            `unknown parameter "${k0}" for the ${law} law; its parameters are ${params}`,
+            true,
+          );
+        } else {
+          this.sink.error(
+            [...path, k0],
+            "unknown-key",
+            `unknown field "${k0}" in ${what}; expected one of ${allowed.join(", ")}`,
+            true,
+          );
+        }
       } else if (k in out) {
         this.sink.error([...path, k0], "duplicate-key", `"${k0}" is given twice (also as "${k}")`, true);
       } else out[k] = v;
@@ -209,7 +219,7 @@ class Reader {
       return undefined;
     }
     const [req, opt] = LAW_PARAMETERS[law as RateEntry["law"]];
-    const o = this.keys(v, path, ["law", ...req, ...opt], `a ${law} rate (parameters: ${[...req, ...opt].join(", ")})`);
+    const o = this.keys(v, path, ["law", ...req, ...opt], `a ${law} rate`, law);
     const before = this.sink.errorCount;
     const num = (k: string, positive = false) => this.number(o, k, path, { required: req.includes(k), positive });
     let out: RateEntry | undefined;
