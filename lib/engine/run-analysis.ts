@@ -4,6 +4,7 @@
  * catalytic cycles and the odd-oxygen budget.
  */
 import { analyseCycles } from "../analysis";
+import type { CycleReport } from "../analysis/types";
 import type { CompiledMechanism } from "../mechanism/types";
 import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
@@ -16,6 +17,35 @@ export const ANALYSIS_DEFAULTS: Required<AnalysisOptions> = {
   fminRelative: 1e-4,
   oxDefinition: "standard",
 };
+
+function emptyReport(warning: string, oxDefinition: CycleReport["oxDefinition"]): CycleReport {
+  return {
+    otherLossPathways: [],
+    branchingPoints: [],
+    carrierFamilies: [],
+    nullCycleRate_cm3s: 0,
+    oxDefinition,
+    heldTendencies: [],
+    cycles: [],
+    budget: {
+      definition: [],
+      production_cm3s: 0,
+      loss_cm3s: 0,
+      byFamily: [],
+      directLoss_cm3s: 0,
+      unassignedLoss_cm3s: 0,
+      unassignedProduction_cm3s: 0,
+      weights: {},
+      netChange_cm3s: 0,
+      directTerms: [],
+      directMismatch: 0,
+    },
+    perReaction: [],
+    pathwayCount: 0,
+    fmin_cm3s: 0,
+    warnings: [warning],
+  };
+}
 
 export interface RunOptions {
   /** warm start: number densities by mechanism index from a neighbouring solve */
@@ -55,11 +85,15 @@ export function runAnalysis(
     steadyState = solveSteadyState(mech, solveConditionsOf(condition), { initialState: run.initialState });
   }
   const heldSpecies = Object.keys(condition.held_cm3);
-  const cycles = analyseCycles(mech, steadyState, {
-    fminRelative: options.fminRelative,
-    oxDefinition: options.oxDefinition,
-    heldSpecies,
-  });
+  // Pathways of a state that is not a steady state would not close any budget: report none.
+  const cycles =
+    steadyState.status === "converged"
+      ? analyseCycles(mech, steadyState, {
+          fminRelative: options.fminRelative,
+          oxDefinition: options.oxDefinition,
+          heldSpecies,
+        })
+      : emptyReport(`no cycle analysis: the steady state did not converge (${steadyState.message})`, options.oxDefinition);
   return {
     engineVersion: ENGINE_VERSION,
     mechanism: mechanismRef,
