@@ -40,6 +40,9 @@ export const PATHWAY_DEFAULTS: Required<Omit<PathwayOptions, "track">> = {
   maxPathways: 50_000,
 };
 
+/** A branching point whose production and loss differ by less than this fraction is balanced (solver round-off). */
+const BALANCE_TOLERANCE = 1e-7;
+
 interface Work {
   rx: number[];
   mx: number[];
@@ -208,11 +211,13 @@ export function findPathways(
         else created.set(key, { rx, mx, net, rate, key });
       });
       // unconnected shares: storage of b, and the share that fed deleted consumers
-      if (T > D) add(next, { ...k, rate: (k.rate * (T - D)) / T });
+      if (T - D > BALANCE_TOLERANCE * T) add(next, { ...k, rate: (k.rate * (T - D)) / T });
+      else remove((k.rate * (T - D)) / T, k);
       remove((k.rate * dD) / T, k);
     });
     for (const l of consumers) {
-      if (T > P) add(next, { ...l, rate: (l.rate * (T - P)) / T });
+      if (T - P > BALANCE_TOLERANCE * T) add(next, { ...l, rate: (l.rate * (T - P)) / T });
+      else remove((l.rate * (T - P)) / T, l);
       remove((l.rate * dP) / T, l);
     }
 
