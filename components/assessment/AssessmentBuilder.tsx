@@ -126,7 +126,8 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
         uid: nextUid,
         kind: addKind,
         cycleId: t.needs.cycle
-          ? (preview?.cycles.find((c) => c.hasChainLength || addKind === "rate-limiting-step")?.id ?? "")
+          ? (preview?.cycles.find((c) => (addKind === "rate-limiting-step" ? c.stepCount > 1 : c.hasChainLength))?.id ??
+            "")
           : "",
         speciesA: t.needs.species ? (preview?.solvedSpecies[0] ?? "") : "",
         speciesB: t.needs.species ? (preview?.solvedSpecies[1] ?? "") : "",
@@ -382,7 +383,9 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
         <ol className="mt-3 space-y-3">
           {questions.map((q, i) => {
             const t = templateOf(q.kind);
-            const cycles = preview?.cycles.filter((c) => q.kind === "rate-limiting-step" || c.hasChainLength) ?? [];
+            const cycles =
+              preview?.cycles.filter((c) => (q.kind === "rate-limiting-step" ? c.stepCount > 1 : c.hasChainLength)) ??
+              [];
             return (
               <li
                 key={q.uid}

@@ -30,6 +30,7 @@ export interface Preview {
     steps: string[];
     share: number;
     hasChainLength: boolean;
+    stepCount: number;
   }[];
   solvedSpecies: string[];
   pools: string[];

@@ -83,15 +83,14 @@ export async function previewAssessment(body: unknown) {
       steps: stepsInMechanismOrder(result, c).map(stepText),
       share: c.share,
       hasChainLength: c.chainLength !== null && Number.isFinite(c.chainLength),
+      stepCount: c.steps.length,
     })),
     solvedSpecies: offer.solvedSpecies,
     pools: offer.pools,
   };
 }
 
-export async function createAssessment(
-  body: unknown,
-): Promise<{
+export async function createAssessment(body: unknown): Promise<{
   instructorId: string;
   studentId: string;
   instructorUrl: string;

@@ -38,12 +38,16 @@ export function lettered(items: { value: string; text: string }[]): Choice[] {
 /** Canonical order of the families on a sheet; coupled and unknown ones follow alphabetically. */
 const FAMILY_ORDER = ["Ox", "HOx", "NOx", "ClOx", "BrOx"];
 
+/** The budget's bucket for loss in pathways below the threshold: not a family a student can name. */
+export const UNASSIGNED = "unassigned";
+
+/** The families a student may name, in the canonical order; the unassigned bucket left out. */
 export function sortFamilies(families: Iterable<string>): string[] {
   const rank = (f: string) => {
     const i = FAMILY_ORDER.indexOf(f);
     return i < 0 ? FAMILY_ORDER.length : i;
   };
-  return [...new Set(families)].sort((a, b) => rank(a) - rank(b) || a.localeCompare(b));
+  return [...new Set(families)].filter((f) => f !== UNASSIGNED).sort((a, b) => rank(a) - rank(b) || a.localeCompare(b));
 }
 
 export function familyText(f: string): string {

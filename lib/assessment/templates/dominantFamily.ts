@@ -2,10 +2,11 @@
  * Which family of catalytic cycles removes the most odd oxygen at the
  * variant's conditions. Answer: a family id from the budget (exact). A variant
  * where the two largest shares are within 5 % of each other is redrawn, as
- * the question would have no clear answer.
+ * the question would have no clear answer. The budget's "unassigned" bucket
+ * (pathways below the threshold) is not a family and never an answer.
  */
 import type { QuestionTemplate } from "../types";
-import { converged, familyText, lettered, oddOxygenText } from "./cycleText";
+import { converged, familyText, lettered, oddOxygenText, UNASSIGNED } from "./cycleText";
 
 export const DEFAULTS = {
   /** second-largest share over the largest above which the question is too close to call */
@@ -22,7 +23,9 @@ export const dominantFamily: QuestionTemplate = {
   build({ base, families }) {
     const bad = converged(base);
     if (bad) return { ok: false, problem: bad };
-    const shares = [...base.cycles.budget.byFamily].sort((a, b) => b.fraction - a.fraction);
+    const shares = base.cycles.budget.byFamily
+      .filter((f) => f.family !== UNASSIGNED)
+      .sort((a, b) => b.fraction - a.fraction);
     if (shares.length === 0 || shares[0].fraction <= 0)
       return { ok: false, problem: "no odd-oxygen loss by any family" };
     if (shares.length > 1 && shares[1].fraction >= DEFAULTS.maxRunnerUpRatio * shares[0].fraction)
