@@ -127,6 +127,101 @@ export const openApiDocument = {
     "/api/analyses/{id}/rates.csv": csv("Every reaction's rate constant, rate and ozone destroyed"),
     "/api/analyses/{id}/species.csv": csv("Every species' number density, mixing ratio, production, loss and lifetime"),
     "/api/analyses/{id}/cycles.csv": csv("The catalytic cycles"),
+    "/api/assessments": {
+      post: {
+        summary:
+          "Build an assessment: variants drawn from ranges by a seeded generator, questions from templates, answers computed by the engine",
+        requestBody: {
+          required: true,
+          content: { "application/json": { schema: { $ref: "#/components/schemas/AssessmentSpec" } } },
+        },
+        responses: {
+          201: {
+            description:
+              "{ instructorId, studentId, instructorUrl, studentUrl, assessment }: the instructor record with the key",
+          },
+          ...errors(400, 404, 413, 422),
+        },
+      },
+    },
+    "/api/assessments/preview": {
+      post: {
+        summary:
+          "The cycles, families and solved species at a base condition, for choosing questions; nothing is stored",
+        requestBody: {
+          required: true,
+          content: {
+            "application/json": {
+              schema: {
+                type: "object",
+                required: ["mechanismId", "condition"],
+                properties: { mechanismId: { type: "string" }, condition: { type: "object" } },
+              },
+            },
+          },
+        },
+        responses: {
+          200: { description: "{ mechanism, status, conditions, families, cycles, solvedSpecies, pools }" },
+          ...errors(400, 404, 422),
+        },
+      },
+    },
+    "/api/assessments/{id}": {
+      get: {
+        summary: "The instructor record of an assessment, answer key included (instructor id only)",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "instructor record" }, ...errors(404) },
+      },
+    },
+    "/api/assessments/{id}/key.csv": {
+      get: {
+        summary: "The answer key as CSV: variant, seed, question, answer, unit, tolerance",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: {
+          200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } },
+          ...errors(404),
+        },
+      },
+    },
+    "/api/assessments/{id}/key.json": {
+      get: {
+        summary: "The answer key as JSON, grouped by variant, with the seed and conditions",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "key" }, ...errors(404) },
+      },
+    },
+    "/api/assessments/{id}/answers-template.csv": {
+      get: {
+        summary: "A blank answer file for the class: student, variant, q1 … qN",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: {
+          200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } },
+          ...errors(404),
+        },
+      },
+    },
+    "/api/assessments/{id}/marks": {
+      post: {
+        summary:
+          "Mark a class's answers (CSV body, or JSON { csv }) with the stored tolerances; ?format=csv for the marks as CSV",
+        parameters: [
+          { $ref: "#/components/parameters/id" },
+          { name: "format", in: "query", required: false, schema: { enum: ["json", "csv"], default: "json" } },
+        ],
+        requestBody: { required: true, content: { "text/csv": { schema: { type: "string" } } } },
+        responses: {
+          200: { description: "{ students, questions, warnings, csv }, or the CSV" },
+          ...errors(400, 404, 413),
+        },
+      },
+    },
+    "/api/assessments/student/{id}": {
+      get: {
+        summary: "The student sheets of an assessment (student id): questions and conditions, never an answer",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "student record" }, ...errors(404) },
+      },
+    },
   },
   components: {
     parameters: { id: { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,80}$" } } },
@@ -141,6 +236,58 @@ export const openApiDocument = {
           path: { type: "string" },
           line: { type: "integer" },
           column: { type: "integer" },
+        },
+      },
+      AssessmentSpec: {
+        type: "object",
+        required: ["title", "mechanismId", "variants", "base", "questions"],
+        additionalProperties: false,
+        properties: {
+          title: { type: "string", maxLength: 120 },
+          mechanismId: { type: "string" },
+          seed: {
+            type: "integer",
+            minimum: 0,
+            maximum: 4294967295,
+            description: "default: random, recorded with the key",
+          },
+          variants: { type: "integer", minimum: 1, maximum: 40 },
+          base: { type: "object", description: "a condition as in AnalysisRequest.condition" },
+          ranges: {
+            type: "object",
+            description:
+              "{ min, max, step? } for altitude_km, latitude_deg, localSolarTime_h, zenith_deg, T_K, jScale, and poolTotals.<pool> (mixing ratio)",
+          },
+          questions: {
+            type: "array",
+            minItems: 1,
+            maxItems: 12,
+            items: {
+              type: "object",
+              required: ["kind"],
+              properties: {
+                kind: {
+                  enum: [
+                    "dominant-family",
+                    "rate-limiting-step",
+                    "chain-length",
+                    "species-ratio",
+                    "clox-share-change",
+                    "ozone-per-catalyst",
+                  ],
+                },
+                cycleId: { type: "string" },
+                speciesA: { type: "string" },
+                speciesB: { type: "string" },
+                tolerance: {
+                  type: "object",
+                  description: "{ kind: relative, rel } | { kind: absolute, abs } | { kind: exact }",
+                },
+                points: { type: "number", default: 1 },
+              },
+            },
+          },
+          instructions: { type: "string", maxLength: 600 },
         },
       },
       AnalysisRequest: {
