@@ -1,6 +1,6 @@
 // `npm start`: builds when no build exists, then serves on PORT (default 3000)
 // with the SQLite store under OZONE_DATA_DIR (default ./data).
-import { spawn, execFileSync } from "node:child_process";
+import { execFileSync, spawn } from "node:child_process";
 import { existsSync } from "node:fs";
 
 if (!existsSync(`${process.env.NEXT_DIST_DIR ?? ".next"}/BUILD_ID`) || !existsSync(".engine/worker.mjs")) {

@@ -1,7 +1,7 @@
 // `npm test`: the whole gate. Typecheck, lint/format, unit and reference tests
 // (vitest), then route and browser tests (Playwright) against a really started
 // production server. Ends with one plain line totalling every runner.
-import { execFileSync, spawnSync } from "node:child_process";
+import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync } from "node:fs";
 
 const env = { ...process.env, NEXT_TELEMETRY_DISABLED: "1" };
@@ -33,7 +33,12 @@ function ensureChromium() {
 mkdirSync("test-results", { recursive: true });
 run("typecheck", "node_modules/.bin/tsc", ["--noEmit"]);
 run("lint", "node_modules/.bin/biome", ["check", "."]);
-run("unit", "node_modules/.bin/vitest", ["run", "--reporter=default", "--reporter=json", "--outputFile=test-results/vitest.json"]);
+run("unit", "node_modules/.bin/vitest", [
+  "run",
+  "--reporter=default",
+  "--reporter=json",
+  "--outputFile=test-results/vitest.json",
+]);
 run("build", "node", ["scripts/build.mjs"]);
 if (ensureChromium()) {
   run("browser+routes", "node_modules/.bin/playwright", ["test"]);

@@ -72,7 +72,9 @@ export class EnginePool {
       if (msg.ok) p.resolve(msg.value as EngineJobResult);
       else p.reject(toEngineError(msg.error));
     });
-    slot.worker.on("error", (e) => this.replace(slot, new EngineError("engine-failure", `engine worker failed: ${e.message}`)));
+    slot.worker.on("error", (e) =>
+      this.replace(slot, new EngineError("engine-failure", `engine worker failed: ${e.message}`)),
+    );
     slot.worker.on("exit", (code) => {
       if (slot.current) this.replace(slot, new EngineError("engine-failure", `engine worker exited with code ${code}`));
     });

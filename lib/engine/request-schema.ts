@@ -21,12 +21,19 @@ export const conditionSchema = z
       .regex(/^\d{4}-\d{2}-\d{2}$/, "expected a date YYYY-MM-DD")
       .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), "expected a real calendar date")
       .optional(),
-    localSolarTime_h: finite.refine((v) => v >= 0 && v <= 24, "expected a local solar time between 0 and 24 h").optional(),
+    localSolarTime_h: finite
+      .refine((v) => v >= 0 && v <= 24, "expected a local solar time between 0 and 24 h")
+      .optional(),
     zenith_deg: finite.refine((v) => v >= 0 && v <= 180, "expected a zenith angle between 0 and 180°").optional(),
     mode: z.enum(["instantaneous", "diurnal"]).optional(),
     held: z.record(z.string(), mixingRatio).optional(),
     poolTotals: z.record(z.string(), mixingRatio).optional(),
-    J: z.record(z.string(), finite.refine((v) => v >= 0 && v < 10, "expected a photolysis frequency in s⁻¹ (0–10)")).optional(),
+    J: z
+      .record(
+        z.string(),
+        finite.refine((v) => v >= 0 && v < 10, "expected a photolysis frequency in s⁻¹ (0–10)"),
+      )
+      .optional(),
     jScale: finite.refine((v) => v >= 0 && v <= 100, "expected a factor between 0 and 100").optional(),
     ozone: z.enum(["held", "solved"]).optional(),
   })
@@ -55,6 +62,9 @@ export function parseWith<T>(schema: z.ZodType<T>, body: unknown): T {
   const r = schema.safeParse(body);
   if (r.success) return r.data;
   const issue = r.error.issues[0];
-  const path = issue.path.map((p) => (typeof p === "number" ? `[${p}]` : p)).join(".").replace(/\.\[/g, "[");
+  const path = issue.path
+    .map((p) => (typeof p === "number" ? `[${p}]` : p))
+    .join(".")
+    .replace(/\.\[/g, "[");
   throw new InputError(path || "(body)", issue.message, "invalid-request");
 }

@@ -5,13 +5,13 @@
  */
 import { analyseCycles } from "../analysis";
 import type { CycleReport } from "../analysis/types";
+import { solarZenithAngle } from "../atmosphere";
 import type { CompiledMechanism } from "../mechanism/types";
 import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
 import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf } from "./resolve-condition";
 import type { AnalysisOptions, AnalysisRequest, AnalysisResult } from "./types";
 import { ENGINE_VERSION } from "./version";
-import { solarZenithAngle } from "../atmosphere";
 
 export const ANALYSIS_DEFAULTS: Required<AnalysisOptions> = {
   fminRelative: 1e-4,
@@ -93,7 +93,10 @@ export function runAnalysis(
           oxDefinition: options.oxDefinition,
           heldSpecies,
         })
-      : emptyReport(`no cycle analysis: the steady state did not converge (${steadyState.message})`, options.oxDefinition);
+      : emptyReport(
+          `no cycle analysis: the steady state did not converge (${steadyState.message})`,
+          options.oxDefinition,
+        );
   return {
     engineVersion: ENGINE_VERSION,
     mechanism: mechanismRef,

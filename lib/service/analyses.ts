@@ -4,8 +4,8 @@
  * stored result with its status; an invalid request stores nothing.
  */
 import "server-only";
-import { parseAnalysisRequest } from "../engine/request-schema";
 import { enginePool } from "../engine/pool";
+import { parseAnalysisRequest } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import { getStore, ID_PATTERN, newRecordId } from "../store";

@@ -4,9 +4,9 @@
  */
 import "server-only";
 import { z } from "zod";
-import { parseWith } from "../engine/request-schema";
 import type { MechanismSource } from "../engine/mechanism-source";
 import { compileSource } from "../engine/mechanism-source";
+import { parseWith } from "../engine/request-schema";
 import { builtinMechanisms, loadBuiltinMechanism, loadMechanism } from "../mechanism";
 import type { CompiledMechanism } from "../mechanism/types";
 import { getStore, ID_PATTERN, mechanismContentId } from "../store";
@@ -15,7 +15,9 @@ import { notFound } from "./http";
 /** Largest mechanism upload accepted, bytes (the loader's own text limit is 2 MiB). */
 export const MAX_MECHANISM_BODY = 4 * 1024 * 1024;
 
-const uploadSchema = z.object({ text: z.string().min(1, "expected the document text"), format: z.enum(["yaml", "json"]).optional() }).strict();
+const uploadSchema = z
+  .object({ text: z.string().min(1, "expected the document text"), format: z.enum(["yaml", "json"]).optional() })
+  .strict();
 
 export function summarise(id: string, builtin: boolean, mech: CompiledMechanism, text: string) {
   return {

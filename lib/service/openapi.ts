@@ -26,9 +26,12 @@ const errors = (...codes: number[]) =>
       String(c),
       {
         description:
-          { 400: "invalid input", 404: "unknown id", 413: "body or document over its size limit", 422: "computation over its time limit" }[
-            c
-          ] ?? "error",
+          {
+            400: "invalid input",
+            404: "unknown id",
+            413: "body or document over its size limit",
+            422: "computation over its time limit",
+          }[c] ?? "error",
         content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } },
       },
     ]),
@@ -41,6 +44,214 @@ const csv = (what: string) => ({
     responses: { 200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } }, ...errors(404) },
   },
 });
+
+// Profile sweeps, comparisons and jobs (issue 9).
+const job202 = {
+  202: {
+    description:
+      "queued: the job's status ({ id, state, done, total, stage, statusUrl }); poll GET /api/jobs/{id} (or stream /api/jobs/{id}/events) until state is done, then open resultUrl",
+    content: { "application/json": { schema: { $ref: "#/components/schemas/JobStatus" } } },
+  },
+};
+
+const profileCsv = (what: string, kind: string) => ({
+  get: {
+    summary: `${what} of a stored ${kind} as CSV, units in the header`,
+    parameters: [{ $ref: "#/components/parameters/id" }],
+    responses: { 200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } }, ...errors(404) },
+  },
+});
+
+const jobId = { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{16}$" } };
+
+const profilePaths = {
+  "/api/profiles": {
+    get: {
+      summary:
+        "The profiles offered without an upload: the default (standard atmosphere, default climatology) and the invented demo profiles, each with its CSV",
+      responses: { 200: { description: "{ profiles: [{ id, title, source, demo, note, levels, range_km, csv }] }" } },
+    },
+    post: {
+      summary: "Start a profile sweep: steady state and cycle analysis at every level, warm-started from the neighbour",
+      requestBody: {
+        required: true,
+        content: { "application/json": { schema: { $ref: "#/components/schemas/SweepRequest" } } },
+      },
+      responses: { ...job202, ...errors(400, 404, 413) },
+    },
+  },
+  "/api/profiles/{id}": {
+    get: {
+      summary:
+        "A stored sweep: { id, createdAt, engineVersion, body: { request, profile, result } }; failed levels carry status and message",
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  "/api/profiles/{id}.json": {
+    get: {
+      summary: "The full stored sweep as a JSON download",
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  "/api/profiles/{id}/levels.csv": profileCsv(
+    "Condition, status, Ox production and loss, and loss and fraction by family at every level",
+    "sweep",
+  ),
+  "/api/profiles/{id}/cycles.csv": profileCsv("Every cycle at every level", "sweep"),
+  "/api/profiles/{id}/profile.csv": profileCsv("The input profile in the upload format", "sweep"),
+  "/api/comparisons": {
+    post: {
+      summary:
+        "Start a comparison of two sweeps (stored ones by id, or sweeps to run): Ox loss and its family split for A and B, B − A, and the cycles explaining it",
+      requestBody: {
+        required: true,
+        content: { "application/json": { schema: { $ref: "#/components/schemas/ComparisonRequest" } } },
+      },
+      responses: { ...job202, ...errors(400, 404, 413) },
+    },
+  },
+  "/api/comparisons/{id}": {
+    get: {
+      summary: "A stored comparison: { id, createdAt, engineVersion, body: { request, result } }",
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  "/api/comparisons/{id}.json": {
+    get: {
+      summary: "The full stored comparison as a JSON download",
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  "/api/comparisons/{id}/comparison.csv": profileCsv(
+    "A, B and B − A at every altitude, by family, with the cycles explaining B − A",
+    "comparison",
+  ),
+  "/api/jobs/{id}": {
+    get: {
+      summary:
+        "A job's status: state (queued, running, done, failed, cancelled), done/total, and when done resultId and resultUrl",
+      parameters: [jobId],
+      responses: {
+        200: {
+          description: "status",
+          content: { "application/json": { schema: { $ref: "#/components/schemas/JobStatus" } } },
+        },
+        ...errors(404),
+      },
+    },
+    delete: {
+      summary: "Cancel a queued or running job (a finished job is returned unchanged)",
+      parameters: [jobId],
+      responses: { 200: { description: "status" }, ...errors(404) },
+    },
+  },
+  "/api/jobs/{id}/events": {
+    get: {
+      summary: "Server-sent events: one `status` event (a JobStatus) per change until the job ends",
+      parameters: [jobId],
+      responses: {
+        200: { description: "text/event-stream", content: { "text/event-stream": { schema: { type: "string" } } } },
+      },
+    },
+  },
+};
+
+const storedSweep = { type: "object", required: ["sweepId"], properties: { sweepId: { type: "string" } } };
+
+const profileSchemas = {
+  SweepRequest: {
+    type: "object",
+    required: ["mechanismId", "profile"],
+    additionalProperties: false,
+    properties: {
+      mechanismId: { type: "string", examples: ["reference", "oxygen-chlorine"] },
+      profile: {
+        oneOf: [
+          { type: "object", required: ["kind"], properties: { kind: { const: "standard" } } },
+          { type: "object", required: ["kind", "id"], properties: { kind: { const: "demo" }, id: { type: "string" } } },
+          {
+            type: "object",
+            required: ["kind", "csv"],
+            properties: {
+              kind: { const: "csv" },
+              csv: { type: "string", description: "profile CSV, see docs/profile-format.md; at most 512 KiB" },
+              name: { type: "string", description: "file name used in error paths" },
+            },
+          },
+        ],
+      },
+      grid: {
+        type: "object",
+        additionalProperties: false,
+        properties: {
+          from_km: { type: "number", default: 10, description: "default 10 km, or the profile's lowest level" },
+          to_km: { type: "number", default: 60, description: "default 60 km, or the profile's highest level" },
+          step_km: { type: "number", default: 1, minimum: 0.05 },
+        },
+      },
+      condition: {
+        type: "object",
+        description:
+          "the AnalysisRequest condition without altitude_km, T_K and p_hPa (they come from the profile); held and poolTotals here win over the profile's columns",
+      },
+      options: {
+        type: "object",
+        additionalProperties: false,
+        properties: {
+          fminRelative: { type: "number", default: 1e-4 },
+          oxDefinition: { enum: ["standard", "extended"], default: "standard" },
+          parallel: {
+            enum: ["auto", "sequential"],
+            default: "auto",
+            description: "auto: one contiguous chunk per engine worker",
+          },
+          maxColumnPasses: {
+            type: "integer",
+            default: 3,
+            description: "with O3 solved: passes of the overhead-column iteration",
+          },
+          columnTolerance: { type: "number", default: 0.01 },
+        },
+      },
+    },
+  },
+  ComparisonRequest: {
+    type: "object",
+    required: ["a", "b"],
+    additionalProperties: false,
+    properties: {
+      a: { oneOf: [storedSweep, { $ref: "#/components/schemas/SweepRequest" }] },
+      b: { oneOf: [storedSweep, { $ref: "#/components/schemas/SweepRequest" }] },
+      labels: { type: "object", properties: { a: { type: "string" }, b: { type: "string" } } },
+      topCycles: { type: "integer", minimum: 1, maximum: 50, default: 5 },
+    },
+  },
+  JobStatus: {
+    type: "object",
+    required: ["id", "kind", "state", "done", "total"],
+    properties: {
+      id: { type: "string" },
+      kind: { enum: ["profile-sweep", "comparison"] },
+      state: { enum: ["queued", "running", "done", "failed", "cancelled"] },
+      done: { type: "integer" },
+      total: { type: "integer", description: "may grow while running (another pass over the levels)" },
+      stage: { type: "string" },
+      resultId: { type: "string" },
+      resultKind: { enum: ["profile", "comparison"] },
+      resultUrl: { type: "string", description: "permalink page of the result" },
+      resultApiUrl: { type: "string" },
+      statusUrl: { type: "string" },
+      error: {
+        type: "object",
+        properties: { code: { type: "string" }, message: { type: "string" }, path: { type: "string" } },
+      },
+    },
+  },
+};
 
 export const openApiDocument = {
   openapi: "3.1.0",
@@ -57,7 +268,9 @@ export const openApiDocument = {
     "/api/atmosphere": {
       get: {
         summary: "U.S. Standard Atmosphere 1976 at an altitude",
-        parameters: [{ name: "altitude_km", in: "query", required: true, schema: { type: "number", minimum: 0, maximum: 86 } }],
+        parameters: [
+          { name: "altitude_km", in: "query", required: true, schema: { type: "number", minimum: 0, maximum: 86 } },
+        ],
         responses: { 200: { description: "T_K, p_hPa, M_cm3" }, ...errors(400) },
       },
     },
@@ -71,7 +284,11 @@ export const openApiDocument = {
             "application/json": {
               schema: {
                 oneOf: [
-                  { type: "object", required: ["text"], properties: { text: { type: "string" }, format: { enum: ["yaml", "json"] } } },
+                  {
+                    type: "object",
+                    required: ["text"],
+                    properties: { text: { type: "string" }, format: { enum: ["yaml", "json"] } },
+                  },
                   { type: "object", description: "the JSON form of a mechanism document" },
                 ],
               },
@@ -222,10 +439,14 @@ export const openApiDocument = {
         responses: { 200: { description: "student record" }, ...errors(404) },
       },
     },
+    ...profilePaths,
   },
   components: {
-    parameters: { id: { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,80}$" } } },
+    parameters: {
+      id: { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,80}$" } },
+    },
     schemas: {
+      ...profileSchemas,
       Error: error,
       Diagnostic: {
         type: "object",
@@ -302,16 +523,38 @@ export const openApiDocument = {
             additionalProperties: false,
             properties: {
               altitude_km: { type: "number", minimum: 0, maximum: 86 },
-              T_K: { type: "number", minimum: 150, maximum: 350, description: "default: U.S. Standard Atmosphere 1976" },
+              T_K: {
+                type: "number",
+                minimum: 150,
+                maximum: 350,
+                description: "default: U.S. Standard Atmosphere 1976",
+              },
               p_hPa: { type: "number", exclusiveMinimum: 0, description: "default: U.S. Standard Atmosphere 1976" },
               latitude_deg: { type: "number", minimum: -90, maximum: 90, default: 45 },
               date: { type: "string", format: "date", default: "2026-03-20" },
               localSolarTime_h: { type: "number", minimum: 0, maximum: 24, default: 12 },
-              zenith_deg: { type: "number", minimum: 0, maximum: 180, description: "overrides latitude/date/time for the sun" },
+              zenith_deg: {
+                type: "number",
+                minimum: 0,
+                maximum: 180,
+                description: "overrides latitude/date/time for the sun",
+              },
               mode: { enum: ["instantaneous", "diurnal"], default: "instantaneous" },
-              held: { type: "object", additionalProperties: { type: "number" }, description: "mixing ratios by species" },
-              poolTotals: { type: "object", additionalProperties: { type: "number" }, description: "mixing ratios of atoms by pool (Cly, Bry, NOy)" },
-              J: { type: "object", additionalProperties: { type: "number" }, description: "fixed photolysis frequencies, s-1, by channel" },
+              held: {
+                type: "object",
+                additionalProperties: { type: "number" },
+                description: "mixing ratios by species",
+              },
+              poolTotals: {
+                type: "object",
+                additionalProperties: { type: "number" },
+                description: "mixing ratios of atoms by pool (Cly, Bry, NOy)",
+              },
+              J: {
+                type: "object",
+                additionalProperties: { type: "number" },
+                description: "fixed photolysis frequencies, s-1, by channel",
+              },
               jScale: { type: "number", minimum: 0, default: 1 },
               ozone: { enum: ["held", "solved"], default: "held" },
             },
@@ -320,7 +563,11 @@ export const openApiDocument = {
             type: "object",
             additionalProperties: false,
             properties: {
-              fminRelative: { type: "number", default: 1e-4, description: "pathway threshold, fraction of total Ox loss" },
+              fminRelative: {
+                type: "number",
+                default: 1e-4,
+                description: "pathway threshold, fraction of total Ox loss",
+              },
               oxDefinition: { enum: ["standard", "extended"], default: "standard" },
             },
           },

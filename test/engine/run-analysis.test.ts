@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { standardAtmosphere } from "@/lib/atmosphere";
-import { InputError } from "@/lib/errors";
 import { resolveCondition } from "@/lib/engine/resolve-condition";
 import { runAnalysis } from "@/lib/engine/run-analysis";
 import type { AnalysisRequest } from "@/lib/engine/types";
+import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { expectClose } from "../helpers/close";
 
@@ -39,14 +39,23 @@ describe("resolving a condition", () => {
   it("uses a zenith angle given directly and computes the sun otherwise", () => {
     expect(resolveCondition(reference, { altitude_km: 30, zenith_deg: 33 }).zenith_deg).toBe(33);
     // Equinox noon at 45°N: the zenith angle is close to the latitude (common practice; declination ≈ 0 on 20 March)
-    const noon = resolveCondition(reference, { altitude_km: 30, latitude_deg: 45, date: "2026-03-20", localSolarTime_h: 12 });
+    const noon = resolveCondition(reference, {
+      altitude_km: 30,
+      latitude_deg: 45,
+      date: "2026-03-20",
+      localSolarTime_h: 12,
+    });
     expect(Math.abs(noon.zenith_deg - 45)).toBeLessThan(1);
   });
 
   it("throws if an override names an unknown species, pool or photolysis channel", () => {
     expect(() => resolveCondition(reference, { altitude_km: 30, held: { Xx: 1e-9 } })).toThrow(InputError);
-    expect(() => resolveCondition(reference, { altitude_km: 30, poolTotals: { Iy: 1e-12 } })).toThrow(/unknown pool Iy/);
-    expect(() => resolveCondition(reference, { altitude_km: 30, J: { XYZ: 1e-3 } })).toThrow(/unknown photolysis channel/);
+    expect(() => resolveCondition(reference, { altitude_km: 30, poolTotals: { Iy: 1e-12 } })).toThrow(
+      /unknown pool Iy/,
+    );
+    expect(() => resolveCondition(reference, { altitude_km: 30, J: { XYZ: 1e-3 } })).toThrow(
+      /unknown photolysis channel/,
+    );
     expect(() => resolveCondition(reference, { altitude_km: 30, held: { ClO: 1e-9 } })).toThrow(/solved/);
   });
 });

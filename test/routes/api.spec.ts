@@ -2,7 +2,10 @@ import { expect, test } from "@playwright/test";
 
 // Route tests against the really started production server (playwright.config.ts webServer). No mocks.
 
-const at40 = { mechanismId: "reference", condition: { altitude_km: 40, latitude_deg: 45, date: "2026-03-20", localSolarTime_h: 12 } };
+const at40 = {
+  mechanismId: "reference",
+  condition: { altitude_km: 40, latitude_deg: 45, date: "2026-03-20", localSolarTime_h: 12 },
+};
 
 test.describe("service routes", () => {
   test("health answers JSON with versions and the built-in mechanisms", async ({ request }) => {
@@ -19,7 +22,13 @@ test.describe("service routes", () => {
   test("the OpenAPI document describes every route", async ({ request }) => {
     const doc = await (await request.get("/api/openapi.json")).json();
     expect(doc.openapi).toBe("3.1.0");
-    for (const p of ["/api/mechanisms", "/api/mechanisms/{id}", "/api/analyses", "/api/analyses/{id}", "/api/analyses/{id}/rates.csv"])
+    for (const p of [
+      "/api/mechanisms",
+      "/api/mechanisms/{id}",
+      "/api/analyses",
+      "/api/analyses/{id}",
+      "/api/analyses/{id}/rates.csv",
+    ])
       expect(Object.keys(doc.paths)).toContain(p);
   });
 
@@ -53,7 +62,9 @@ test.describe("service routes", () => {
     expect((await (await request.get(`/api/analyses/${id}/species.csv`)).text()).split("\r\n")[0]).toContain(
       "number_density (molecules cm-3)",
     );
-    expect((await (await request.get(`/api/analyses/${id}/cycles.csv`)).text()).split("\r\n")[0]).toContain("chain_length");
+    expect((await (await request.get(`/api/analyses/${id}/cycles.csv`)).text()).split("\r\n")[0]).toContain(
+      "chain_length",
+    );
     const json = await request.get(`/api/analyses/${id}.json`);
     expect(json.headers()["content-disposition"]).toContain("attachment");
     expect((await json.json()).id).toBe(id);
@@ -79,17 +90,26 @@ test.describe("service routes", () => {
   });
 
   test("unknown ids are 404 with a JSON error", async ({ request }) => {
-    for (const url of ["/api/analyses/AAAAAAAAAAAAAAAA", "/api/mechanisms/m-0000", "/api/analyses/AAAAAAAAAAAAAAAA/rates.csv"]) {
+    for (const url of [
+      "/api/analyses/AAAAAAAAAAAAAAAA",
+      "/api/mechanisms/m-0000",
+      "/api/analyses/AAAAAAAAAAAAAAAA/rates.csv",
+    ]) {
       const r = await request.get(url);
       expect(r.status(), url).toBe(404);
       expect((await r.json()).error.code).toBe("not-found");
     }
-    const r = await request.post("/api/analyses", { data: { mechanismId: "no-such-mechanism", condition: { altitude_km: 30 } } });
+    const r = await request.post("/api/analyses", {
+      data: { mechanismId: "no-such-mechanism", condition: { altitude_km: 30 } },
+    });
     expect(r.status()).toBe(404);
   });
 
   test("a body that is not JSON, or too large, is refused", async ({ request }) => {
-    const bad = await request.post("/api/analyses", { data: "{not json", headers: { "content-type": "application/json" } });
+    const bad = await request.post("/api/analyses", {
+      data: "{not json",
+      headers: { "content-type": "application/json" },
+    });
     expect(bad.status()).toBe(400);
     expect((await bad.json()).error.code).toBe("invalid-json");
     const big = await request.post("/api/analyses", {
@@ -103,7 +123,9 @@ test.describe("service routes", () => {
   test("50 concurrent analyses all complete, and equal conditions give equal numbers", async ({ request }) => {
     const altitudes = Array.from({ length: 50 }, (_, i) => 20 + (i % 5) * 10);
     const responses = await Promise.all(
-      altitudes.map((z) => request.post("/api/analyses", { data: { mechanismId: "reference", condition: { altitude_km: z } } })),
+      altitudes.map((z) =>
+        request.post("/api/analyses", { data: { mechanismId: "reference", condition: { altitude_km: z } } }),
+      ),
     );
     const bodies = await Promise.all(responses.map((r) => r.json()));
     for (const r of responses) expect(r.status()).toBe(201);

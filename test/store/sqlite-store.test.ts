@@ -44,7 +44,14 @@ describe("the SQLite store", () => {
 
   it("keeps analyses immutable: a second write under the same id is refused", () => {
     const s = openSqliteStore(tempFile());
-    const a = { id: newRecordId(), mechanismId: mech.id, engineVersion: "0.1.0", request: { a: 1 }, result: { b: [1, 2] }, createdAt: "x" };
+    const a = {
+      id: newRecordId(),
+      mechanismId: mech.id,
+      engineVersion: "0.1.0",
+      request: { a: 1 },
+      result: { b: [1, 2] },
+      createdAt: "x",
+    };
     s.putAnalysis(a);
     expect(() => s.putAnalysis({ ...a, result: { b: [3] } })).toThrow();
     expect(s.getAnalysis(a.id)?.result).toEqual({ b: [1, 2] });

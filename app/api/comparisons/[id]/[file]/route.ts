@@ -1,0 +1,13 @@
+import { csvResponse, notFound, respond } from "@/lib/service/http";
+import { comparisonExport } from "@/lib/service/profiles";
+
+export const dynamic = "force-dynamic";
+
+export async function GET(_req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
+  const { id, file } = await ctx.params;
+  return respond(() => {
+    const out = comparisonExport(id, file);
+    if (!out) throw notFound("export", file);
+    return csvResponse(out.csv, out.filename);
+  });
+}

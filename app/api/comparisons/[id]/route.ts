@@ -1,0 +1,20 @@
+import { respond } from "@/lib/service/http";
+import { getComparisonRecord } from "@/lib/service/profiles";
+
+export const dynamic = "force-dynamic";
+
+export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(() => {
+    const json = id.endsWith(".json");
+    const record = getComparisonRecord(json ? id.slice(0, -5) : id);
+    return json
+      ? new Response(JSON.stringify(record, null, 2), {
+          headers: {
+            "content-type": "application/json",
+            "content-disposition": `attachment; filename="comparison-${record.id}.json"`,
+          },
+        })
+      : Response.json(record);
+  });
+}

@@ -1,0 +1,21 @@
+import { respond } from "@/lib/service/http";
+import { getProfileRecord } from "@/lib/service/profiles";
+
+export const dynamic = "force-dynamic";
+
+export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(() => {
+    // "/api/profiles/{id}.json" arrives here with the suffix: the full JSON download.
+    const json = id.endsWith(".json");
+    const record = getProfileRecord(json ? id.slice(0, -5) : id);
+    return json
+      ? new Response(JSON.stringify(record, null, 2), {
+          headers: {
+            "content-type": "application/json",
+            "content-disposition": `attachment; filename="profile-${record.id}.json"`,
+          },
+        })
+      : Response.json(record);
+  });
+}

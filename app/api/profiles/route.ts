@@ -1,0 +1,17 @@
+import { readJsonBody, respond } from "@/lib/service/http";
+import { startSweep } from "@/lib/service/jobs";
+import { MAX_PROFILE_BODY, profileCatalogue } from "@/lib/service/profiles";
+
+export const dynamic = "force-dynamic";
+
+export function GET() {
+  return respond(() => Response.json(profileCatalogue()));
+}
+
+/** Starts a sweep: 202 with the job to poll. */
+export function POST(req: Request) {
+  return respond(async () => {
+    const job = await startSweep(await readJsonBody(req, MAX_PROFILE_BODY));
+    return Response.json(job, { status: 202, headers: { location: job.statusUrl } });
+  });
+}

@@ -1,0 +1,111 @@
+/**
+ * The process's job back end (embedded: in memory, compute in the engine
+ * pool) with the handlers of every long job kind. Routes submit and read
+ * jobs only through this module, so another back end (a Redis queue) can
+ * replace the embedded one here.
+ */
+import "server-only";
+import { EmbeddedJobBackend } from "../jobs/embeddedBackend";
+import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
+import { notFound } from "./http";
+import { comparisonJob, comparisonPath, profilePath, sweepJob, validateComparison, validateSweep } from "./profiles";
+
+const HANDLERS: Record<string, JobHandler<never>> = {
+  "profile-sweep": sweepJob as JobHandler<never>,
+  comparison: comparisonJob as JobHandler<never>,
+};
+
+const KEY = Symbol.for("ozone.jobBackend");
+
+/** The process-wide back end (kept on globalThis so that every route module sees the same one). */
+export function jobBackend(): JobBackend {
+  const g = globalThis as unknown as Record<symbol, JobBackend | undefined>;
+  g[KEY] ??= new EmbeddedJobBackend(HANDLERS);
+  return g[KEY];
+}
+
+/** A job's status as the routes return it, with the result's links when done. */
+export interface JobView extends JobStatus {
+  /** GET this to poll */
+  statusUrl: string;
+  /** the permalink page of the result, when done */
+  resultUrl?: string;
+  /** the stored result as JSON, when done */
+  resultApiUrl?: string;
+}
+
+export function jobView(s: JobStatus): JobView {
+  const view: JobView = { ...s, statusUrl: `/api/jobs/${s.id}` };
+  if (s.state === "done" && s.resultId) {
+    view.resultUrl = s.resultKind === "comparison" ? comparisonPath(s.resultId) : profilePath(s.resultId);
+    view.resultApiUrl =
+      s.resultKind === "comparison" ? `/api/comparisons/${s.resultId}` : `/api/profiles/${s.resultId}`;
+  }
+  return view;
+}
+
+export async function startSweep(body: unknown): Promise<JobView> {
+  return jobView(await jobBackend().submit("profile-sweep", validateSweep(body)));
+}
+
+export async function startComparison(body: unknown): Promise<JobView> {
+  return jobView(await jobBackend().submit("comparison", validateComparison(body)));
+}
+
+const JOB_ID = /^[A-Za-z0-9_-]{16}$/;
+
+export async function getJob(id: string): Promise<JobView> {
+  const s = JOB_ID.test(id) ? await jobBackend().status(id) : null;
+  if (!s) throw notFound("job", id);
+  return jobView(s);
+}
+
+export async function cancelJob(id: string): Promise<JobView> {
+  const s = JOB_ID.test(id) ? await jobBackend().cancel(id) : null;
+  if (!s) throw notFound("job", id);
+  return jobView(s);
+}
+
+/** Server-sent events of a job's status until it ends. */
+export function jobEvents(id: string, signal: AbortSignal): Response {
+  if (!JOB_ID.test(id)) throw notFound("job", id);
+  const encoder = new TextEncoder();
+  let unsubscribe = () => {};
+  const stream = new ReadableStream<Uint8Array>({
+    start(controller) {
+      let closed = false;
+      const close = () => {
+        if (closed) return;
+        closed = true;
+        unsubscribe();
+        controller.close();
+      };
+      let seen = false;
+      unsubscribe = jobBackend().watch(id, (s) => {
+        seen = true;
+        if (closed) return;
+        controller.enqueue(encoder.encode(`event: status\ndata: ${JSON.stringify(jobView(s))}\n\n`));
+        if (s.state === "done" || s.state === "failed" || s.state === "cancelled") queueMicrotask(close);
+      });
+      if (!seen) {
+        controller.enqueue(
+          encoder.encode(
+            `event: error\ndata: ${JSON.stringify({ code: "not-found", message: `no job with id ${id}` })}\n\n`,
+          ),
+        );
+        close();
+      }
+      signal.addEventListener("abort", close);
+    },
+    cancel() {
+      unsubscribe();
+    },
+  });
+  return new Response(stream, {
+    headers: {
+      "content-type": "text/event-stream; charset=utf-8",
+      "cache-control": "no-cache, no-transform",
+      connection: "keep-alive",
+    },
+  });
+}

@@ -1,0 +1,302 @@
+/**
+ * Profile sweeps and comparisons: validate the request (nothing is queued
+ * unless the profile, the grid and the mechanism fit), run the levels in the
+ * engine pool as a job, and store the result immutably under an unguessable
+ * id (record kinds "profile" and "comparison"). A level that fails is part
+ * of the stored result, not a failed job.
+ */
+import "server-only";
+import type { DemoProfile } from "../atmosphere/types";
+import { compileSource, type MechanismSource } from "../engine/mechanism-source";
+import { enginePool, POOL_DEFAULTS } from "../engine/pool";
+import { resolveCondition } from "../engine/resolve-condition";
+import { ENGINE_VERSION } from "../engine/version";
+import { InputError } from "../errors";
+import type { JobContext } from "../jobs/types";
+import { builtinProfiles, resolveProfileSpec } from "../profiles/builtinProfiles";
+import { compareSweeps } from "../profiles/compareSweeps";
+import { comparisonCsv, sweepCyclesCsv, sweepLevelsCsv } from "../profiles/csvTables";
+import { planSweep, type SweepPlan } from "../profiles/planSweep";
+import { profileToCsv } from "../profiles/profileToCsv";
+import { parseComparisonRequest, parseSweepRequest } from "../profiles/requestSchema";
+import { runSweep, type SweepExecutor, type SweepProgress } from "../profiles/runSweep";
+import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
+import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { notFound } from "./http";
+import { mechanismSource } from "./mechanisms";
+
+export const PROFILE_KIND = "profile";
+export const COMPARISON_KIND = "comparison";
+/** Largest sweep or comparison body, bytes (two CSV profiles of up to 512 KiB each, with room). */
+export const MAX_PROFILE_BODY = 1.5 * 1024 * 1024;
+
+export const profilePath = (id: string) => `/profiles/${id}`;
+export const comparisonPath = (id: string) => `/compare/${id}`;
+
+const DEMOS: readonly DemoProfile[] = [];
+
+/** The default profile and the invented demo profiles, with their CSV form. */
+export function listProfiles(): Profile[] {
+  return builtinProfiles(DEMOS);
+}
+
+export function demoProfiles(): readonly DemoProfile[] {
+  return DEMOS;
+}
+
+interface Prepared {
+  request: SweepRequest;
+  src: MechanismSource;
+  profile: Profile;
+  plan: SweepPlan;
+}
+
+/** Checks everything a sweep needs before it is queued; `path` prefixes error paths (e.g. "a"). */
+function prepareSweep(request: SweepRequest, path = ""): Prepared {
+  const at = (p: string) => (path ? `${path}.${p}` : p);
+  let src: MechanismSource;
+  try {
+    src = mechanismSource(request.mechanismId);
+  } catch {
+    throw new InputError(at("mechanismId"), `unknown mechanism ${request.mechanismId}`, "unknown-mechanism");
+  }
+  const mech = compileSource(src);
+  const profile = resolveProfileSpec(request.profile, DEMOS, at("profile"));
+  let plan: SweepPlan;
+  try {
+    plan = planSweep(request, profile, mech);
+  } catch (e) {
+    if (e instanceof InputError && path)
+      throw new InputError(at(e.path ?? ""), e.message.slice((e.path ?? "").length + 2));
+    throw e;
+  }
+  // request-wide overrides (held, poolTotals, J) are checked once here, not failed at every level
+  try {
+    resolveCondition(mech, plan.tasks[0].request.condition);
+  } catch (e) {
+    if (e instanceof InputError) {
+      const p = (e.path ?? "").replace(/^condition\./, "condition.");
+      throw new InputError(at(p), e.message.slice((e.path ?? "").length + 2));
+    }
+    throw e;
+  }
+  return { request, src, profile, plan };
+}
+
+function poolExecutor(src: MechanismSource): SweepExecutor {
+  return {
+    workers: POOL_DEFAULTS.size,
+    run: async (batch) => (await enginePool().run({ kind: "profile-levels", mechanism: src, batch })).result,
+  };
+}
+
+async function runPrepared(
+  p: Prepared,
+  signal: AbortSignal,
+  onProgress: (q: SweepProgress) => void,
+): Promise<SweepResult> {
+  return runSweep(
+    p.plan,
+    poolExecutor(p.src),
+    {
+      engineVersion: ENGINE_VERSION,
+      mechanism: { id: p.src.id, title: p.src.title },
+      profile: {
+        id: p.profile.id,
+        title: p.profile.title,
+        source: p.profile.source,
+        demo: p.profile.demo,
+        note: p.profile.note,
+      },
+    },
+    {
+      parallel: p.request.options?.parallel,
+      maxColumnPasses: p.request.options?.maxColumnPasses,
+      columnTolerance: p.request.options?.columnTolerance,
+      signal,
+      onProgress,
+    },
+  );
+}
+
+const stageOf = (q: SweepProgress) => (q.pass > 1 ? `levels, pass ${q.pass} (overhead O3 column)` : "levels");
+
+export interface ProfileRecordBody {
+  request: SweepRequest;
+  profile: Profile;
+  result: SweepResult;
+}
+
+function storeSweep(p: Prepared, result: SweepResult): string {
+  const id = newRecordId();
+  // the CSV text is kept once, as the parsed profile
+  const request: SweepRequest =
+    p.request.profile.kind === "csv"
+      ? { ...p.request, profile: { kind: "csv", csv: "", name: p.request.profile.name } }
+      : p.request;
+  const body: ProfileRecordBody = { request, profile: p.profile, result };
+  getStore().putRecord({
+    id,
+    kind: PROFILE_KIND,
+    engineVersion: ENGINE_VERSION,
+    body,
+    createdAt: new Date().toISOString(),
+  });
+  return id;
+}
+
+/** Parses and checks a sweep request; throws InputError (400) before anything is queued. */
+export function validateSweep(body: unknown): SweepRequest {
+  const request = parseSweepRequest(body);
+  prepareSweep(request);
+  return request;
+}
+
+/** Job handler "profile-sweep". */
+export async function sweepJob(input: SweepRequest, ctx: JobContext) {
+  const p = prepareSweep(input);
+  const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)));
+  if (ctx.signal.aborted) throw ctx.signal.reason;
+  return { resultId: storeSweep(p, result), resultKind: PROFILE_KIND };
+}
+
+/** Parses and checks a comparison request; stored sides must exist. */
+export function validateComparison(body: unknown): ComparisonRequest {
+  const request = parseComparisonRequest(body);
+  for (const key of ["a", "b"] as const) {
+    const side = request[key];
+    if ("sweepId" in side) getProfileRecord(side.sweepId, `${key}.sweepId`);
+    else prepareSweep(side, key);
+  }
+  return request;
+}
+
+export interface ComparisonRecordBody {
+  request: ComparisonRequest;
+  result: ComparisonResult;
+}
+
+/** Job handler "comparison": runs the sides that are not stored yet (each stored as a sweep), then compares. */
+export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
+  const prepared = (["a", "b"] as const).map((key) => {
+    const side = input[key];
+    return "sweepId" in side ? null : prepareSweep(side, key);
+  });
+  const done = [0, 0];
+  const totals = prepared.map((p) => p?.plan.tasks.length ?? 0);
+  const sides: { id: string; result: SweepResult }[] = [];
+  for (const [k, key] of (["a", "b"] as const).entries()) {
+    const side = input[key];
+    const p = prepared[k];
+    if ("sweepId" in side || !p) {
+      const rec = getProfileRecord((side as { sweepId: string }).sweepId, `${key}.sweepId`);
+      sides.push({ id: rec.id, result: rec.body.result });
+      continue;
+    }
+    const result = await runPrepared(p, ctx.signal, (q) => {
+      done[k] = q.done;
+      totals[k] = q.total;
+      ctx.progress(done[0] + done[1], totals[0] + totals[1], `${key.toUpperCase()}: ${stageOf(q)}`);
+    });
+    if (ctx.signal.aborted) throw ctx.signal.reason;
+    sides.push({ id: storeSweep(p, result), result });
+  }
+  const result = compareSweeps(sides[0].result, sides[1].result, {
+    labels: input.labels,
+    topCycles: input.topCycles,
+    sweepIds: { a: sides[0].id, b: sides[1].id },
+    engineVersion: ENGINE_VERSION,
+  });
+  const id = newRecordId();
+  const body: ComparisonRecordBody = {
+    request: { ...input, a: { sweepId: sides[0].id }, b: { sweepId: sides[1].id } },
+    result,
+  };
+  getStore().putRecord({
+    id,
+    kind: COMPARISON_KIND,
+    engineVersion: ENGINE_VERSION,
+    body,
+    createdAt: new Date().toISOString(),
+  });
+  return { resultId: id, resultKind: COMPARISON_KIND };
+}
+
+export interface StoredProfileRecord {
+  id: string;
+  createdAt: string;
+  engineVersion: string;
+  currentEngineVersion: string;
+  body: ProfileRecordBody;
+}
+
+export function getProfileRecord(id: string, path = "id"): StoredProfileRecord {
+  const r = ID_PATTERN.test(id) ? getStore().getRecord(PROFILE_KIND, id) : null;
+  if (!r) {
+    const e = notFound("profile sweep", id);
+    if (path !== "id") throw new InputError(path, `no stored profile sweep with id ${id}`, "not-found");
+    throw e;
+  }
+  return {
+    id: r.id,
+    createdAt: r.createdAt,
+    engineVersion: r.engineVersion,
+    currentEngineVersion: ENGINE_VERSION,
+    body: r.body as ProfileRecordBody,
+  };
+}
+
+export interface StoredComparisonRecord {
+  id: string;
+  createdAt: string;
+  engineVersion: string;
+  currentEngineVersion: string;
+  body: ComparisonRecordBody;
+}
+
+export function getComparisonRecord(id: string): StoredComparisonRecord {
+  const r = ID_PATTERN.test(id) ? getStore().getRecord(COMPARISON_KIND, id) : null;
+  if (!r) throw notFound("comparison", id);
+  return {
+    id: r.id,
+    createdAt: r.createdAt,
+    engineVersion: r.engineVersion,
+    currentEngineVersion: ENGINE_VERSION,
+    body: r.body as ComparisonRecordBody,
+  };
+}
+
+/** GET /api/profiles: the profiles offered without an upload, each with its CSV. */
+export function profileCatalogue() {
+  return {
+    profiles: listProfiles().map((p) => ({
+      id: p.id,
+      title: p.title,
+      source: p.source,
+      demo: p.demo,
+      note: p.note,
+      levels: p.levels.length,
+      range_km: [p.levels[0]?.altitude_km ?? 0, p.levels[p.levels.length - 1]?.altitude_km ?? 0],
+      csv: profileToCsv(p),
+    })),
+  };
+}
+
+const PROFILE_EXPORTS = {
+  "levels.csv": (b: ProfileRecordBody) => sweepLevelsCsv(b.result),
+  "cycles.csv": (b: ProfileRecordBody) => sweepCyclesCsv(b.result),
+  "profile.csv": (b: ProfileRecordBody) => profileToCsv(b.profile),
+} as const;
+
+/** A CSV export of a stored sweep: levels.csv, cycles.csv or profile.csv; null for an unknown file. */
+export function profileExport(id: string, file: string): { csv: string; filename: string } | null {
+  const make = PROFILE_EXPORTS[file as keyof typeof PROFILE_EXPORTS];
+  if (!make) return null;
+  return { csv: make(getProfileRecord(id).body), filename: `profile-${id}-${file}` };
+}
+
+/** The CSV export of a stored comparison; null for an unknown file. */
+export function comparisonExport(id: string, file: string): { csv: string; filename: string } | null {
+  if (file !== "comparison.csv") return null;
+  return { csv: comparisonCsv(getComparisonRecord(id).body.result), filename: `comparison-${id}.csv` };
+}
