@@ -102,3 +102,43 @@ export function luSolveTransposed(a: Float64Array, n: number, pivot: Int32Array,
     }
   }
 }
+
+/**
+ * Solves A X = B for an n×m row-major right-hand side B (overwritten by X)
+ * with the factors from `luFactor`; rows of B are combined whole, so the inner
+ * loops run over contiguous memory.
+ */
+export function luSolveMatrix(a: Float64Array, n: number, pivot: Int32Array, b: Float64Array, m: number): void {
+  for (let k = 0; k < n; k++) {
+    const p = pivot[k];
+    if (p !== k) {
+      const rk = k * m;
+      const rp = p * m;
+      for (let c = 0; c < m; c++) {
+        const t = b[rk + c];
+        b[rk + c] = b[rp + c];
+        b[rp + c] = t;
+      }
+    }
+  }
+  for (let i = 1; i < n; i++) {
+    const ri = i * m;
+    for (let j = 0; j < i; j++) {
+      const f = a[i * n + j];
+      if (f === 0) continue;
+      const rj = j * m;
+      for (let c = 0; c < m; c++) b[ri + c] -= f * b[rj + c];
+    }
+  }
+  for (let i = n - 1; i >= 0; i--) {
+    const ri = i * m;
+    for (let j = i + 1; j < n; j++) {
+      const f = a[i * n + j];
+      if (f === 0) continue;
+      const rj = j * m;
+      for (let c = 0; c < m; c++) b[ri + c] -= f * b[rj + c];
+    }
+    const inv = 1 / a[i * n + i];
+    for (let c = 0; c < m; c++) b[ri + c] *= inv;
+  }
+}

@@ -1,4 +1,4 @@
-export { luFactor, luSolve, luSolveTransposed } from "./denseLu";
+export { luFactor, luSolve, luSolveMatrix, luSolveTransposed } from "./denseLu";
 export { INTEGRATE_DEFAULTS, type IntegrateInput, integrate } from "./integrate";
 export {
   type IntegrateOdeHooks,

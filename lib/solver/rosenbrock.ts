@@ -13,7 +13,7 @@
  * RMS norm of the error scaled by atol + rtol·|y| (Hairer & Wanner §IV.8).
  * A dense LU of the n×n iteration matrix is used (n ≤ ~60).
  */
-import { luFactor, luSolve } from "./denseLu";
+import { luFactor, luSolve, luSolveMatrix } from "./denseLu";
 import type { IntegrateOptions, IntegrationResult } from "./types";
 
 export const ROSENBROCK_DEFAULTS = {
@@ -88,7 +88,6 @@ export function propagateTangent(
   const K2 = work.subarray(nn, 2 * nn);
   const K3 = work.subarray(2 * nn, 3 * nn);
   const T = work.subarray(3 * nn, 4 * nn);
-  const col = new Float64Array(n);
   const mul = (src: Float64Array, dst: Float64Array) => {
     dst.fill(0);
     for (let i = 0; i < n; i++) {
@@ -101,13 +100,7 @@ export function propagateTangent(
       }
     }
   };
-  const solveColumns = (M: Float64Array) => {
-    for (let c = 0; c < n; c++) {
-      for (let i = 0; i < n; i++) col[i] = M[i * n + c];
-      luSolve(lu, n, pivot, col);
-      for (let i = 0; i < n; i++) M[i * n + c] = col[i];
-    }
-  };
+  const solveColumns = (M: Float64Array) => luSolveMatrix(lu, n, pivot, M, n);
   mul(S, K1);
   solveColumns(K1);
   for (let q = 0; q < nn; q++) T[q] = S[q] + A21 * K1[q];

@@ -32,10 +32,10 @@ import type { DiurnalOptions, DiurnalSteadyState, SolveConditions, SolveStatus, 
 
 export const DIURNAL_DEFAULTS = {
   samplesPerDay: 96,
-  periodicTolerance: 1e-4,
+  periodicTolerance: 1e-3,
   maxDays: 40,
   rtol: 1e-4,
-  atol: 1e-3,
+  atol: 1,
   reportAt_h: 12,
   /** number density below which a species' day-to-day change is measured absolutely, cm⁻³ */
   periodicFloor_cm3: 1,
@@ -58,6 +58,7 @@ interface DayResult {
   meanRates: Float64Array;
   yReport: Float64Array;
   S?: Float64Array;
+  steps: number;
 }
 
 /** Sets the dominant member of each pool so that Σ w y = total exactly (else rescales the pool). */
@@ -206,6 +207,7 @@ export function solveDiurnal(
       meanRates,
       yReport,
       S,
+      steps: res.acceptedSteps + res.rejectedSteps,
     };
   };
 
@@ -234,25 +236,28 @@ export function solveDiurnal(
   let status: SolveStatus = "max-iterations";
   let message = "";
   let plainNext = true;
+  let steps = 0;
   while (day < maxDays) {
     const useNewton = !plainNext && n > 0;
     const d = runDay(y0, useNewton);
     day++;
     last = d;
+    steps += d.steps;
     if (!d.ok) {
       status = "diverged";
       message = `the integration of day ${day} failed: ${d.message}`;
       break;
     }
-    ({ err, worst } = periodicity(y0, d.y24));
-    if (err <= tol) {
-      status = "converged";
-      message = `periodic to ${err.toExponential(2)} after ${day} day${day > 1 ? "s" : ""}`;
-      break;
+    // The pool totals replace the periodicity rows of the members dominant at midnight.
+    if (chooseReplaced(sys, d.y24, undefined, 2)) {
+      isReplaced.fill(0);
+      for (const c of sys.constraints) isReplaced[c.replaced] = 1;
     }
-    plainNext = false;
+    ({ err, worst } = periodicity(y0, d.y24));
+    // Newton correction (∂Φ/∂y₀ − I) δ = y₀ − Φ(y₀), pool rows replaced by Σ w y₀ = total
     let next = Float64Array.from(d.y24);
-    if (useNewton && d.S && err <= prevErr) {
+    let distance = Number.POSITIVE_INFINITY;
+    if (d.S) {
       for (let i = 0; i < n * n; i++) B[i] = d.S[i];
       for (let i = 0; i < n; i++) {
         B[i * n + i] -= 1;
@@ -261,25 +266,40 @@ export function solveDiurnal(
       for (const c of sys.constraints) {
         const row = c.replaced * n;
         B.fill(0, row, row + n);
-        let s = -c.total;
+        let sum = -c.total;
         for (let q = 0; q < c.members.length; q++) {
           B[row + c.members[q]] += c.weights[q];
-          s += c.weights[q] * y0[c.members[q]];
+          sum += c.weights[q] * y0[c.members[q]];
         }
-        delta[c.replaced] = -s;
+        delta[c.replaced] = -sum;
       }
       if (luFactor(B, n, pivot, 1e-13) < 0) {
         luSolve(B, n, pivot, delta);
+        distance = 0;
         next = new Float64Array(n);
         for (let i = 0; i < n; i++) {
-          const v = y0[i] + delta[i];
-          const floor = 0.05 * Math.min(y0[i], d.y24[i]);
-          next[i] = Number.isFinite(v) ? Math.max(v, floor, 0) : d.y24[i];
+          const scale = Math.max(Math.abs(y0[i]), Math.abs(d.y24[i])) + DIURNAL_DEFAULTS.periodicFloor_cm3;
+          if (Number.isFinite(delta[i])) distance = Math.max(distance, Math.abs(delta[i]) / scale);
+          else distance = Number.POSITIVE_INFINITY;
+          let v = Number.isFinite(delta[i]) ? y0[i] + delta[i] : d.y24[i];
+          // at most a factor 10 per update, never negative
+          if (y0[i] > DIURNAL_DEFAULTS.periodicFloor_cm3) v = Math.min(10 * y0[i], Math.max(0.1 * y0[i], v));
+          next[i] = Math.max(0, v);
         }
       }
-    } else if (useNewton && err > prevErr) {
-      plainNext = true; // the last Newton step made things worse: take a plain day
     }
+    // Periodic when the day-to-day change is small and, where the monodromy is
+    // known, so is the estimated distance to the periodic orbit (slow modes).
+    const settled = err <= tol && (!(d.S && Number.isFinite(distance)) || distance <= tol);
+    if (settled) {
+      status = "converged";
+      message = `periodic to ${err.toExponential(2)} after ${day} day${day > 1 ? "s" : ""}`;
+      break;
+    }
+    if (useNewton && err > 1.5 * prevErr) {
+      plainNext = true; // the last Newton update made things worse: take a plain day
+      next = Float64Array.from(d.y24);
+    } else plainNext = false;
     prevErr = err;
     projectPools(sys, next);
     y0 = next;
@@ -330,6 +350,7 @@ export function solveDiurnal(
     atReportTime,
     reportAt_h,
     daysIntegrated: day,
+    integratorSteps: steps,
     periodicityError: Number.isFinite(err) ? err : 0,
   };
 }

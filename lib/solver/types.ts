@@ -155,6 +155,8 @@ export interface DiurnalSteadyState {
   reportAt_h: number;
   /** days integrated in total (including the spin-up) */
   daysIntegrated: number;
+  /** Rosenbrock steps taken over all days (accepted + rejected) */
+  integratorSteps: number;
   /** max over species of |y(24 h) − y(0 h)| / (|y(0 h)| + atol) after the last day */
   periodicityError: number;
 }
@@ -163,13 +165,13 @@ export interface DiurnalSteadyState {
 export interface DiurnalOptions {
   /** condition samples per day; rate constants are interpolated linearly between them; default 96 (every 15 min) */
   samplesPerDay?: number;
-  /** convergence: periodicity error below this; default 1e-4 */
+  /** convergence: day-to-day change and Newton correction, relative, below this; default 1e-3 */
   periodicTolerance?: number;
   /** maximum days integrated; default 40 */
   maxDays?: number;
   /** Rosenbrock relative tolerance; default 1e-4 */
   rtol?: number;
-  /** Rosenbrock absolute tolerance, cm⁻³; default 1e-3 */
+  /** Rosenbrock absolute tolerance, cm⁻³; default 1 */
   atol?: number;
   /** warm start by mechanism index, cm⁻³ (the state at local midnight); default the instantaneous steady state at 24-h mean rate constants */
   initialState?: readonly number[];
