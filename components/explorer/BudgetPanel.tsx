@@ -4,6 +4,8 @@ import { budgetSeries } from "@/lib/viz/budgetSeries";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
 import { Panel } from "./Panel";
 
+const BAR_W = 92;
+
 export function BudgetPanel({ budget }: { budget: OxBudget | null }) {
   return (
     <Panel
@@ -21,49 +23,70 @@ export function BudgetPanel({ budget }: { budget: OxBudget | null }) {
 }
 
 function BudgetChart({ budget }: { budget: OxBudget }) {
-  const s = budgetSeries(budget, { width_px: 130, rowHeight_px: 20 });
-  const labelW = 92;
-  const top = 4;
+  const s = budgetSeries(budget, { width_px: BAR_W, rowHeight_px: 18, maxFamilies: 5 });
   return (
-    <div data-testid="budget" className="px-3 py-2">
-      <svg
-        width={labelW + s.width + 96}
-        height={s.height + top + 18}
-        role="img"
-        aria-label={`Ox production ${formatNumber(budget.production_cm3s)}, loss ${formatNumber(budget.loss_cm3s)} molecules per cubic centimetre per second`}
-        className="max-w-full text-[11px]"
-      >
-        {s.ticks.map((t) => (
-          <g key={t.x}>
-            <line x1={labelW + t.x} x2={labelW + t.x} y1={top} y2={top + s.height} stroke="#e7e5e0" />
-            <text x={labelW + t.x} y={top + s.height + 12} textAnchor="middle" fill="#78716c" fontSize="10">
-              {t.label}
-            </text>
-          </g>
-        ))}
-        {s.bars.map((b) => (
-          <g key={b.key} transform={`translate(0 ${top + b.y})`}>
-            <text
-              x={b.kind === "family" || b.kind === "unassigned" ? labelW - 6 : labelW - 6}
-              y={13}
-              textAnchor="end"
-              fill={b.kind === "family" || b.kind === "unassigned" ? "#57534e" : "#1c1917"}
-              fontWeight={b.kind === "family" || b.kind === "unassigned" ? 400 : 600}
-            >
-              {b.kind === "family" || b.kind === "unassigned" ? `└ ${b.label}` : b.label}
-            </text>
-            <rect x={labelW} y={3} width={Math.max(b.value > 0 ? 1 : 0, b.width)} height={13} rx={2} fill={b.color} />
-            <text x={labelW + s.width + 6} y={13} fill="#1c1917" className="tabular-nums">
-              {formatNumber(b.value)}
-              {b.fraction !== null && b.kind !== "loss" ? ` (${formatPercent(b.fraction)})` : ""}
-            </text>
-          </g>
-        ))}
-      </svg>
-      <p className="mt-1 text-[11px] text-stone-500">
-        Ox = {budget.definition.join(" + ")}. Loss/production ={" "}
-        {formatNumber(budget.production_cm3s > 0 ? budget.loss_cm3s / budget.production_cm3s : null)}; by rate-limiting
-        steps {formatNumber(budget.directLoss_cm3s)}.
+    <div data-testid="budget" className="px-3 py-2 text-[11px]">
+      <table className="w-full border-collapse">
+        <caption className="sr-only">Odd-oxygen production, loss and loss by family, molecules cm⁻³ s⁻¹</caption>
+        <thead className="sr-only">
+          <tr>
+            <th>term</th>
+            <th>bar</th>
+            <th>rate</th>
+            <th>share of loss</th>
+          </tr>
+        </thead>
+        <tbody>
+          {s.bars.map((b) => {
+            const sub = b.kind === "family" || b.kind === "unassigned";
+            return (
+              <tr key={b.key} className="h-[18px]">
+                <th
+                  scope="row"
+                  className={`max-w-[112px] truncate pr-1.5 text-right ${sub ? "font-normal text-stone-600" : "font-semibold text-stone-900"}`}
+                  title={b.label}
+                >
+                  {sub ? `└ ${b.label}` : b.label}
+                </th>
+                <td className="w-[92px] p-0 align-middle">
+                  <svg width={BAR_W} height={12} aria-hidden className="block">
+                    <rect width={BAR_W} height={12} fill="#f5f4f1" />
+                    <rect width={Math.max(b.value > 0 ? 1 : 0, b.width)} height={12} rx={1.5} fill={b.color} />
+                  </svg>
+                </td>
+                <td className="whitespace-nowrap pl-1.5 text-right tabular-nums text-stone-900">
+                  {formatNumber(b.value)}
+                </td>
+                <td className="whitespace-nowrap pl-1.5 text-right tabular-nums text-stone-500">
+                  {b.fraction !== null && b.kind !== "loss" ? formatPercent(b.fraction) : ""}
+                </td>
+              </tr>
+            );
+          })}
+          <tr aria-hidden>
+            <td />
+            <td className="p-0">
+              <div className="relative h-3.5 text-[10px] text-stone-400">
+                {s.ticks.map((t, i) => (
+                  <span
+                    key={t.x}
+                    className={`absolute whitespace-nowrap ${i === 0 ? "" : "-translate-x-full"}`}
+                    style={{ left: t.x }}
+                  >
+                    {t.label}
+                  </span>
+                ))}
+              </div>
+            </td>
+            <td />
+            <td />
+          </tr>
+        </tbody>
+      </table>
+      <p className="mt-1 text-stone-500">
+        Ox = {budget.definition.join(" + ")}. Loss ÷ production ={" "}
+        {formatNumber(budget.production_cm3s > 0 ? budget.loss_cm3s / budget.production_cm3s : null)}; loss by the
+        rate-limiting-step formula {formatNumber(budget.directLoss_cm3s)}.
       </p>
     </div>
   );

@@ -14,9 +14,9 @@ import { Panel } from "./Panel";
 
 /** Amount fields offered when the mechanism has them: id, kind, display unit and factor to mol/mol. */
 const AMOUNTS: { id: string; kind: "pool" | "held"; unit: string; factor: number; label: string }[] = [
-  { id: "Cly", kind: "pool", unit: "ppbv", factor: 1e-9, label: "Cly total (Cl atoms)" },
-  { id: "Bry", kind: "pool", unit: "pptv", factor: 1e-12, label: "Bry total (Br atoms)" },
-  { id: "NOy", kind: "pool", unit: "ppbv", factor: 1e-9, label: "NOy total (N atoms)" },
+  { id: "Cly", kind: "pool", unit: "ppbv", factor: 1e-9, label: "Cly" },
+  { id: "Bry", kind: "pool", unit: "pptv", factor: 1e-12, label: "Bry" },
+  { id: "NOy", kind: "pool", unit: "ppbv", factor: 1e-9, label: "NOy" },
   { id: "H2O", kind: "held", unit: "ppmv", factor: 1e-6, label: "H2O" },
   { id: "CH4", kind: "held", unit: "ppmv", factor: 1e-6, label: "CH4" },
 ];

@@ -244,7 +244,7 @@ export function Explorer(props: Props) {
             </button>
           </div>
         ) : null}
-        <div className="relative min-h-[440px] flex-1 overflow-hidden rounded-md border border-stone-300 bg-white">
+        <div className="relative min-h-[400px] flex-1 overflow-hidden rounded-md border border-stone-300 bg-white">
           {mechanism && layout ? (
             <NetworkView
               ref={net}
@@ -302,9 +302,6 @@ export function Explorer(props: Props) {
               />
             </div>
           ) : null}
-          <div className="pointer-events-none absolute bottom-2 left-2">
-            <LegendCard legend={legend} />
-          </div>
           {analysis.loading ? (
             <div
               data-testid="computing"
@@ -314,6 +311,7 @@ export function Explorer(props: Props) {
             </div>
           ) : null}
         </div>
+        <LegendCard legend={legend} empty={!result} />
         <ExportBar analysisId={analysis.id} onPng={onPng} onSvg={onSvg} busy={analysis.loading} />
       </div>
 

@@ -59,7 +59,7 @@ export function ExportBar({ analysisId, onPng, onSvg, busy }: Props) {
           <span className="text-stone-400">available once the analysis is stored</span>
         )}
       </span>
-      <span className="flex min-w-0 flex-1 items-center gap-1">
+      <span className="flex min-w-0 flex-[1_1_300px] items-center gap-1">
         <label htmlFor="permalink" className="text-stone-500">
           Permalink
         </label>

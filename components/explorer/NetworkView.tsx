@@ -79,7 +79,6 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
         layout: { name: "preset" },
         minZoom: 0.15,
         maxZoom: 4,
-        wheelSensitivity: 0.3,
         boxSelectionEnabled: false,
         autoungrabify: false,
         selectionType: "single",
@@ -115,14 +114,30 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
     if (cyRef.current) apply(cyRef.current, elements, highlight, selected);
   }, [elements, highlight, selected]);
 
+  // a newly chosen cycle is brought into view; clearing it returns to the whole network
+  const hlKey = highlight.on.join(" ");
+  const lastKey = useRef("");
+  useEffect(() => {
+    const cy = cyRef.current;
+    if (!cy || hlKey === lastKey.current) return;
+    lastKey.current = hlKey;
+    let target = cy.collection();
+    if (hlKey) for (const id of hlKey.split(" ")) target = target.union(cy.getElementById(id));
+    else target = cy.elements();
+    cy.stop();
+    cy.animate({ fit: { eles: target, padding: hlKey ? 70 : 24 } }, { duration: 350 });
+  }, [hlKey]);
+
   return (
-    <div
-      ref={box}
-      data-testid="network"
-      className="absolute inset-0"
-      role="img"
-      aria-label="Reaction network: species chips grouped by family, reaction hexagons between them; click one to inspect it"
-    />
+    <div className="absolute inset-0">
+      <div
+        ref={box}
+        data-testid="network"
+        className="h-full w-full"
+        role="img"
+        aria-label="Reaction network: species chips grouped by family, reaction hexagons between them; click one to inspect it"
+      />
+    </div>
   );
 });
 

@@ -57,7 +57,7 @@ export function NumberField({
             }}
             aria-label={`Reset ${label} to the default`}
           >
-            default
+            reset
           </button>
         ) : null}
       </label>

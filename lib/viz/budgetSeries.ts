@@ -1,6 +1,7 @@
 /**
  * Series of the odd-oxygen budget chart: production, loss, and the loss of
- * each family (largest first, then the part in pathways below the threshold),
+ * each family (largest first, the smallest summed into one row, then the part in
+ * pathways below the threshold),
  * as horizontal bars on one linear axis with "nice" ticks (1, 2, 5 × 10ⁿ,
  * common practice). Rates in molecules cm⁻³ s⁻¹; geometry in px.
  */
@@ -14,6 +15,8 @@ export const BUDGET_DEFAULTS = {
   width_px: 220,
   /** row height, px; default 22 */
   rowHeight_px: 22,
+  /** families drawn one by one, largest first; the rest are summed into one row; default 6 */
+  maxFamilies: 6,
 };
 
 export interface BudgetBar {
@@ -63,28 +66,45 @@ export function budgetSeries(budget: OxBudget, options: Partial<typeof BUDGET_DE
       color: produced,
     },
     { key: "loss", label: "Ox loss", kind: "loss", value: budget.loss_cm3s, fraction: 1, color: destroyed },
-    ...[...budget.byFamily]
-      .sort((a, b) => b.oxLoss_cm3s - a.oxLoss_cm3s || a.family.localeCompare(b.family))
-      .map((f) => ({
-        key: `family:${f.family}`,
-        label: f.family,
-        kind: "family" as const,
-        value: f.oxLoss_cm3s,
-        fraction: f.fraction,
-        color: lighter,
-      })),
   ];
-  if (budget.unassignedLoss_cm3s > 0) {
+  const fams = [...budget.byFamily]
+    .filter((f) => f.family !== "unassigned")
+    .sort((a, b) => b.oxLoss_cm3s - a.oxLoss_cm3s || a.family.localeCompare(b.family));
+  const shown = fams.slice(0, o.maxFamilies);
+  const rest = fams.slice(o.maxFamilies);
+  for (const f of shown) {
+    rows.push({
+      key: `family:${f.family}`,
+      label: f.family,
+      kind: "family",
+      value: f.oxLoss_cm3s,
+      fraction: f.fraction,
+      color: lighter,
+    });
+  }
+  if (rest.length) {
+    rows.push({
+      key: "family:other",
+      label: `${rest.length} other famil${rest.length === 1 ? "y" : "ies"}`,
+      kind: "family",
+      value: rest.reduce((a, f) => a + f.oxLoss_cm3s, 0),
+      fraction: rest.reduce((a, f) => a + f.fraction, 0),
+      color: lighter,
+    });
+  }
+  // the engine may report the part below the threshold as a family of its own or only as a total
+  const unassigned = budget.byFamily.find((f) => f.family === "unassigned")?.oxLoss_cm3s ?? budget.unassignedLoss_cm3s;
+  if (unassigned > 0) {
     rows.push({
       key: "unassigned",
       label: "below threshold",
       kind: "unassigned",
-      value: budget.unassignedLoss_cm3s,
-      fraction: budget.loss_cm3s > 0 ? budget.unassignedLoss_cm3s / budget.loss_cm3s : 0,
+      value: unassigned,
+      fraction: budget.loss_cm3s > 0 ? unassigned / budget.loss_cm3s : 0,
       color: "#b8b5ad",
     });
   }
   const bars = rows.map((r, i) => ({ ...r, y: i * o.rowHeight_px, width: scale(r.value) }));
-  const ticks = [0, 0.5, 1].map((f) => ({ x: Math.round(f * o.width_px), label: formatNumber(f * max, 2) }));
+  const ticks = [0, 1].map((f) => ({ x: Math.round(f * o.width_px), label: formatNumber(f * max, 2) }));
   return { bars, ticks, max, width: o.width_px, height: rows.length * o.rowHeight_px };
 }

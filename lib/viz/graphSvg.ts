@@ -11,8 +11,8 @@ export const SVG_DEFAULTS = {
   margin_px: 40,
   /** space between a frame and its chips, px; default 26 */
   framePadding_px: 26,
-  /** chip height, px; default 28 */
-  chipHeight_px: 28,
+  /** chip height, px; default 30 */
+  chipHeight_px: 30,
   /** background colour; default white */
   background: "#ffffff",
 };
@@ -93,7 +93,7 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
     const fo = o.dimmed?.has(d.id) ? ' opacity="0.45"' : "";
     out.push(
       `<g class="frame"${fo}><rect x="${tx(b.x0)}" y="${ty(b.y0)}" width="${f(b.x1 - b.x0)}" height="${f(b.y1 - b.y0)}" rx="10" fill="${d.fill}" stroke="${d.stroke}" stroke-opacity="0.35"/>` +
-        `<text x="${tx((b.x0 + b.x1) / 2)}" y="${ty(b.y0 - 7)}" text-anchor="middle" font-size="13" font-weight="600" fill="${d.stroke}">${esc(d.label)}</text></g>`,
+        `<text x="${tx((b.x0 + b.x1) / 2)}" y="${ty(b.y0 - 7)}" text-anchor="middle" font-size="16" font-weight="600" fill="${d.stroke}">${esc(d.label)}</text></g>`,
     );
   }
   for (const el of elements) {
@@ -167,7 +167,7 @@ function chip(
   const dash = d.spectator ? ' stroke-dasharray="4 3"' : "";
   return (
     `<g class="species"${op}><polygon points="${pts}" fill="${d.fill}" stroke="${d.stroke}" stroke-width="1.5"${dash}/>` +
-    `<text x="${tx(p.x)}" y="${ty(p.y + 4)}" text-anchor="middle" font-size="12" font-weight="${d.spectator ? 400 : 600}" fill="${d.ink}">${esc(d.label)}</text></g>`
+    `<text x="${tx(p.x)}" y="${ty(p.y + 5)}" text-anchor="middle" font-size="15" font-weight="${d.spectator ? 400 : 600}" fill="${d.ink}">${esc(d.label)}</text></g>`
   );
 }
 

@@ -1,4 +1,5 @@
 export * from "./budgetSeries";
+export * from "./chipWidth";
 export * from "./colorSpace";
 export * from "./cycleHighlight";
 export * from "./divergingColor";

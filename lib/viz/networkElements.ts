@@ -9,6 +9,7 @@
  * size = log flux in both modes. Rates in molecules cm⁻³ s⁻¹.
  */
 import type { AnalysisResult } from "../engine/types";
+import { chipWidth } from "./chipWidth";
 import { divergingColor } from "./divergingColor";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
@@ -160,6 +161,3 @@ export function networkElements(
 }
 
 const round = (v: number) => Math.round(v * 100) / 100;
-
-/** Chip width for a label at 12 px system sans, px (about 7.4 px a character). */
-export const chipWidth = (label: string): number => Math.max(40, Math.round(label.length * 7.4 + 20));

@@ -2,27 +2,29 @@
  * Deterministic preset layout of the species–reaction network.
  *
  * Method (this project's): each family is a block of species on a small grid;
- * blocks sit on a fixed board with odd oxygen in the middle, the radical
- * families at the corners, sources above, reservoirs below and held species
- * at the right. Reaction nodes go to the centroid of the solved species they
+ * blocks sit on a fixed 3-column board with odd oxygen in the middle, the
+ * radical families at the corners, sources above, reservoirs below, organic
+ * radicals at the left, bath gases at the right and end products at the
+ * bottom. Reaction nodes go to the centroid of the solved species they
  * touch, then move along a golden-angle spiral to the first free spot.
  * Positions depend on the mechanism only, never on the numbers, so the
  * picture stays put while the altitude changes. Units: px.
  */
+import { CHIP_HEIGHT_PX, chipWidth } from "./chipWidth";
 import { familyOf, familyRank } from "./familyOf";
 import { parseEquation } from "./parseEquation";
 import type { MechanismView, Point } from "./types";
 
 export const LAYOUT_DEFAULTS = {
-  /** horizontal distance between species in a block, px; default 108 */
-  cellWidth_px: 108,
-  /** vertical distance between species in a block, px; default 72 */
-  cellHeight_px: 72,
-  /** free space between blocks for reaction nodes, px; default 200 */
-  gap_px: 200,
-  /** smallest distance from a reaction node to a species centre, px; default 34 */
-  clearSpecies_px: 34,
-  /** smallest distance between two reaction nodes, px; default 24 */
+  /** horizontal distance between species in a block, px; default 100 */
+  cellWidth_px: 100,
+  /** vertical distance between species in a block, px; default 64 */
+  cellHeight_px: 64,
+  /** free space between blocks for reaction nodes, px; default 150 */
+  gap_px: 150,
+  /** smallest free margin between a reaction node's centre and a species chip's edge, px; default 14 */
+  clearSpecies_px: 14,
+  /** smallest distance between two reaction node centres, px; default 24 */
   clearReaction_px: 24,
 };
 
@@ -33,20 +35,20 @@ const SLOTS: Record<string, [number, number]> = {
   HOx: [0, 0],
   source: [1, 0],
   NOx: [2, 0],
-  bath: [3, 0],
   organic: [0, 1],
   Ox: [1, 1],
-  held: [3, 1],
+  bath: [2, 1],
   ClOx: [0, 2],
   reservoir: [1, 2],
   BrOx: [2, 2],
-  product: [3, 2],
+  held: [0, 3],
+  product: [1, 3],
 };
 const SPARE_SLOTS: [number, number][] = [
-  [2, 1],
-  [0, 3],
-  [1, 3],
   [2, 3],
+  [3, 0],
+  [3, 1],
+  [3, 2],
   [3, 3],
 ];
 
@@ -91,7 +93,7 @@ export function networkLayout(
   const dims = new Map<string, { cols: number; rows: number; w: number; h: number }>();
   for (const f of families) {
     const n = byFamily.get(f)!.length;
-    const cols = Math.max(1, Math.ceil(Math.sqrt(n * 1.6)));
+    const cols = Math.max(1, Math.ceil(Math.sqrt(n / 1.2)));
     const rows = Math.ceil(n / cols);
     dims.set(f, { cols, rows, w: cols * o.cellWidth_px, h: rows * o.cellHeight_px });
   }
@@ -140,7 +142,11 @@ export function networkLayout(
   }
 
   const reactions: NetworkLayout["reactions"] = {};
-  const occupied: { p: Point; r: number }[] = Object.values(species).map((p) => ({ p, r: o.clearSpecies_px }));
+  const occupied: Box[] = drawn.map((s) => ({
+    p: species[s.id],
+    hw: chipWidth(s.label || s.id) / 2 + o.clearSpecies_px,
+    hh: CHIP_HEIGHT_PX / 2 + o.clearSpecies_px,
+  }));
   const solved = new Set(drawn.filter((s) => s.role === "solved").map((s) => s.id));
   for (const rx of mech.reactions) {
     const eq = parseEquation(rx.equation);
@@ -150,25 +156,36 @@ export function networkLayout(
     const start = use.length
       ? { x: mean(use.map((id) => species[id].x)), y: mean(use.map((id) => species[id].y)) }
       : { x: 0, y: -o.gap_px };
-    const p = freeSpot(start, occupied, o.clearReaction_px);
+    const p = freeSpot(start, occupied);
     reactions[rx.id] = p;
-    occupied.push({ p, r: o.clearReaction_px });
+    occupied.push({ p, hw: o.clearReaction_px, hh: o.clearReaction_px, round: true });
   }
   return { species, reactions, frames };
 }
 
 const GOLDEN_ANGLE = Math.PI * (3 - Math.sqrt(5));
 
-function freeSpot(start: Point, occupied: { p: Point; r: number }[], own: number): Point {
-  for (let i = 0; i < 2000; i++) {
+/** A keep-out zone: a box of half-sizes hw × hh around p, or a disc of radius hw when round. */
+interface Box {
+  p: Point;
+  hw: number;
+  hh: number;
+  round?: boolean;
+}
+
+const blocked = (b: Box, c: Point) =>
+  b.round ? Math.hypot(b.p.x - c.x, b.p.y - c.y) < b.hw : Math.abs(b.p.x - c.x) < b.hw && Math.abs(b.p.y - c.y) < b.hh;
+
+function freeSpot(start: Point, occupied: Box[]): Point {
+  for (let i = 0; i < 4000; i++) {
     const rad = 9 * Math.sqrt(i);
     const cand = {
       x: round(start.x + rad * Math.cos(i * GOLDEN_ANGLE)),
       y: round(start.y + rad * Math.sin(i * GOLDEN_ANGLE)),
     };
-    if (occupied.every(({ p, r }) => Math.hypot(p.x - cand.x, p.y - cand.y) >= Math.max(r, own))) return cand;
+    if (!occupied.some((b) => blocked(b, cand))) return cand;
   }
-  return start;
+  return { x: round(start.x), y: round(start.y) };
 }
 
 const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;

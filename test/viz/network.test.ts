@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { CHIP_HEIGHT_PX, chipWidth } from "@/lib/viz/chipWidth";
 import { cycleHighlight } from "@/lib/viz/cycleHighlight";
 import { familyOf } from "@/lib/viz/familyOf";
 import { IDLE_COLOR, networkElements } from "@/lib/viz/networkElements";
@@ -70,10 +71,16 @@ describe("networkLayout", () => {
     for (const r of fixtureMechanism.reactions) expect(layout.reactions[r.id]).toBeDefined();
   });
 
-  it("keeps reaction nodes clear of species and of each other", () => {
-    const sp = Object.values(layout.species);
+  it("keeps reaction nodes off the species chips and apart from each other", () => {
     const rx = Object.values(layout.reactions);
-    for (const r of rx) for (const s of sp) expect(Math.hypot(r.x - s.x, r.y - s.y)).toBeGreaterThanOrEqual(34);
+    for (const s of fixtureMechanism.species.filter((x) => layout.species[x.id])) {
+      const p = layout.species[s.id];
+      for (const r of rx) {
+        const inside =
+          Math.abs(r.x - p.x) < chipWidth(s.label) / 2 + 10 && Math.abs(r.y - p.y) < CHIP_HEIGHT_PX / 2 + 10;
+        expect(inside, `${s.id} vs reaction at ${r.x},${r.y}`).toBe(false);
+      }
+    }
     for (let i = 0; i < rx.length; i++)
       for (let j = i + 1; j < rx.length; j++)
         expect(Math.hypot(rx[i].x - rx[j].x, rx[i].y - rx[j].y)).toBeGreaterThanOrEqual(24);

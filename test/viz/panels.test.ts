@@ -51,6 +51,36 @@ describe("budgetSeries", () => {
     expect(s.max).toBeGreaterThanOrEqual(2.92e6);
   });
 
+  it("sums the smallest families into one row and keeps the total (identity)", () => {
+    const many = {
+      ...fixtureResult.cycles.budget,
+      byFamily: ["Ox", "HOx", "NOx", "ClOx", "BrOx", "ClOx-BrOx", "NOx-HOx"].map((family, i) => ({
+        family,
+        oxLoss_cm3s: 10 ** (6 - i * 0.3),
+        fraction: 0.1,
+      })),
+    };
+    const t = budgetSeries(many, { maxFamilies: 3 });
+    const fam = t.bars.filter((b) => b.kind === "family");
+    expect(fam.map((b) => b.key)).toEqual(["family:Ox", "family:HOx", "family:NOx", "family:other"]);
+    expect(fam.at(-1)!.label).toBe("4 other families");
+    expectClose(
+      fam.reduce((a, b) => a + b.value, 0),
+      many.byFamily.reduce((a, f) => a + f.oxLoss_cm3s, 0),
+      { rel: 1e-12 },
+    );
+  });
+
+  it("shows an 'unassigned' family reported by the engine once, as the below-threshold row", () => {
+    const withUn = {
+      ...fixtureResult.cycles.budget,
+      byFamily: [...fixtureResult.cycles.budget.byFamily, { family: "unassigned", oxLoss_cm3s: 5e4, fraction: 0.017 }],
+    };
+    const keys = budgetSeries(withUn).bars.map((b) => b.key);
+    expect(keys.filter((k) => k.includes("unassigned"))).toEqual(["unassigned"]);
+    expect(budgetSeries(withUn).bars.find((b) => b.key === "unassigned")!.value).toBe(5e4);
+  });
+
   it("rounds the axis up to 1, 2, 2.5 or 5 times a power of ten", () => {
     expect(niceMax(2.92e6)).toBe(5e6);
     expect(niceMax(1.1e3)).toBe(2e3);
