@@ -42,6 +42,8 @@ export interface NewtonLogSettings {
   tolerance: number;
   maxNewtonIterations: number;
   maxPtcSteps: number;
+  /** convergence also needs the last Newton step max |δ ln x| below this */
+  stepTolerance: number;
   /** start in the Newton phase (warm start) */
   startWithNewton: boolean;
 }
@@ -206,8 +208,15 @@ export function newtonLog(
   });
   if (!Number.isFinite(norm)) return result(false, -1, true);
 
+  // Converged when the residual is small and the last Newton step (≈ the error
+  // in ln x) is below stepTolerance: rows dominated by fast cycling (O ⇄ O3)
+  // can have a tiny scaled residual while the slow balance is still off.
+  let lastNewtonStep = Number.POSITIVE_INFINITY;
   while (newtonIterations < settings.maxNewtonIterations && ptcSteps < settings.maxPtcSteps) {
-    if (norm <= settings.tolerance) return result(true);
+    if (norm <= settings.tolerance) {
+      if (lastNewtonStep <= settings.stepTolerance) return result(true);
+      tau = Number.POSITIVE_INFINITY; // polish with Newton steps
+    }
     const newton = !Number.isFinite(tau);
     const bad = step(sys, tau, ws);
     if (bad >= 0) {
@@ -226,6 +235,11 @@ export function newtonLog(
       let maxStep = 0;
       for (let i = 0; i < n; i++) maxStep = Math.max(maxStep, Math.abs(ws.du[i]));
       if (maxStep > 1e6) lambda = 1e6 / maxStep;
+      if (maxStep <= settings.stepTolerance && norm <= settings.tolerance) {
+        trial(u, ws.du, 1, u, NEWTON_DEFAULTS.maxLogStep);
+        norm = evaluateResidual(sys, kEff, u, ws);
+        return result(true);
+      }
       while (lambda >= 1 / 256) {
         trial(u, ws.du, lambda, ws.uTrial, NEWTON_DEFAULTS.maxLogStep);
         const m = evaluateResidual(sys, kEff, ws.uTrial, ws);
@@ -238,14 +252,15 @@ export function newtonLog(
           u.set(ws.uTrial);
           norm = m;
           accepted = true;
+          lastNewtonStep = lambda * maxStep;
           break;
         }
         lambda /= 2;
       }
       if (!accepted) {
         norm = evaluateResidual(sys, kEff, u, ws);
-        // Round-off floor: the Newton step is negligible and the residual small.
-        if (maxStep < 1e-11 && norm < 1e-7) return result(true);
+        // Round-off floor: no descent possible while the residual is already small.
+        if (norm <= settings.tolerance || (maxStep < 1e-11 && norm < 1e-7)) return result(true);
         if (++fallbacks > 5) break;
         tau = 1e3 * 10 ** fallbacks;
       }

@@ -26,6 +26,8 @@ import type { SolveConditions, SolveStatus, SteadyState, SteadyStateOptions } fr
 export const STEADY_STATE_DEFAULTS = {
   /** max |(P − L)/(P + L)| at convergence */
   residualTolerance: 1e-10,
+  /** and max |δ ln x| of the last Newton step (≈ relative error of the number densities) */
+  stepTolerance: 1e-9,
   /** Newton iterations after the cold start */
   maxIterations: 60,
   /** pseudo-transient continuation steps */
@@ -35,8 +37,9 @@ export const STEADY_STATE_DEFAULTS = {
 };
 
 function checkOptions(mech: CompiledMechanism, o: SteadyStateOptions): void {
-  if (o.residualTolerance !== undefined && !(o.residualTolerance > 0 && o.residualTolerance < 1)) {
-    throw new InputError("options.residualTolerance", `must be in (0, 1), got ${o.residualTolerance}`);
+  for (const key of ["residualTolerance", "stepTolerance"] as const) {
+    const v = o[key];
+    if (v !== undefined && !(v > 0 && v < 1)) throw new InputError(`options.${key}`, `must be in (0, 1), got ${v}`);
   }
   for (const key of ["maxIterations", "maxColdStartSteps"] as const) {
     const v = o[key];
@@ -160,6 +163,7 @@ export function solveSteadyState(
   const u = new Float64Array(n);
   const settings = {
     tolerance,
+    stepTolerance: options.stepTolerance ?? STEADY_STATE_DEFAULTS.stepTolerance,
     maxNewtonIterations: options.maxIterations ?? STEADY_STATE_DEFAULTS.maxIterations,
     maxPtcSteps: options.maxColdStartSteps ?? STEADY_STATE_DEFAULTS.maxColdStartSteps,
     startWithNewton: warm,

@@ -97,6 +97,8 @@ export interface SteadyStateOptions {
   initialState?: readonly number[];
   /** convergence: max-norm of the scaled residual (P − L)/(P + L), dimensionless; default 1e-10 */
   residualTolerance?: number;
+  /** convergence also needs the last Newton step max |δ ln x| (≈ relative error of the number densities) below this; default 1e-9 */
+  stepTolerance?: number;
   /** maximum Newton iterations after the cold start; default 60 */
   maxIterations?: number;
   /** maximum pseudo-transient continuation steps of the cold start; default 200 */
