@@ -16,7 +16,11 @@ const solved = new Map<number, { state: SteadyState; held: string[] }>();
 function stateAt(z: number) {
   let s = solved.get(z);
   if (!s) {
-    const res = runAnalysis(mech, { id: "reference", title: mech.title }, { mechanismId: "reference", condition: { altitude_km: z } });
+    const res = runAnalysis(
+      mech,
+      { id: "reference", title: mech.title },
+      { mechanismId: "reference", condition: { altitude_km: z } },
+    );
     s = { state: res.steadyState, held: Object.keys(res.condition.held_cm3) };
     solved.set(z, s);
   }
@@ -30,7 +34,10 @@ const profile = Array.from({ length: 51 }, (_, i) => 10 + i);
  * slow exchange Xi → X(i+1), with rates from a fixed pseudo-random sequence.
  * Only the pathway count matters here, the numbers are invented.
  */
-function generated(n: number): { mech: CompiledMechanism; state: Pick<SteadyState, "numberDensity_cm3" | "rate_cm3s"> } {
+function generated(n: number): {
+  mech: CompiledMechanism;
+  state: Pick<SteadyState, "numberDensity_cm3" | "rate_cm3s">;
+} {
   const species: Species[] = [
     { id: "O", label: "O", role: "held", atoms: { O: 1 } },
     { id: "O3", label: "O3", role: "held", atoms: { O: 3 } },
@@ -66,9 +73,43 @@ function generated(n: number): { mech: CompiledMechanism; state: Pick<SteadyStat
     const a = 1e6 * (1 + rnd());
     const b = 0.3 * a * rnd();
     const c = 0.2 * a * rnd();
-    add(`A${i}`, [[`X${i}`, 1], ["O3", 1]], [[`Y${i}`, 1], ["O2", 1]], a + b + c);
-    add(`B${i}`, [[`Y${i}`, 1], ["O", 1]], [[`X${i}`, 1], ["O2", 1]], a);
-    add(`C${i}`, [[`Y${i}`, 1], [`Y${j}`, 1]], [[`X${i}`, 1], [`X${j}`, 1], ["O2", 1]], b);
+    add(
+      `A${i}`,
+      [
+        [`X${i}`, 1],
+        ["O3", 1],
+      ],
+      [
+        [`Y${i}`, 1],
+        ["O2", 1],
+      ],
+      a + b + c,
+    );
+    add(
+      `B${i}`,
+      [
+        [`Y${i}`, 1],
+        ["O", 1],
+      ],
+      [
+        [`X${i}`, 1],
+        ["O2", 1],
+      ],
+      a,
+    );
+    add(
+      `C${i}`,
+      [
+        [`Y${i}`, 1],
+        [`Y${j}`, 1],
+      ],
+      [
+        [`X${i}`, 1],
+        [`X${j}`, 1],
+        ["O2", 1],
+      ],
+      b,
+    );
     add(`D${i}`, [[`Y${i}`, 1]], [[`Y${j}`, 1]], c);
   }
   const numberDensity_cm3 = species.map(() => 1e7);
