@@ -38,7 +38,7 @@ describe("question templates", () => {
     ]);
     // invented rates: R5 = loss, R6 = 0.6·loss, so R6 is the slower step
     expect(built.value).toBe("R6");
-    expect(built.accepted).toEqual(["b", "NO2 + O -> NO + O2"]);
+    expect(built.accepted).toEqual(["b", "NO2 + O → NO + O2", "NO2 + O -> NO + O2"]);
   });
 
   test("a cycle question reports a problem when the cycle is absent instead of inventing an answer", () => {

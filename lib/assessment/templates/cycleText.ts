@@ -22,13 +22,19 @@ export function stepsInMechanismOrder(result: AnalysisResult, cycle: CatalyticCy
   );
 }
 
+/** An equation as printed for students: a real arrow instead of "->". */
+export function printedEquation(equation: string): string {
+  return equation.replace(/\s*->\s*/g, " → ");
+}
+
 export function stepText(s: { equation: string; multiplicity: number }): string {
-  return s.multiplicity > 1 ? `${s.multiplicity} × (${s.equation})` : s.equation;
+  const eq = printedEquation(s.equation);
+  return s.multiplicity > 1 ? `${s.multiplicity} × (${eq})` : eq;
 }
 
 /** "Cl + O3 -> ClO + O2; ClO + O -> Cl + O2 (net: O + O3 -> 2 O2)" */
 export function cycleDescription(result: AnalysisResult, cycle: CatalyticCycle): string {
-  return `${stepsInMechanismOrder(result, cycle).map(stepText).join("; ")} (net: ${cycle.netEquation})`;
+  return `${stepsInMechanismOrder(result, cycle).map(stepText).join("; ")} (net: ${printedEquation(cycle.netEquation)})`;
 }
 
 export function lettered(items: { value: string; text: string }[]): Choice[] {

@@ -4,7 +4,15 @@
  * slowest step (exact); the student may write its letter or its equation.
  */
 import type { QuestionTemplate } from "../types";
-import { converged, familyText, findCycle, lettered, stepsInMechanismOrder, stepText } from "./cycleText";
+import {
+  converged,
+  familyText,
+  findCycle,
+  lettered,
+  printedEquation,
+  stepsInMechanismOrder,
+  stepText,
+} from "./cycleText";
 
 export const rateLimitingStep: QuestionTemplate = {
   kind: "rate-limiting-step",
@@ -26,10 +34,10 @@ export const rateLimitingStep: QuestionTemplate = {
       return { ok: false, problem: `the rate-limiting step ${cycle.rateLimitingStep} is not a step of the cycle` };
     return {
       ok: true,
-      text: `The ${familyText(cycle.family)} cycle below, with net reaction ${cycle.netEquation}, runs at these conditions. Which of its steps limits the rate of the whole cycle? Write the letter of the step.`,
+      text: `The ${familyText(cycle.family)} cycle below, with net reaction ${printedEquation(cycle.netEquation)}, runs at these conditions. Which of its steps limits the rate of the whole cycle? Write the letter of the step.`,
       choices,
       value: answer.value,
-      accepted: [answer.letter, answer.text],
+      accepted: [answer.letter, answer.text, steps.find((s) => s.reactionId === answer.value)?.equation ?? answer.text],
     };
   },
 };
