@@ -108,6 +108,20 @@ export function solveSteadyState(
   if (n === 0) return report("converged", "every species is held: nothing to solve", 0, 0, 0);
 
   const structure = structuralChecks(sys, kEff);
+  // Members of a pool without a total that nothing makes: the total is what is missing.
+  for (const p of sys.unconstrainedPools) {
+    const pool = mech.pools[p];
+    const missing = pool.weights.filter((t) => structure.noSource.includes(sys.unknownOf[t.species]));
+    if (missing.length === 0) continue;
+    coldGuess(sys, kEff, cond.M_cm3, structure.reachable, ws, x);
+    return report(
+      "no-steady-state",
+      `no steady state: ${missing.map((t) => mech.species[t.species].id).join(", ")} ${missing.length > 1 ? "are" : "is"} set only by the total of ${pool.id} (${pool.expression}), which the conditions do not give: give conditions.poolTotals_cm3.${pool.id}`,
+      0,
+      1,
+      0,
+    );
+  }
   if (structure.noSource.length > 0) {
     // Solve the rest with the source-less species at 0, and say so.
     const ids = structure.noSource.map((i) => mech.species[sys.unknownSpecies[i]].id);

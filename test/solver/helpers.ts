@@ -180,3 +180,29 @@ export function conditions30km(overrides: { J_s?: Record<string, number> } = {})
     poolTotals_cm3: { Cly: 3e-9 * M_cm3 },
   };
 }
+
+/** Cl and ClO only, exchanging through O3 and O: Cl + ClO is exactly conserved (invented test set, JPL-like constants). */
+export function clOxMechanism(): CompiledMechanism {
+  return makeMechanism({
+    species: [
+      { id: "Cl", role: "solved", atoms: { Cl: 1 } },
+      { id: "ClO", role: "solved", atoms: { Cl: 1, O: 1 } },
+      { id: "O3", role: "held", atoms: { O: 3 } },
+      { id: "O", role: "held", atoms: { O: 1 } },
+      { id: "O2", role: "held", atoms: { O: 2 } },
+    ],
+    reactions: [
+      { id: "C1", equation: "Cl + O3 -> ClO + O2", rate: arr(2.3e-11, 200) },
+      { id: "C2", equation: "ClO + O -> Cl + O2", rate: arr(2.8e-11, -85) },
+    ],
+    pools: [{ id: "ClOx", weights: { Cl: 1, ClO: 1 } }],
+  });
+}
+
+/** Every number in a value (recursively), for "never NaN or Infinity" checks. */
+export function allNumbers(value: unknown, out: number[] = []): number[] {
+  if (typeof value === "number") out.push(value);
+  else if (Array.isArray(value)) for (const v of value) allNumbers(v, out);
+  else if (value && typeof value === "object") for (const v of Object.values(value)) allNumbers(v, out);
+  return out;
+}
