@@ -5,7 +5,7 @@ export { comparisonCsv, csvTable, sweepCyclesCsv, sweepLevelsCsv } from "./csvTa
 export { fromDemoProfile } from "./fromDemoProfile";
 export { interpolateProfile } from "./interpolateProfile";
 export { GRID_DEFAULTS, levelGrid } from "./levelGrid";
-export { profileOzoneColumns, solvedOzoneColumns } from "./ozoneColumns";
+export { profileOzoneColumns } from "./ozoneColumns";
 export { KNOWN_POOLS, parseColumnHeader } from "./parseColumnHeader";
 export { PARSE_PROFILE_DEFAULTS, type ParseProfileOptions, parseProfileCsv } from "./parseProfileCsv";
 export { type MechanismShape, planSweep, type SweepPlan } from "./planSweep";

@@ -5,18 +5,21 @@
  * workers; each chunk runs from its top level down, each level warm-started
  * from the one above, and the chunks run side by side. Levels are sent in
  * small batches so that progress and cancellation are per level. With O3
- * solved, the overhead O3 column is recomputed from the solved O3 after each
- * pass and the levels are solved again, each warm-started from its own
- * previous state, until no column changes by more than the tolerance
- * (a fixed-point iteration; the number of passes is reported).
+ * solved, each level's overhead O3 column is integrated from the freshest O3
+ * of the levels above it (solved in this pass where the chunk has reached
+ * them, else from the previous pass, else the climatology): a Gauss–Seidel
+ * fixed-point iteration, repeated with each level warm-started from its own
+ * previous state until no column changes by more than the tolerance (the
+ * number of passes is reported).
  */
-import { ozoneColumnAbove_cm2 } from "../atmosphere";
+import { climatologyMixingRatio, columnsAboveLevels, ozoneColumnAbove_cm2, standardAtmosphere } from "../atmosphere";
 import { familyRank } from "../viz/familyOf";
-import { solvedOzoneColumns } from "./ozoneColumns";
 import type { SweepPlan } from "./planSweep";
 import type { LevelBatch, LevelBatchResult } from "./runLevelBatch";
 import { splitChunks } from "./splitChunks";
+import { failedLevel } from "./summariseLevel";
 import type { SweepLevel, SweepResult } from "./types";
+import { airDensityOf_cm3 } from "./units";
 
 export const SWEEP_DEFAULTS = {
   /** levels per message to a worker; default 1 (progress and cancellation per level) */
@@ -80,8 +83,13 @@ export async function runSweep(
   let levels: SweepLevel[] = new Array(n);
   let states: (number[] | null)[] = new Array(n).fill(null);
   let Ms: (number | null)[] = new Array(n).fill(null);
-  let columns: number[] | undefined;
-  let density: number[] | undefined;
+  const solved = plan.ozone === "solved";
+  const z = plan.altitudes_km;
+  // O3 density by level (increasing altitude): the climatology's until a level has solved its own
+  const density = solved ? z.map((zi, i) => climatologyO3_cm3(plan, i, zi)) : [];
+  const columnAbove = (i: number) =>
+    columnsAboveLevels(z, density, { columnAboveTop_cm2: ozoneColumnAbove_cm2(z[n - 1]) })[i];
+  const used: number[] = new Array(n).fill(0);
   let passes = 0;
 
   for (let pass = 1; pass <= maxPasses; pass++) {
@@ -99,18 +107,33 @@ export async function runSweep(
         for (let s = 0; s < chunk.length; s += o.batchSize) {
           if (options.signal?.aborted) throw options.signal.reason ?? new Error("cancelled");
           const idx = chunk.slice(s, s + o.batchSize);
+          // solved O3: the column from the freshest O3 of the levels above (this pass where already solved)
+          if (solved) for (const i of idx) used[i] = columnAbove(i);
           const tasks = idx.map((i) => ({
             ...plan.tasks[i],
-            ...(columns ? { o3ColumnAbove_cm2: columns[i] } : {}),
+            ...(solved ? { o3ColumnAbove_cm2: used[i] } : {}),
             ...(pass > 1 && prevStates[i]
               ? { initialState: prevStates[i] as number[], initialM_cm3: prevMs[i] ?? undefined }
               : {}),
           }));
-          const out = await executor.run({ tasks, initialState: state, initialM_cm3: stateM });
+          let out: LevelBatchResult;
+          try {
+            out = await executor.run({ tasks, initialState: state, initialM_cm3: stateM });
+          } catch (e) {
+            // a batch the executor could not run (time limit, worker failure) fails its levels only
+            if (options.signal?.aborted) throw options.signal.reason ?? e;
+            out = {
+              levels: tasks.map((t) => failedLevel(t.request, e)),
+              states: tasks.map(() => null),
+              M_cm3: tasks.map(() => null),
+            };
+          }
           idx.forEach((i, k) => {
             nextLevels[i] = out.levels[k];
             nextStates[i] = out.states[k];
             nextMs[i] = out.M_cm3[k];
+            const o3 = solved ? solvedO3(out.levels[k]) : undefined;
+            if (o3 !== undefined) density[i] = o3;
             if (out.states[k]) {
               state = out.states[k];
               stateM = out.M_cm3[k];
@@ -124,13 +147,9 @@ export async function runSweep(
     levels = nextLevels;
     states = nextStates;
     Ms = nextMs;
-    if (plan.ozone !== "solved") break;
-    const prevColumns = columns ?? plan.altitudes_km.map((z) => ozoneColumnAbove_cm2(z));
-    const next = solvedOzoneColumns(levels, density);
-    density = next.density_cm3;
-    const change = Math.max(
-      ...next.column_cm2.map((c, i) => Math.abs(c - prevColumns[i]) / Math.max(prevColumns[i], 1)),
-    );
+    if (!solved) break;
+    const settled = z.map((_, i) => columnAbove(i));
+    const change = Math.max(...settled.map((c, i) => Math.abs(c - used[i]) / Math.max(used[i], 1)));
     if (change <= o.columnTolerance) break;
     if (pass === maxPasses) {
       warnings.push(
@@ -138,7 +157,6 @@ export async function runSweep(
       );
       break;
     }
-    columns = next.column_cm2;
     progress.total += n;
     options.onProgress?.({ ...progress });
   }
@@ -173,4 +191,17 @@ export async function runSweep(
 /** An executor that runs batches in this thread (tests, benchmarks, one-worker comparisons). */
 export function inlineExecutor(run: (batch: LevelBatch) => LevelBatchResult, workers = 1): SweepExecutor {
   return { workers, run: async (batch) => run(batch) };
+}
+
+function solvedO3(l: SweepLevel): number | undefined {
+  if (l.status !== "converged") return undefined;
+  const v = l.species.find((s) => s.id === "O3")?.numberDensity_cm3;
+  return v !== undefined && Number.isFinite(v) && v >= 0 ? v : undefined;
+}
+
+function climatologyO3_cm3(plan: SweepPlan, i: number, z_km: number): number {
+  const c = plan.tasks[i].request.condition;
+  const M =
+    c.T_K !== undefined && c.p_hPa !== undefined ? airDensityOf_cm3(c.p_hPa, c.T_K) : standardAtmosphere(z_km).M_cm3;
+  return climatologyMixingRatio("O3", z_km) * M;
 }
