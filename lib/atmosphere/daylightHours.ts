@@ -20,6 +20,8 @@ export interface DaylightInput {
   latitude_deg: number;
   /** day of year, 1–366 */
   dayOfYear: number;
+  /** calendar year; default 2026 */
+  year?: number;
   /** zenith angle that counts as sunrise/sunset, degrees; default 90.833 */
   sunriseZenith_deg?: number;
 }
@@ -32,7 +34,7 @@ export function daylightHours(input: DaylightInput): number {
     throw new InputError("sunriseZenith_deg", `daylightHours: sunrise zenith ${z0}° is outside 0–180°`);
   }
   const lat = input.latitude_deg * RAD;
-  const decl = solarDeclination(input.dayOfYear, 12) * RAD;
+  const decl = solarDeclination(input.dayOfYear, 12, input.year) * RAD;
   const denom = Math.cos(lat) * Math.cos(decl);
   if (Math.abs(denom) < 1e-12) {
     // at a pole: the sun circles at elevation δ

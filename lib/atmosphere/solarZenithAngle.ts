@@ -1,7 +1,7 @@
 /**
  * Solar zenith angle for a latitude, day of year and local solar time:
- * cos θ = sin φ sin δ + cos φ cos δ cos h, with the NOAA declination, equation
- * of time and hour angle (NOAA GML "General Solar Position Calculations").
+ * cos θ = sin φ sin δ + cos φ cos δ cos h, with the declination, equation of
+ * time and hour angle of the NOAA Solar Calculator (solarCoordinates.ts).
  * Geometric angle: no refraction. Units: degrees (0–180).
  */
 import { InputError } from "../errors";
@@ -21,8 +21,14 @@ export function checkLatitude(latitude_deg: number): void {
 /** Solar zenith angle, degrees (geometric, 0–180). */
 export function solarZenithAngle(input: SolarPositionInput): number {
   checkLatitude(input.latitude_deg);
-  const decl = solarDeclination(input.dayOfYear, input.localSolarTime_h) * RAD;
-  const ha = hourAngle_deg(input.dayOfYear, input.localSolarTime_h, input.apparentTime ?? false) * RAD;
+  const ut_h = input.localSolarTime_h - (input.longitude_deg ?? 0) / 15;
+  const decl = solarDeclination(input.dayOfYear, ut_h, input.year) * RAD;
+  const ha =
+    hourAngle_deg(input.dayOfYear, input.localSolarTime_h, {
+      apparentTime: input.apparentTime,
+      longitude_deg: input.longitude_deg,
+      year: input.year,
+    }) * RAD;
   const lat = input.latitude_deg * RAD;
   const c = Math.sin(lat) * Math.sin(decl) + Math.cos(lat) * Math.cos(decl) * Math.cos(ha);
   return Math.acos(Math.max(-1, Math.min(1, c))) / RAD;

@@ -58,6 +58,10 @@ export interface SolarPositionInput {
   localSolarTime_h: number;
   /** true when localSolarTime_h is apparent (true) solar time, so the equation of time is not applied; default false */
   apparentTime?: boolean;
+  /** longitude, degrees east, used only to find Universal Time for the Sun's declination; default 0 */
+  longitude_deg?: number;
+  /** calendar year; default 2026 */
+  year?: number;
 }
 
 /** A profile of an invented demonstration atmosphere. */

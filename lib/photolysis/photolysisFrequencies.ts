@@ -31,7 +31,6 @@ export function photolysisFrequencies(input: PhotolysisInput, options: Photolysi
   const out: Record<string, number> = {};
   const sunlit = fillActinicFlux(resolveColumns(input), options, WORK);
   const { flux, o2Absorbed } = WORK;
-  const n = WAVELENGTH_GRID.n;
   const { k, w } = temperatureWeights(input.T_K);
   for (const id of ids) {
     if (fixed[id] !== undefined) {
@@ -43,13 +42,14 @@ export function photolysisFrequencies(input: PhotolysisInput, options: Photolysi
       continue;
     }
     let J = 0;
+    const [first, end] = SPECTRAL_TABLES.binRange[id];
     const table = SPECTRAL_TABLES.fixed[id];
     if (table) {
-      for (let i = 0; i < n; i++) J += table[i] * flux[i];
+      for (let i = first; i < end; i++) J += table[i] * flux[i];
     } else {
       const lo = SPECTRAL_TABLES.byTemperature[id][k];
       const hi = SPECTRAL_TABLES.byTemperature[id][k + 1];
-      for (let i = 0; i < n; i++) J += (lo[i] + w * (hi[i] - lo[i])) * flux[i];
+      for (let i = first; i < end; i++) J += (lo[i] + w * (hi[i] - lo[i])) * flux[i];
     }
     if (id === "O2") {
       for (let i = WAVELENGTH_GRID.srFirst; i < WAVELENGTH_GRID.srEnd; i++) J += o2Absorbed[i];

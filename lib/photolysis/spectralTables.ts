@@ -40,6 +40,8 @@ export interface SpectralTables {
   srMax: Float64Array;
   /** Rayleigh cross section per bin, cm² */
   rayleigh: Float64Array;
+  /** per channel, the first and one-past-last bin with σ·φ > 0 (the J sum skips the rest) */
+  binRange: Record<string, [number, number]>;
 }
 
 const G = WAVELENGTH_GRID;
@@ -134,7 +136,24 @@ function buildTables(): SpectralTables {
   for (const c of PHOTOLYSIS_CHANNELS) {
     if (!fixed[c.id] && !byTemperature[c.id]) throw new Error(`spectralTables: no data for channel ${c.id}`);
   }
-  return { fixed, byTemperature, o3ByTemperature, o2, srMin, srMax, rayleigh };
+  const binRange: Record<string, [number, number]> = {};
+  for (const [id, arrays] of [
+    ...Object.entries(fixed).map(([id, a]) => [id, [a]] as const),
+    ...Object.entries(byTemperature),
+  ]) {
+    let lo = G.n;
+    let hi = 0;
+    for (const a of arrays) {
+      for (let i = 0; i < G.n; i++) {
+        if (a[i] > 0) {
+          lo = Math.min(lo, i);
+          hi = Math.max(hi, i + 1);
+        }
+      }
+    }
+    binRange[id] = id === "O2" ? [0, G.n] : [lo, Math.max(lo, hi)];
+  }
+  return { fixed, byTemperature, o3ByTemperature, o2, srMin, srMax, rayleigh, binRange };
 }
 
 /** The tables (built once at first import). */

@@ -1,0 +1,58 @@
+/**
+ * Photolysis and atmosphere benchmarks: all J at one level, a 61-level
+ * profile (10–60 km), a 24-hour diurnal set of 49 zenith angles, and the
+ * standard atmosphere + climatology lookups the engine makes per level.
+ */
+import { climatologyAt, defaultOzoneDensity_cm3, solarZenithAngle, standardAtmosphere } from "../../lib/atmosphere";
+import { conditionAt, photolysisFrequencies, photolysisProfile } from "../../lib/photolysis";
+import type { BenchCase } from "../types";
+
+const LEVELS = Array.from({ length: 61 }, (_, i) => 10 + (50 * i) / 60);
+const O3_LEVELS = LEVELS.map(defaultOzoneDensity_cm3);
+const HOURS = Array.from({ length: 49 }, (_, i) => i * 0.5);
+
+export const cases: BenchCase[] = [
+  {
+    name: "photolysis: all 30 J at one level (30 km, SZA 30°)",
+    run: () => photolysisFrequencies({ altitude_km: 30, zenith_deg: 30, T_K: 226.5 }),
+  },
+  {
+    name: "photolysis: all J at one level with given columns (40 km, SZA 60°)",
+    run: () =>
+      photolysisFrequencies({
+        altitude_km: 40,
+        zenith_deg: 60,
+        T_K: 250.4,
+        o3ColumnAbove_cm2: 2.3e17,
+        o2ColumnAbove_cm2: 1.3e22,
+      }),
+  },
+  {
+    name: "photolysis: 61-level profile, default climatology columns",
+    run: () => photolysisProfile({ altitudes_km: LEVELS, zenith_deg: 30 }),
+    note: "61 calls of photolysisFrequencies",
+  },
+  {
+    name: "photolysis: 61-level profile, O3 columns from the levels above",
+    run: () => photolysisProfile({ altitudes_km: LEVELS, zenith_deg: 30, o3_cm3: O3_LEVELS }),
+  },
+  {
+    name: "photolysis: 24-hour day at 30 km, 49 zenith angles (45°N, equinox)",
+    run: () =>
+      HOURS.map((h) =>
+        photolysisFrequencies({
+          altitude_km: 30,
+          zenith_deg: solarZenithAngle({ latitude_deg: 45, dayOfYear: 79, localSolarTime_h: h }),
+          T_K: 226.5,
+        }),
+      ),
+  },
+  {
+    name: "atmosphere: standard atmosphere + climatology at one level",
+    run: () => [standardAtmosphere(33.3), climatologyAt(33.3)],
+  },
+  {
+    name: "conditions: conditionAt (T, p, [M], sun, held amounts, every J)",
+    run: () => conditionAt({ altitude_km: 30, latitude_deg: 45, date: "2026-06-21", localSolarTime_h: 10 }),
+  },
+];
