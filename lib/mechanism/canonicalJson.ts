@@ -4,13 +4,10 @@
  * or layout) give equal text, so it can be hashed to identify content.
  */
 export function canonicalJson(value: unknown): string {
-  if (value === null || typeof value !== "object") {
-    return value === undefined ? "null" : JSON.stringify(value);
-  }
-  if (Array.isArray(value)) return `[${value.map(canonicalJson).join(",")}]`;
-  const obj = value as Record<string, unknown>;
-  const keys = Object.keys(obj)
-    .filter((k) => obj[k] !== undefined)
-    .sort();
-  return `{${keys.map((k) => `${JSON.stringify(k)}:${canonicalJson(obj[k])}`).join(",")}}`;
+  return JSON.stringify(value === undefined ? null : value, (_key, v) => {
+    if (v === null || typeof v !== "object" || Array.isArray(v)) return v;
+    const sorted: Record<string, unknown> = {};
+    for (const k of Object.keys(v).sort()) sorted[k] = v[k];
+    return sorted;
+  });
 }
