@@ -5,11 +5,12 @@ import { actinicFlux, photolysisChannels, photolysisFrequencies } from "../../li
 import { expectClose } from "../helpers/close";
 
 // the shared channel names of the project (team convention)
+// biome-ignore format: a compact list reads better
 const SHARED = [
   "O2", "O3_O1D", "O3_O", "NO2", "NO3_NO", "NO3_NO2", "N2O5", "HNO3", "HO2NO2", "H2O2", "HOCl", "ClONO2_Cl",
   "ClONO2_ClO", "Cl2O2", "OClO", "Cl2", "HCl", "BrO", "HOBr", "BrONO2_Br", "BrONO2_BrO", "BrCl", "N2O", "H2O", "NO",
   "HCHO_H", "HCHO_H2", "CH3OOH", "CFCl3", "CF2Cl2",
-]; // biome-ignore format: list
+];
 
 const at = (z: number, zenith = 30) =>
   photolysisFrequencies({ altitude_km: z, zenith_deg: zenith, T_K: standardAtmosphere(z).T_K });
