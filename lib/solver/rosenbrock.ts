@@ -20,7 +20,7 @@ export const ROSENBROCK_DEFAULTS = {
   rtol: 1e-4,
   atol: 1e-2,
   maxSteps: 100_000,
-  /** smallest step relative to |t| + interval before giving up */
+  /** smallest step relative to |t| before giving up */
   minStepRelative: 1e-14,
 };
 
@@ -116,6 +116,27 @@ export function propagateTangent(
   for (let q = 0; q < nn; q++) S[q] += M1 * K1[q] + M2 * K2[q] + M3 * K3[q];
 }
 
+/**
+ * First trial step from the scaled sizes of y and f (Hairer, Nørsett & Wanner,
+ * "Solving ODEs I", §II.4, the first part of their starting-step algorithm):
+ * h₀ = 0.01·‖y‖/‖f‖, capped by the interval.
+ */
+function initialStep(sys: OdeSystem, y: Float64Array, t0: number, span: number, rtol: number, atol: number): number {
+  const f = new Float64Array(sys.n);
+  sys.rhs(t0, y, f);
+  let d0 = 0;
+  let d1 = 0;
+  for (let i = 0; i < sys.n; i++) {
+    const sc = atol + rtol * Math.abs(y[i]);
+    d0 += (y[i] / sc) ** 2;
+    d1 += (f[i] / sc) ** 2;
+  }
+  d0 = Math.sqrt(d0 / Math.max(1, sys.n));
+  d1 = Math.sqrt(d1 / Math.max(1, sys.n));
+  const h0 = d0 < 1e-5 || d1 < 1e-5 ? 1e-6 * span : (0.01 * d0) / d1;
+  return Math.min(span, Number.isFinite(h0) && h0 > 0 ? h0 : 1e-6 * span);
+}
+
 /** Integrates from t0 to t1 (t1 > t0). Never throws for numerical failure: see `status`. */
 export function integrateOde(
   sys: OdeSystem,
@@ -149,7 +170,7 @@ export function integrateOde(
   const pivot = new Int32Array(n);
 
   let t = t0;
-  let h = hooks.fixedStep ?? Math.min(hMax, options.initialStep_s ?? span * 1e-6);
+  let h = hooks.fixedStep ?? Math.min(hMax, options.initialStep_s ?? initialStep(sys, y, t0, span, rtol, atol));
   let accepted = 0;
   let rejected = 0;
   let nf = 0;
@@ -193,7 +214,7 @@ export function integrateOde(
       if (luFactor(A, n, pivot, 1e-300) >= 0) {
         rejected++;
         h *= 0.25;
-        if (hooks.fixedStep !== undefined || h < ROSENBROCK_DEFAULTS.minStepRelative * (Math.abs(t) + span)) {
+        if (hooks.fixedStep !== undefined || h < ROSENBROCK_DEFAULTS.minStepRelative * Math.abs(t) + 1e-300) {
           return done("step-too-small", `singular iteration matrix at t = ${t} s`);
         }
         last = false;
@@ -224,7 +245,7 @@ export function integrateOde(
         rejected++;
         h *= 0.1;
         last = false;
-        if (hooks.fixedStep !== undefined || h < ROSENBROCK_DEFAULTS.minStepRelative * (Math.abs(t) + span)) {
+        if (hooks.fixedStep !== undefined || h < ROSENBROCK_DEFAULTS.minStepRelative * Math.abs(t) + 1e-300) {
           return done("non-finite", `the solution left the finite range at t = ${t} s`);
         }
         continue;
@@ -245,7 +266,7 @@ export function integrateOde(
         rejected++;
         h *= Math.max(0.2, 0.9 * err ** (-1 / 3));
         last = false;
-        if (h < ROSENBROCK_DEFAULTS.minStepRelative * (Math.abs(t) + span)) {
+        if (h < ROSENBROCK_DEFAULTS.minStepRelative * Math.abs(t) + 1e-300) {
           return done("step-too-small", `step size fell below ${h} s at t = ${t} s`);
         }
       }
