@@ -1,10 +1,10 @@
 /**
  * The default mid-latitude composition climatology at one altitude:
  * log-linear interpolation in mixing ratio between the nodes of
- * data/climatology.ts. Units: km → mol/mol.
+ * tables/climatology.ts. Units: km → mol/mol.
  */
 import { InputError } from "../errors";
-import { CLIMATOLOGY } from "./data/climatology";
+import { CLIMATOLOGY } from "./tables/climatology";
 import type { ClimatologySpecies, MixingRatioProfile } from "./types";
 
 /** Species and pools of the climatology, in a fixed order. */

@@ -7,7 +7,7 @@
  *    continuum, Herzberg continuum) and, by default, Rayleigh extinction
  *    (Nicolet 1984) of the air column; in the Schumann–Runge bands the O2
  *    transmission of a log-uniform opacity distribution per interval
- *    (data/schumannRunge.ts), and the O2 absorption ⟨σ·e^(−σN)⟩ kept
+ *    (tables/schumannRunge.ts), and the O2 absorption ⟨σ·e^(−σN)⟩ kept
  *    separately for J(O2);
  *  - surface reflection (λ ≥ 206 nm, sun above the horizon): a Lambertian
  *    reflector of effective albedo A at the ground lit by the direct beam

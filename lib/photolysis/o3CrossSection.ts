@@ -1,12 +1,13 @@
 /**
  * O3 absorption cross section σ(λ, T): the 295 K table of
- * data/crossSections.ts times (σ218/σ295)^((295 − T)/77), i.e. log-linear in
+ * tables/crossSections.ts times (σ218/σ295)^((295 − T)/77), i.e. log-linear in
  * T through the 218 K and 295 K values (Huggins bands; ratio 1 elsewhere).
  * T is clamped to 190–310 K. Source: approximate, from memory (see the tables).
  * Units: nm, K → cm².
  */
-import { CROSS_SECTIONS, O3_RATIO_218_295 } from "./data/crossSections";
+
 import { interpolateNodes } from "./interpolateNodes";
+import { CROSS_SECTIONS, O3_RATIO_218_295 } from "./tables/crossSections";
 
 const DEFAULTS = { Tmin_K: 190, Tmax_K: 310 };
 

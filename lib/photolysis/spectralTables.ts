@@ -10,14 +10,14 @@
 import { brclCrossSection_cm2 } from "./brclCrossSection";
 import { PHOTOLYSIS_CHANNELS } from "./channels";
 import { cl2CrossSection_cm2 } from "./cl2CrossSection";
-import { CROSS_SECTIONS, LYMAN_ALPHA_CROSS_SECTIONS, NO_DELTA_BANDS } from "./data/crossSections";
-import { BRONO2_BR_YIELD, QUANTUM_YIELDS } from "./data/quantumYields";
-import { SRB_GRID, SRB_SIGMA_MAX, SRB_SIGMA_MIN } from "./data/schumannRunge";
 import { interpolateNodes, type Nodes } from "./interpolateNodes";
 import { n2oCrossSection_cm2 } from "./n2oCrossSection";
 import { o1dQuantumYield } from "./o1dQuantumYield";
 import { o3CrossSection_cm2 } from "./o3CrossSection";
 import { rayleighCrossSection_cm2 } from "./rayleighCrossSection";
+import { CROSS_SECTIONS, LYMAN_ALPHA_CROSS_SECTIONS, NO_DELTA_BANDS } from "./tables/crossSections";
+import { BRONO2_BR_YIELD, QUANTUM_YIELDS } from "./tables/quantumYields";
+import { SRB_GRID, SRB_SIGMA_MAX, SRB_SIGMA_MIN } from "./tables/schumannRunge";
 import { binMean, WAVELENGTH_GRID } from "./wavelengthGrid";
 
 /** Temperatures of the T-dependent tables, K. */

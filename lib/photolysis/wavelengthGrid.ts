@@ -6,14 +6,14 @@
  *  - 175.44–206.19 nm in 17 intervals of 500 cm⁻¹ (Schumann–Runge bands);
  *  - 206.19–420 nm in 1 nm bins (Herzberg continuum, Hartley and Huggins bands);
  *  - 420–750 nm in 5 nm bins (visible).
- * Flux: the irradiance nodes of data/solarSpectrum.ts, linear between nodes,
+ * Flux: the irradiance nodes of tables/solarSpectrum.ts, linear between nodes,
  * converted by λ/(h·c) and integrated over each bin with 8 midpoints.
  * Units: nm, photons cm⁻² s⁻¹.
  */
 
-import { SRB_GRID } from "./data/schumannRunge";
-import { LYMAN_ALPHA_FLUX_cm2s, SOLAR_IRRADIANCE } from "./data/solarSpectrum";
 import { interpolateNodes } from "./interpolateNodes";
+import { SRB_GRID } from "./tables/schumannRunge";
+import { LYMAN_ALPHA_FLUX_cm2s, SOLAR_IRRADIANCE } from "./tables/solarSpectrum";
 
 const H_PLANCK_Js = 6.62607015e-34;
 const C_LIGHT_m_s = 299792458;
