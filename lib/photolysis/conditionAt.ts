@@ -95,7 +95,13 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
   }
   const localSolarTime_h = input.localSolarTime_h ?? DEFAULTS.localSolarTime_h;
   const zenith_deg =
-    input.zenith_deg ?? solarZenithAngle({ latitude_deg, dayOfYear: doy, localSolarTime_h: localSolarTime_h });
+    input.zenith_deg ??
+    solarZenithAngle({
+      latitude_deg,
+      dayOfYear: doy,
+      localSolarTime_h: localSolarTime_h,
+      year: Number(date.slice(0, 4)),
+    });
 
   const sources: Record<string, string> = {
     T_K: input.T_K !== undefined ? "given" : "U.S. Standard Atmosphere 1976",

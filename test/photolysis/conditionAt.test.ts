@@ -14,7 +14,7 @@ describe("conditionAt", () => {
     expect(c.latitude_deg).toBe(45);
     expect(c.date).toBe("2026-03-20");
     expect(c.dayOfYear).toBe(79);
-    expect(c.zenith_deg).toBe(solarZenithAngle({ latitude_deg: 45, dayOfYear: 79, localSolarTime_h: 12 }));
+    expect(c.zenith_deg).toBe(solarZenithAngle({ latitude_deg: 45, dayOfYear: 79, localSolarTime_h: 12, year: 2026 }));
     expectClose(c.o3ColumnAbove_DU, ozoneColumnAbove_cm2(30) / DOBSON_UNIT_cm2, { rel: 1e-12 });
     expect(Object.keys(c.J_s).sort()).toEqual([...photolysisChannels].sort());
     expect(c.sources.T_K).toMatch(/1976/);
