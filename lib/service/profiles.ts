@@ -6,6 +6,7 @@
  * of the stored result, not a failed job.
  */
 import "server-only";
+import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
 import type { DemoProfile } from "../atmosphere/types";
 import { compileSource, type MechanismSource } from "../engine/mechanism-source";
 import { enginePool, POOL_DEFAULTS } from "../engine/pool";
@@ -33,7 +34,7 @@ export const MAX_PROFILE_BODY = 1.5 * 1024 * 1024;
 export const profilePath = (id: string) => `/profiles/${id}`;
 export const comparisonPath = (id: string) => `/compare/${id}`;
 
-const DEMOS: readonly DemoProfile[] = [];
+const DEMOS: readonly DemoProfile[] = DEMO_PROFILES;
 
 /** The default profile and the invented demo profiles, with their CSV form. */
 export function listProfiles(): Profile[] {

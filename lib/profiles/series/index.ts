@@ -1,0 +1,5 @@
+export * from "./chartFrame";
+export * from "./differenceSeries";
+export * from "./familyColor";
+export * from "./familySplitSeries";
+export * from "./lossProfileSeries";
