@@ -1,0 +1,86 @@
+/**
+ * The periodic 24-hour solution. The sun is an invented stand-in: at 45° N at
+ * equinox cos(zenith) = cos 45° · cos(hour angle), and every J scales with
+ * cos(zenith) above the horizon (not a radiative-transfer model).
+ */
+import { describe, expect, it } from "vitest";
+import { type DiurnalInput, solveDiurnal, solveSteadyState } from "../../lib/solver";
+import type { SolveConditions } from "../../lib/solver/types";
+import { expectClose } from "../helpers/close";
+import { allNumbers, chapmanMechanism, chlorineMechanism, conditions30km } from "./helpers";
+
+function sunFollowing(base: SolveConditions, cosLatitude = Math.SQRT1_2, offset = 0): DiurnalInput["conditionsAt"] {
+  const noon = cosLatitude + offset;
+  return (t_h) => {
+    const mu = cosLatitude * Math.cos((Math.PI * (t_h - 12)) / 12) + offset;
+    const f = mu > 0 ? mu / noon : 0;
+    return { ...base, J_s: Object.fromEntries(Object.entries(base.J_s).map(([k, v]) => [k, v * f])) };
+  };
+}
+
+describe("24-hour steady state", () => {
+  it("equals the instantaneous steady state when nothing changes through the day, from a far start", () => {
+    const mech = chapmanMechanism();
+    const cond = conditions30km();
+    const ss = solveSteadyState(mech, cond);
+    const start = ss.numberDensity_cm3.map((v, i) => (mech.species[i].role === "solved" ? v * 0.3 : v));
+    const d = solveDiurnal(mech, { conditionsAt: () => cond }, { initialState: start });
+    expect(d.status).toBe("converged");
+    const o3 = mech.speciesIndex.O3;
+    expectClose(d.average.numberDensity_cm3[o3], ss.numberDensity_cm3[o3], { rel: 2e-3 }, "O3");
+    expect(d.daysIntegrated).toBeGreaterThan(1);
+  });
+
+  it("finds a periodic orbit on which each species' mean production equals its mean loss", () => {
+    const mech = chlorineMechanism();
+    const d = solveDiurnal(mech, { conditionsAt: sunFollowing(conditions30km()), reportAt_h: 12 });
+    expect(d.status).toBe("converged");
+    expect(d.periodicityError).toBeLessThanOrEqual(1e-3);
+    const replaced = d.average.pools.map((p) => p.replacedEquation);
+    for (const sp of d.average.species) {
+      if (sp.role !== "solved" || replaced.includes(sp.id)) continue;
+      // periodic ⇒ ∫ (P − L) dt = [X](24 h) − [X](0) ≈ 0
+      expectClose(sp.production_cm3s, sp.loss_cm3s, { rel: 3e-3, abs: 1e-6 }, `${sp.id} mean P vs L`);
+    }
+    expect(allNumbers(d).every(Number.isFinite)).toBe(true);
+  });
+
+  it("keeps the pool total through the day when no reaction feeds the pool", () => {
+    const mech = chlorineMechanism();
+    const base = conditions30km();
+    const cond = { ...base, held_cm3: { ...base.held_cm3, CFCl3: 0 } };
+    const d = solveDiurnal(mech, { conditionsAt: sunFollowing(cond) });
+    expect(d.status).toBe("converged");
+    const x = d.average.numberDensity_cm3;
+    const i = mech.speciesIndex;
+    expectClose(x[i.Cl] + x[i.ClO] + x[i.HCl], cond.poolTotals_cm3.Cly, { rel: 1e-6 }, "24-h mean Cly");
+    const y = d.atReportTime.numberDensity_cm3;
+    expectClose(y[i.Cl] + y[i.ClO] + y[i.HCl], cond.poolTotals_cm3.Cly, { rel: 1e-6 }, "noon Cly");
+  });
+
+  it("reports the noon state with more atomic oxygen than the 24-hour mean", () => {
+    const mech = chapmanMechanism();
+    const d = solveDiurnal(mech, { conditionsAt: sunFollowing(conditions30km()), reportAt_h: 12 });
+    const o = mech.speciesIndex.O;
+    expect(d.reportAt_h).toBe(12);
+    expect(d.atReportTime.numberDensity_cm3[o]).toBeGreaterThan(1.5 * d.average.numberDensity_cm3[o]);
+  });
+
+  it("handles polar night (no sun all day) with finite numbers and the pool kept", () => {
+    const mech = chlorineMechanism();
+    const cond = conditions30km();
+    const d = solveDiurnal(mech, { conditionsAt: () => ({ ...cond, J_s: {} }) });
+    expect(["converged", "no-steady-state", "max-iterations"]).toContain(d.status);
+    expect(allNumbers(d).every(Number.isFinite)).toBe(true);
+    const x = d.average.numberDensity_cm3;
+    const i = mech.speciesIndex;
+    expectClose(x[i.Cl] + x[i.ClO] + x[i.HCl], cond.poolTotals_cm3.Cly, { rel: 1e-6 }, "Cly");
+  });
+
+  it("handles polar day (the sun never sets)", () => {
+    const mech = chapmanMechanism();
+    const d = solveDiurnal(mech, { conditionsAt: sunFollowing(conditions30km(), 0.3, 0.35) });
+    expect(d.status).toBe("converged");
+    expect(d.atReportTime.numberDensity_cm3[mech.speciesIndex.O]).toBeGreaterThan(0);
+  });
+});
