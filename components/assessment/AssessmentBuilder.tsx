@@ -35,10 +35,34 @@ interface QuestionState {
 }
 
 const RANGE_FIELDS = [
-  { key: "altitude_km", label: "Altitude", unit: "km", initial: { on: true, min: "25", max: "45" } },
-  { key: "latitude_deg", label: "Latitude", unit: "° N", initial: { on: false, min: "30", max: "60" } },
-  { key: "localSolarTime_h", label: "Local solar time", unit: "h", initial: { on: false, min: "9", max: "15" } },
-  { key: "Cly", label: "Total chlorine, Cly", unit: "ppbv", initial: { on: false, min: "2", max: "4" } },
+  {
+    key: "altitude_km",
+    label: "Altitude",
+    vary: "Vary altitude",
+    unit: "km",
+    initial: { on: true, min: "25", max: "45" },
+  },
+  {
+    key: "latitude_deg",
+    label: "Latitude",
+    vary: "Vary latitude",
+    unit: "° N",
+    initial: { on: false, min: "30", max: "60" },
+  },
+  {
+    key: "localSolarTime_h",
+    label: "Local solar time",
+    vary: "Vary local solar time",
+    unit: "h",
+    initial: { on: false, min: "9", max: "15" },
+  },
+  {
+    key: "Cly",
+    label: "Total chlorine, Cly",
+    vary: "Vary total chlorine (Cly)",
+    unit: "ppbv",
+    initial: { on: false, min: "2", max: "4" },
+  },
 ] as const;
 
 type RangeKey = (typeof RANGE_FIELDS)[number]["key"];
@@ -322,7 +346,7 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
                     onChange={(e) => set({ on: e.target.checked })}
                     className="accent-stone-800"
                   />
-                  Vary {f.label.toLowerCase()}
+                  {f.vary}
                 </label>
                 <Field
                   id={`${uid}-${f.key}-min`}

@@ -4,7 +4,11 @@
  * condition with Cly doubled), write every question and its answer from the
  * results. A variant on which some question has no sound answer (the cycle is
  * absent, two families tie, no steady state) is redrawn with the next attempt
- * seed, so the whole assessment still follows from its one seed.
+ * seed, so the whole assessment still follows from its one seed. Before any
+ * analysis, a variant whose first draw repeats an earlier variant's condition
+ * moves on to its next attempt seed (in variant order, so deterministically),
+ * so that ten variants from a range of twenty altitudes are ten different
+ * problems wherever the ranges allow it.
  *
  * The analyses are injected: the service runs them in the engine pool, the
  * tests in-thread; all variants are started at once.
@@ -31,6 +35,8 @@ import { variantSeed } from "./variantSeed";
 export const DEFAULTS = {
   /** draws per variant before generation gives up */
   maxAttempts: 6,
+  /** draws tried per variant for a condition no earlier variant has */
+  maxDistinctTries: 50,
   /** marks per question */
   points: 1,
   instructions:
@@ -86,12 +92,42 @@ function familiesOf(results: AnalysisResult[]): string[] {
   );
 }
 
-async function drawVariant(spec: AssessmentSpec & { seed: number }, n: number, opts: GenerateOptions): Promise<Drawn> {
+/** The first attempt of each variant: the first whose condition no earlier variant starts from. */
+export function distinctStarts(spec: AssessmentSpec & { seed: number }): { starts: number[]; repeated: number[] } {
+  const seen = new Set<string>();
+  const starts: number[] = [];
+  const repeated: number[] = [];
+  for (let n = 1; n <= spec.variants; n++) {
+    let start = 0;
+    let key = "";
+    for (let a = 0; a < DEFAULTS.maxDistinctTries; a++) {
+      key = JSON.stringify(drawCondition(spec.base, spec.ranges ?? {}, variantSeed(spec.seed, n, a)));
+      if (!seen.has(key)) {
+        start = a;
+        break;
+      }
+      if (a === DEFAULTS.maxDistinctTries - 1) {
+        repeated.push(n);
+        key = JSON.stringify(drawCondition(spec.base, spec.ranges ?? {}, variantSeed(spec.seed, n, 0)));
+      }
+    }
+    seen.add(key);
+    starts.push(start);
+  }
+  return { starts, repeated };
+}
+
+async function drawVariant(
+  spec: AssessmentSpec & { seed: number },
+  n: number,
+  start: number,
+  opts: GenerateOptions,
+): Promise<Drawn> {
   const maxAttempts = opts.maxAttempts ?? DEFAULTS.maxAttempts;
   const extraTemplate = spec.questions.map((q) => templateOf(q.kind)).find((t) => t.extraCondition);
   const redraws: string[] = [];
   let last = { question: 0, problem: "" };
-  for (let attempt = 0; attempt < maxAttempts; attempt++) {
+  for (let attempt = start; attempt < start + maxAttempts; attempt++) {
     const seed = variantSeed(spec.seed, n, attempt);
     const condition = drawCondition(spec.base, spec.ranges ?? {}, seed);
     const baseRequest: AnalysisRequest = { mechanismId: spec.mechanismId, condition };
@@ -110,7 +146,7 @@ async function drawVariant(spec: AssessmentSpec & { seed: number }, n: number, o
       .find((x) => !x.built.ok);
     if (!failed) return { variant: { number: n, seed, attempt, condition }, analyses, redraws };
     last = { question: failed.i, problem: (failed.built as { problem: string }).problem };
-    redraws.push(`variant ${n}, draw ${attempt + 1}: question ${failed.i + 1} redrawn because ${last.problem}`);
+    redraws.push(`variant ${n}, draw ${attempt + 1 - start}: question ${failed.i + 1} redrawn because ${last.problem}`);
   }
   throw new InputError(
     `questions[${last.question}]`,
@@ -141,7 +177,8 @@ export async function generateAssessment(
   opts: GenerateOptions,
 ): Promise<GeneratedAssessment> {
   const numbers = Array.from({ length: spec.variants }, (_, i) => i + 1);
-  const drawn = await Promise.all(numbers.map((n) => drawVariant(spec, n, opts)));
+  const { starts, repeated } = distinctStarts(spec);
+  const drawn = await Promise.all(numbers.map((n) => drawVariant(spec, n, starts[n - 1], opts)));
   // One list of families on every sheet, so the choices give nothing away.
   const families = familiesOf(drawn.map((d) => d.analyses.base));
   const info = questionInfo(spec);
@@ -186,6 +223,13 @@ export async function generateAssessment(
     key,
     sheets,
     analyses: drawn.map((d) => d.analyses),
-    warnings: drawn.flatMap((d) => d.redraws),
+    warnings: [
+      ...(repeated.length > 0
+        ? [
+            `the ranges allow too few distinct conditions: variant${repeated.length > 1 ? "s" : ""} ${repeated.join(", ")} repeat${repeated.length > 1 ? "" : "s"} an earlier variant's conditions; widen the ranges or vary more quantities`,
+          ]
+        : []),
+      ...drawn.flatMap((d) => d.redraws),
+    ],
   };
 }

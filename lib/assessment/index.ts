@@ -3,7 +3,7 @@ export { DEFAULTS as DRAW_DEFAULTS, drawCondition, SCALAR_FIELDS } from "./drawC
 export { answerTemplateCsv, keyCsv, keyJson, marksCsv } from "./exports";
 export { formatAnswer, formatTolerance } from "./formatKey";
 export type { GeneratedAssessment, GenerateOptions, VariantAnalyses } from "./generateAssessment";
-export { DEFAULTS as GENERATE_DEFAULTS, generateAssessment, questionInfo } from "./generateAssessment";
+export { DEFAULTS as GENERATE_DEFAULTS, distinctStarts, generateAssessment, questionInfo } from "./generateAssessment";
 export { markAnswer, withinTolerance } from "./markAnswer";
 export { LIMITS as MARKING_LIMITS, markClass } from "./markClass";
 export { mulberry32 } from "./mulberry32";

@@ -1,5 +1,12 @@
 import { describe, expect, test } from "vitest";
-import { type AssessmentSpec, generateAssessment, parseAssessmentSpec } from "@/lib/assessment";
+import {
+  type AssessmentSpec,
+  distinctStarts,
+  drawCondition,
+  generateAssessment,
+  parseAssessmentSpec,
+  variantSeed,
+} from "@/lib/assessment";
 import type { AnalysisRequest } from "@/lib/engine/types";
 import { expectClose } from "../helpers/close";
 import { CLOX_CYCLE, fakeAnalyse, fakeResult, NOX_CYCLE } from "./fakeAnalysis";
@@ -137,5 +144,29 @@ describe("generateAssessment", () => {
       expect(s.questions[4].text).toMatch(/Cly\) is \d\.\d+ ppbv/);
       expect(s.conditions.find((c) => c.label === "Altitude")?.value).toMatch(/^\d+\.?\d* km$/);
     }
+  });
+});
+
+describe("distinct variants", () => {
+  test("ten variants from a range of 29 altitudes all get different conditions", async () => {
+    const g = await generateAssessment(spec({ ranges: { altitude_km: { min: 20, max: 48 } } }), {
+      analyse: fakeAnalyse,
+    });
+    expect(new Set(g.variants.map((v) => v.condition.altitude_km)).size).toBe(10);
+  });
+
+  test("a variant whose first draw repeats an earlier one starts from its next attempt seed", () => {
+    const s = spec({ ranges: { altitude_km: { min: 20, max: 23 } }, variants: 4 });
+    const { starts, repeated } = distinctStarts(s);
+    expect(repeated).toEqual([]);
+    const alts = starts.map((a, i) => drawCondition(s.base, s.ranges ?? {}, variantSeed(s.seed, i + 1, a)).altitude_km);
+    expect(new Set(alts).size).toBe(4);
+  });
+
+  test("warns when the ranges allow fewer distinct conditions than variants", async () => {
+    const g = await generateAssessment(spec({ ranges: { altitude_km: { min: 30, max: 31 } }, variants: 4 }), {
+      analyse: fakeAnalyse,
+    });
+    expect(g.warnings[0]).toMatch(/^the ranges allow too few distinct conditions: variants 3, 4 repeat/);
   });
 });
