@@ -4,6 +4,7 @@
  * atmosphere unless overridden), the sun (latitude, date, local time, or a
  * zenith angle), instantaneous or 24-hour, and the amounts held.
  */
+import { standardAtmosphere } from "@/lib/atmosphere/standardAtmosphere";
 import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
@@ -44,7 +45,7 @@ export function ConditionsPanel(p: Props) {
     for (const k of Object.keys(patch) as (keyof ConditionInput)[]) if (patch[k] === undefined) delete next[k];
     p.onCondition(next);
   };
-  const sameAltitude = p.resolved && p.resolved.altitude_km === c.altitude_km;
+  const std = standardOrNull(c.altitude_km);
   const bySun = c.zenith_deg === undefined;
   const M = p.resolved?.M_cm3;
   const pools = new Set(p.mechanism?.pools.map((x) => x.id) ?? []);
@@ -118,7 +119,7 @@ export function ConditionsPanel(p: Props) {
               unit="K"
               value={c.T_K}
               onChange={(v) => set({ T_K: v })}
-              placeholder={p.resolved && sameAltitude ? `${sig(p.resolved.T_K)} (std)` : "standard"}
+              placeholder={std ? `${sig(std.T_K)} (std)` : "standard"}
               error={p.fieldErrors.T_K}
             />
             <NumberField
@@ -127,13 +128,13 @@ export function ConditionsPanel(p: Props) {
               unit="hPa"
               value={c.p_hPa}
               onChange={(v) => set({ p_hPa: v })}
-              placeholder={p.resolved && sameAltitude ? `${sig(p.resolved.p_hPa)} (std)` : "standard"}
+              placeholder={std ? `${sig(std.p_hPa)} (std)` : "standard"}
               error={p.fieldErrors.p_hPa}
             />
           </div>
           <p className="text-[11px] text-stone-500">
             Empty fields use the U.S. Standard Atmosphere 1976 at this altitude
-            {M ? `; air density ${formatNumber(M)} cm⁻³` : ""}.
+            {std ? `; air density ${formatNumber(std.M_cm3)} cm⁻³` : ""}.
           </p>
         </fieldset>
 
@@ -288,6 +289,15 @@ export function ConditionsPanel(p: Props) {
       </form>
     </Panel>
   );
+}
+
+/** The 1976 standard at this altitude, or null outside its range (the server then names the problem). */
+function standardOrNull(z: number) {
+  try {
+    return standardAtmosphere(z);
+  } catch {
+    return null;
+  }
 }
 
 function formatTime(h: number): string {

@@ -51,6 +51,25 @@ export function CyclesPanel({ report, selected, onSelect, onInspectReaction }: P
           ))}
         </ol>
       )}
+      {report && (report.otherLossPathways?.length ?? 0) > 0 ? (
+        <details className="border-t border-stone-200 px-3 py-1 text-[11px] text-stone-600">
+          <summary className="cursor-pointer select-none">
+            {report.otherLossPathways.length} other Ox-loss pathways (chains that start or end in reservoirs)
+          </summary>
+          <ul className="mt-1 max-h-32 space-y-0.5 overflow-y-auto">
+            {report.otherLossPathways.map((c) => (
+              <li key={c.id} className="flex justify-between gap-2">
+                <span className="truncate" title={c.netEquation}>
+                  {c.netEquation}
+                </span>
+                <span className="shrink-0 tabular-nums">
+                  {formatNumber(c.oxLoss_cm3s)} ({formatPercent(c.share)})
+                </span>
+              </li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
       {report && report.warnings.length > 0 ? (
         <ul className="border-t border-stone-200 px-3 py-1 text-[11px] text-amber-800">
           {report.warnings.map((w) => (

@@ -210,9 +210,12 @@ export function Explorer(props: Props) {
           onShowHeld={(showHeld) => setViewPart({ showHeld })}
           onFit={() => net.current?.fit()}
           loading={analysis.loading}
+          mechanism={mechanism}
+          selected={selected}
+          onInspect={(id) => setViewPart({ select: id })}
           status={
             ss
-              ? `${result?.mechanism.title} · ${result?.condition.altitude_km} km · T ${formatNumber(result?.condition.T_K, 4)} K · p ${formatNumber(result?.condition.p_hPa, 3)} hPa · ${ss.status === "converged" ? `converged in ${ss.iterations} iterations` : ss.status}`
+              ? `${err ? "Showing the last analysis that succeeded: " : ""}${result?.mechanism.title} · ${result?.condition.altitude_km} km · T ${formatNumber(result?.condition.T_K, 4)} K · p ${formatNumber(result?.condition.p_hPa, 3)} hPa · ${ss.status === "converged" ? `converged in ${ss.iterations} iterations` : ss.status}`
               : null
           }
         />

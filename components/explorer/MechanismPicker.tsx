@@ -1,6 +1,6 @@
 "use client";
 /** Choose a built-in or uploaded mechanism, or upload a new one. */
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import type { Problem } from "./api";
 import { UploadBox } from "./UploadBox";
@@ -15,6 +15,13 @@ interface Props {
 
 export function MechanismPicker({ mechanisms, mechanismId, mechanism, onMechanism, onUploaded }: Props) {
   const [uploading, setUploading] = useState(false);
+  const dialog = useRef<HTMLDialogElement>(null);
+  useEffect(() => {
+    const d = dialog.current;
+    if (!d) return;
+    if (uploading && !d.open) d.showModal();
+    if (!uploading && d.open) d.close();
+  }, [uploading]);
   const builtins = mechanisms.filter((m) => m.builtin);
   const uploads = mechanisms.filter((m) => !m.builtin);
   const known = mechanisms.some((m) => m.id === mechanismId);
@@ -51,7 +58,7 @@ export function MechanismPicker({ mechanisms, mechanismId, mechanism, onMechanis
         </select>
         <button
           type="button"
-          aria-expanded={uploading}
+          aria-haspopup="dialog"
           onClick={() => setUploading((u) => !u)}
           className="shrink-0 rounded border border-stone-300 bg-white px-2 text-[12px] hover:border-stone-500 focus:outline-2 focus:outline-stone-800"
         >
@@ -62,15 +69,37 @@ export function MechanismPicker({ mechanisms, mechanismId, mechanism, onMechanis
         {current ? `${current.speciesCount} species, ${current.reactionCount} reactions. ` : ""}
         {current?.description ?? mechanism?.description ?? ""}
       </p>
-      {uploading ? (
-        <UploadBox
-          onClose={() => setUploading(false)}
-          onUploaded={(m) => {
-            setUploading(false);
-            onUploaded(m);
-          }}
-        />
-      ) : null}
+      <dialog
+        ref={dialog}
+        aria-labelledby="upload-title"
+        onClose={() => setUploading(false)}
+        className="m-auto w-[760px] max-w-[95vw] rounded-md border border-stone-300 bg-white p-0 shadow-xl backdrop:bg-stone-900/30"
+      >
+        <div className="flex items-center justify-between border-b border-stone-200 px-4 py-2">
+          <h2 id="upload-title" className="text-[14px] font-semibold text-stone-900">
+            Upload a mechanism
+          </h2>
+          <button
+            type="button"
+            onClick={() => setUploading(false)}
+            aria-label="Close"
+            className="rounded px-1.5 text-stone-500 hover:bg-stone-100 hover:text-stone-900"
+          >
+            ✕
+          </button>
+        </div>
+        <div className="px-4 py-3">
+          {uploading ? (
+            <UploadBox
+              onClose={() => setUploading(false)}
+              onUploaded={(m) => {
+                setUploading(false);
+                onUploaded(m);
+              }}
+            />
+          ) : null}
+        </div>
+      </dialog>
     </div>
   );
 }

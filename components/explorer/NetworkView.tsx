@@ -66,7 +66,6 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   }));
 
   // one instance per mechanism layout
-  // biome-ignore lint/correctness/useExhaustiveDependencies: recreated only when the mechanism changes
   useEffect(() => {
     let cancelled = false;
     let cy: Core | null = null;

@@ -1,5 +1,5 @@
 /** Above the network: colour mode, held species, fit, and the status of the analysis. */
-import type { ColorMode } from "@/lib/viz/types";
+import type { ColorMode, MechanismView } from "@/lib/viz/types";
 
 interface Props {
   colorMode: ColorMode;
@@ -9,12 +9,26 @@ interface Props {
   onFit(): void;
   loading: boolean;
   status: string | null;
+  mechanism: MechanismView | null;
+  selected: string | null;
+  onInspect(id: string | null): void;
 }
 
 const seg = (on: boolean) =>
   `px-2 py-0.5 text-[12px] focus-within:outline-2 focus-within:outline-stone-800 cursor-pointer ${on ? "bg-stone-800 text-white" : "bg-white text-stone-700 hover:bg-stone-100"}`;
 
-export function Toolbar({ colorMode, onColorMode, showHeld, onShowHeld, onFit, loading, status }: Props) {
+export function Toolbar({
+  colorMode,
+  onColorMode,
+  showHeld,
+  onShowHeld,
+  onFit,
+  loading,
+  status,
+  mechanism,
+  selected,
+  onInspect,
+}: Props) {
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-1">
       <fieldset className="flex items-center gap-1.5">
@@ -58,6 +72,32 @@ export function Toolbar({ colorMode, onColorMode, showHeld, onShowHeld, onFit, l
       >
         Fit to view
       </button>
+      <label className="flex items-center gap-1 text-[12px] text-stone-700">
+        <span>Inspect</span>
+        <select
+          value={selected ?? ""}
+          onChange={(e) => onInspect(e.target.value || null)}
+          className="max-w-[150px] rounded border border-stone-300 bg-white px-1 py-0.5 text-[12px] focus:outline-2 focus:outline-stone-800"
+        >
+          <option value="">— pick —</option>
+          <optgroup label="Species">
+            {mechanism?.species
+              .filter((s) => s.role !== "third-body")
+              .map((s) => (
+                <option key={s.id} value={`s:${s.id}`}>
+                  {s.label || s.id}
+                </option>
+              ))}
+          </optgroup>
+          <optgroup label="Reactions">
+            {mechanism?.reactions.map((r) => (
+              <option key={r.id} value={`r:${r.id}`}>
+                {r.id}: {r.equation}
+              </option>
+            ))}
+          </optgroup>
+        </select>
+      </label>
       <p data-testid="status" aria-live="polite" className="ml-auto min-w-0 truncate text-[11px] text-stone-500">
         {loading ? "Computing… " : ""}
         {status ?? (loading ? "" : "No analysis yet")}

@@ -57,7 +57,7 @@ export function UploadBox({ onUploaded, onClose }: Props) {
   }
 
   return (
-    <div data-testid="upload" className="mt-2 rounded border border-stone-300 bg-stone-50 p-2">
+    <div data-testid="upload">
       <label htmlFor="mechanism-text" className="text-[12px] font-medium text-stone-700">
         Mechanism document (YAML or JSON)
       </label>
@@ -66,7 +66,7 @@ export function UploadBox({ onUploaded, onClose }: Props) {
         value={text}
         onChange={(e) => setText(e.target.value)}
         spellCheck={false}
-        rows={8}
+        rows={12}
         placeholder="Paste a mechanism document here, or choose a file below."
         className="mt-1 w-full resize-y rounded border border-stone-300 bg-white p-1.5 font-mono text-[11px] leading-4 focus:outline-2 focus:outline-stone-800"
       />
@@ -111,7 +111,7 @@ export function UploadBox({ onUploaded, onClose }: Props) {
           ))}
           <ol
             ref={listing}
-            className="mt-1 max-h-56 overflow-auto rounded border border-stone-300 bg-white font-mono text-[11px] leading-4"
+            className="relative mt-1 max-h-64 overflow-auto rounded border border-stone-300 bg-white font-mono text-[11px] leading-4"
           >
             {lines.map((ln, i) => {
               const n = i + 1;

@@ -5,8 +5,9 @@
  * blocks sit on a fixed 3-column board with odd oxygen in the middle, the
  * radical families at the corners, sources above, reservoirs below, organic
  * radicals at the left, bath gases at the right and end products at the
- * bottom. Reaction nodes go to the centroid of the solved species they
- * touch, then move along a golden-angle spiral to the first free spot.
+ * bottom. Reaction nodes go to the weighted centroid of the species they
+ * touch (held species weigh less), then move along a golden-angle spiral to
+ * the first free spot.
  * Positions depend on the mechanism only, never on the numbers, so the
  * picture stays put while the altitude changes. Units: px.
  */
@@ -26,6 +27,8 @@ export const LAYOUT_DEFAULTS = {
   clearSpecies_px: 14,
   /** smallest distance between two reaction node centres, px; default 24 */
   clearReaction_px: 24,
+  /** weight of a held species, relative to a solved one, in a reaction's centroid; default 0.3 */
+  heldPull: 0.3,
 };
 
 export type LayoutOptions = Partial<typeof LAYOUT_DEFAULTS>;
@@ -150,11 +153,15 @@ export function networkLayout(
   const solved = new Set(drawn.filter((s) => s.role === "solved").map((s) => s.id));
   for (const rx of mech.reactions) {
     const eq = parseEquation(rx.equation);
-    const ids = [...eq.reactants, ...eq.products].map((t) => t.species).filter((id) => species[id]);
-    const core = ids.filter((id) => solved.has(id));
-    const use = core.length ? core : ids;
-    const start = use.length
-      ? { x: mean(use.map((id) => species[id].x)), y: mean(use.map((id) => species[id].y)) }
+    const ids = [...new Set([...eq.reactants, ...eq.products].map((t) => t.species))].filter((id) => species[id]);
+    // held partners pull less than solved ones, so that a reaction sits near the radicals it turns over
+    const w = (id: string) => (solved.has(id) ? 1 : o.heldPull);
+    const total = ids.reduce((a, id) => a + w(id), 0);
+    const start = ids.length
+      ? {
+          x: ids.reduce((a, id) => a + w(id) * species[id].x, 0) / total,
+          y: ids.reduce((a, id) => a + w(id) * species[id].y, 0) / total,
+        }
       : { x: 0, y: -o.gap_px };
     const p = freeSpot(start, occupied);
     reactions[rx.id] = p;
@@ -188,5 +195,4 @@ function freeSpot(start: Point, occupied: Box[]): Point {
   return { x: round(start.x), y: round(start.y) };
 }
 
-const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
 const round = (v: number) => Math.round(v * 10) / 10;

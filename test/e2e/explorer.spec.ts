@@ -121,6 +121,42 @@ test("the permalink opens in a fresh page with the same numbers", async ({ page,
   await fresh.close();
 });
 
+test("the graph exports as PNG and SVG and the tables as CSV and JSON", async ({ page }) => {
+  await openExplorer(page, "m=oxygen-chlorine&z=40");
+  const [png] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "PNG" }).click()]);
+  expect(png.suggestedFilename()).toMatch(/\.png$/);
+  const pngPath = "test-results/downloads/graph.png";
+  await png.saveAs(pngPath);
+  const { readFileSync } = await import("node:fs");
+  expect(readFileSync(pngPath).subarray(1, 4).toString()).toBe("PNG");
+  const [svg] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "SVG" }).click()]);
+  const svgPath = "test-results/downloads/graph.svg";
+  await svg.saveAs(svgPath);
+  const text = readFileSync(svgPath, "utf8");
+  expect(text.startsWith("<svg")).toBe(true);
+  expect(text).toContain("ClO");
+  for (const name of ["rates.csv", "species.csv", "cycles.csv", "JSON"]) {
+    const href = await page.getByRole("link", { name, exact: true }).getAttribute("href");
+    const res = await page.request.get(href!);
+    expect(res.status(), name).toBe(200);
+    expect((await res.text()).length, name).toBeGreaterThan(20);
+  }
+});
+
+test("everything in the conditions and the inspector can be reached from the keyboard", async ({ page }) => {
+  await openExplorer(page, "m=oxygen-chlorine&z=30");
+  await page.getByLabel("Mechanism", { exact: true }).focus();
+  await page.keyboard.press("Tab");
+  await expect(page.getByRole("button", { name: "Upload…" })).toBeFocused();
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel("Altitude")).toBeFocused();
+  await page.keyboard.press("Tab");
+  await expect(page.getByLabel("Temperature")).toBeFocused();
+  await page.getByLabel("Inspect").selectOption("s:ClO");
+  await expect(page.getByTestId("inspector")).toContainText("mixing ratio");
+  await expect(page).toHaveURL(/sel=s%3AClO/);
+});
+
 test("an unknown permalink says so", async ({ page }) => {
   const res = await page.goto("/a/does-not-exist-0000");
   expect(res?.status()).toBe(404);
