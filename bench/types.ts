@@ -1,4 +1,9 @@
-/** One benchmark case: `run` is timed repeatedly; its return value is kept alive so work is not optimised away. */
+/**
+ * One benchmark case: `run` is timed repeatedly (awaited when it returns a
+ * promise); its return value is kept alive so work is not optimised away.
+ * A case file exports `cases`, or an async `setup()` returning them, and an
+ * optional async `teardown()`.
+ */
 export type BenchCase = {
   name: string;
   run: () => unknown;

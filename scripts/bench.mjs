@@ -1,7 +1,7 @@
 // `npm run bench`: times every case in bench/cases/*.ts (no pass/fail), prints
 // a table of medians and writes bench/results/latest.json. Figures from a
 // shared 2-core machine are noisy: compare medians and ratios, not single runs.
-import { mkdirSync, readdirSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
@@ -33,18 +33,21 @@ for (const file of files) {
     logLevel: "warning",
     banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
   });
-  const { cases } = await import(pathToFileURL(out).href);
+  const mod = await import(pathToFileURL(out).href);
+  const cases = mod.setup ? ((await mod.setup()) ?? mod.cases) : mod.cases;
   for (const c of cases) {
     let sink;
     const t0 = performance.now();
-    sink = c.run(); // warm-up, also the first-call cost
+    sink = await c.run(); // warm-up, also the first-call cost
     const first = performance.now() - t0;
     const times = [];
     const budgetEnd = performance.now() + 1000;
     const n = c.iterations ?? Number.POSITIVE_INFINITY;
-    while (times.length < n && (times.length < 5 || (c.iterations === undefined && performance.now() < budgetEnd))) {
+    const more = () =>
+      c.iterations !== undefined ? times.length < n : times.length < 5 || performance.now() < budgetEnd;
+    while (more()) {
       const s = performance.now();
-      sink = c.run();
+      sink = await c.run();
       times.push(performance.now() - s);
       if (times.length >= 200) break;
     }
@@ -65,11 +68,19 @@ for (const file of files) {
       `${row.suite.padEnd(12)} ${row.name.padEnd(58)} median ${row.median_ms.toFixed(3).padStart(10)} ms  p95 ${row.p95_ms.toFixed(3).padStart(10)} ms  runs ${String(row.runs).padStart(4)}  ${row.note}`,
     );
   }
+  if (mod.teardown) await mod.teardown();
 }
 
 mkdirSync("bench/results", { recursive: true });
+// A partial run (a suite prefix given) replaces only its own suites' rows.
+const latest = "bench/results/latest.json";
+if (only && existsSync(latest)) {
+  const suites = new Set(results.map((r) => r.suite));
+  const old = JSON.parse(readFileSync(latest, "utf8")).results ?? [];
+  results.unshift(...old.filter((r) => !suites.has(r.suite)));
+}
 writeFileSync(
-  "bench/results/latest.json",
+  latest,
   JSON.stringify(
     {
       date: new Date().toISOString(),

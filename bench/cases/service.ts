@@ -1,0 +1,64 @@
+/**
+ * Latency of POST /api/analyses (reference mechanism) against a really
+ * started production server, with 1 and 8 concurrent clients. Needs a build
+ * (`npm run build`); without one the suite reports nothing.
+ */
+import { type ChildProcess, spawn } from "node:child_process";
+import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
+import type { BenchCase } from "../types";
+
+const PORT = 3291;
+const base = `http://127.0.0.1:${PORT}`;
+let server: ChildProcess | null = null;
+let dataDir = "";
+let altitude = 20;
+
+function analysis(): Promise<number> {
+  altitude = altitude >= 50 ? 20 : altitude + 1;
+  return fetch(`${base}/api/analyses`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify({ mechanismId: "reference", condition: { altitude_km: altitude, zenith_deg: 40 } }),
+  }).then((r) => {
+    if (r.status !== 201) throw new Error(`status ${r.status}`);
+    return r.status;
+  });
+}
+
+export async function setup(): Promise<BenchCase[]> {
+  const dist = process.env.NEXT_DIST_DIR ?? ".next";
+  if (!existsSync(path.join(dist, "BUILD_ID")) || !existsSync(".engine/worker.mjs")) {
+    console.log("service: no build found, skipped (run npm run build first)");
+    return [];
+  }
+  dataDir = mkdtempSync(path.join(tmpdir(), "ozone-bench-"));
+  server = spawn("node_modules/.bin/next", ["start", "-p", String(PORT)], {
+    env: { ...process.env, OZONE_DATA_DIR: dataDir, NEXT_TELEMETRY_DISABLED: "1" },
+    stdio: "ignore",
+  });
+  const end = Date.now() + 60_000;
+  for (;;) {
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) break;
+    } catch {
+      if (Date.now() > end) throw new Error("server did not start");
+      await new Promise((r) => setTimeout(r, 250));
+    }
+  }
+  return [
+    { name: "POST /api/analyses, 1 client (per request)", run: analysis, iterations: 40 },
+    {
+      name: "POST /api/analyses, 8 concurrent clients (per batch of 8)",
+      run: () => Promise.all(Array.from({ length: 8 }, analysis)),
+      iterations: 10,
+      note: "latency of the slowest of 8 simultaneous requests",
+    },
+  ];
+}
+
+export async function teardown(): Promise<void> {
+  server?.kill("SIGKILL");
+  if (dataDir) rmSync(dataDir, { recursive: true, force: true });
+}
