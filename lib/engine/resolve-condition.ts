@@ -39,6 +39,11 @@ function amountToNumberDensity(a: Amount, M_cm3: number): number {
   return "mixingRatio" in a ? a.mixingRatio * M_cm3 : a.numberDensity_cm3;
 }
 
+/** The calendar year of a "YYYY-MM-DD" date (the solar position formulas use it). */
+export function yearOf(date: string): number {
+  return Number(date.slice(0, 4));
+}
+
 /** Resolves everything but the photolysis frequencies at one altitude and sun angle. */
 export function resolveCondition(mech: CompiledMechanism, input: ConditionInput): ResolvedCondition {
   const z = input.altitude_km;
@@ -53,7 +58,7 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
   const mode = input.mode ?? CONDITION_DEFAULTS.mode;
   const ozone = input.ozone ?? CONDITION_DEFAULTS.ozone;
   const zenith_deg =
-    input.zenith_deg ?? solarZenithAngle({ latitude_deg, dayOfYear: doy, localSolarTime_h: localSolarTime_h });
+    input.zenith_deg ?? solarZenithAngle({ latitude_deg, dayOfYear: doy, localSolarTime_h, year: yearOf(date) });
 
   const clim: Readonly<Record<string, number>> = climatologyAt(z);
   const held_cm3: Record<string, number> = {};

@@ -9,7 +9,7 @@ import { solarZenithAngle } from "../atmosphere";
 import type { CompiledMechanism } from "../mechanism/types";
 import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
-import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf } from "./resolve-condition";
+import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
 import type { AnalysisOptions, AnalysisRequest, AnalysisResult } from "./types";
 import { ENGINE_VERSION } from "./version";
 
@@ -75,6 +75,7 @@ export function runAnalysis(
               latitude_deg: condition.latitude_deg,
               dayOfYear: condition.dayOfYear,
               localSolarTime_h: t_h,
+              year: yearOf(condition.date),
             }),
           ),
         ),
