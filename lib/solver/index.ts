@@ -9,4 +9,5 @@ export {
 } from "./rosenbrock";
 export { DIURNAL_DEFAULTS, type DiurnalInput, solveDiurnal } from "./solveDiurnal";
 export { STEADY_STATE_DEFAULTS, solveSteadyState } from "./solveSteadyState";
+export { type SensitivityResult, steadyStateSensitivities } from "./steadyStateSensitivities";
 export type * from "./types";
