@@ -253,7 +253,7 @@ export function integrateOde(
       if (hooks.fixedStep !== undefined || err <= 1) {
         stepOk = true;
         t = last ? target : t + h;
-        if (hooks.nonNegative) for (let i = 0; i < n; i++) y[i] = ynew[i] > 0 ? ynew[i] : 0;
+        if (hooks.nonNegative) for (let i = 0; i < n; i++) y[i] = Math.max(ynew[i], 0);
         else y.set(ynew);
         accepted++;
         hooks.onLinearStep?.(h, J, A, pivot);
