@@ -44,7 +44,7 @@ export function summarise(id: string, builtin: boolean, mech: CompiledMechanism,
 }
 
 /** Body is { text, format? } as JSON, or the document itself (YAML or JSON). */
-export function uploadMechanism(body: string, contentType: string) {
+export async function uploadMechanism(body: string, contentType: string) {
   let text = body;
   let format: "yaml" | "json" | undefined;
   if (contentType.includes("json")) {
@@ -63,7 +63,7 @@ export function uploadMechanism(body: string, contentType: string) {
   const loaded = loadMechanism(text, { format });
   const id = mechanismContentId(loaded.canonical);
   const fmt = format ?? (/^\s*[{[]/.test(text) ? "json" : "yaml");
-  const inserted = getStore().putMechanism({
+  const inserted = await getStore().putMechanism({
     id,
     title: loaded.mechanism.title,
     description: loaded.mechanism.description,
@@ -89,7 +89,7 @@ export function uploadMechanism(body: string, contentType: string) {
   };
 }
 
-export function listMechanisms() {
+export async function listMechanisms() {
   const builtins = builtinMechanisms().map((b) => {
     const m = loadBuiltinMechanism(b.id).mechanism;
     return {
@@ -101,32 +101,30 @@ export function listMechanisms() {
       reactionCount: m.reactions.length,
     };
   });
-  const uploads = getStore()
-    .listMechanisms(50)
-    .map((m) => ({
-      id: m.id,
-      title: m.title,
-      description: m.description,
-      builtin: false,
-      speciesCount: m.speciesCount,
-      reactionCount: m.reactionCount,
-      createdAt: m.createdAt,
-    }));
+  const uploads = (await getStore().listMechanisms(50)).map((m) => ({
+    id: m.id,
+    title: m.title,
+    description: m.description,
+    builtin: false,
+    speciesCount: m.speciesCount,
+    reactionCount: m.reactionCount,
+    createdAt: m.createdAt,
+  }));
   return { mechanisms: [...builtins, ...uploads] };
 }
 
 /** The source of a mechanism for the engine, or a 404. */
-export function mechanismSource(id: string): MechanismSource {
+export async function mechanismSource(id: string): Promise<MechanismSource> {
   if (!ID_PATTERN.test(id)) throw notFound("mechanism", id);
   const builtin = builtinMechanisms().find((b) => b.id === id);
   if (builtin) return { id, title: builtin.title };
-  const stored = getStore().getMechanism(id);
+  const stored = await getStore().getMechanism(id);
   if (!stored) throw notFound("mechanism", id);
   return { id, title: stored.title, text: stored.text };
 }
 
-export function mechanismDetail(id: string) {
-  const src = mechanismSource(id);
+export async function mechanismDetail(id: string) {
+  const src = await mechanismSource(id);
   const mech = compileSource(src);
   const text = src.text ?? loadBuiltinText(id);
   return summarise(id, src.text === undefined, mech, text);

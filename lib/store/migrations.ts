@@ -1,8 +1,23 @@
 /**
- * Numbered schema migrations, applied in order at start. Never edit a
- * migration that has shipped: add the next number.
+ * Numbered schema migrations, applied in order at start by every back end.
+ * Never edit a migration that has shipped: add the next number. `sql` is
+ * written in the common subset of SQLite and PostgreSQL; a migration that
+ * needs dialect-specific SQL gives `postgres` as well (then `sql` is
+ * SQLite's).
  */
-export const MIGRATIONS: { version: number; sql: string }[] = [
+export interface Migration {
+  version: number;
+  /** SQLite, and PostgreSQL too unless `postgres` is given */
+  sql: string;
+  /** PostgreSQL's form, when it differs */
+  postgres?: string;
+}
+
+/** The SQL of a migration in a dialect. */
+export const migrationSql = (m: Migration, dialect: "sqlite" | "postgres"): string =>
+  dialect === "postgres" ? (m.postgres ?? m.sql) : m.sql;
+
+export const MIGRATIONS: Migration[] = [
   {
     version: 1,
     sql: `

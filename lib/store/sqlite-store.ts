@@ -1,37 +1,15 @@
 /**
  * SQLite back end of the store (better-sqlite3 12): WAL mode, foreign keys
  * on, migrations run at open, every write in one transaction so that nothing
- * is half-stored.
+ * is half-stored. The driver is synchronous; the methods return settled
+ * promises to fit the store's asynchronous interface.
  */
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import Database from "better-sqlite3";
-import { MIGRATIONS } from "./migrations";
-import type { Store, StoredAnalysis, StoredMechanism, StoredRecord } from "./types";
-
-interface MechanismRow {
-  id: string;
-  title: string;
-  description: string;
-  text: string;
-  format: "yaml" | "json";
-  species_count: number;
-  reaction_count: number;
-  created_at: string;
-}
-
-function toMechanism(r: MechanismRow): StoredMechanism {
-  return {
-    id: r.id,
-    title: r.title,
-    description: r.description,
-    text: r.text,
-    format: r.format,
-    speciesCount: r.species_count,
-    reactionCount: r.reaction_count,
-    createdAt: r.created_at,
-  };
-}
+import { MIGRATIONS, migrationSql } from "./migrations";
+import { type AnalysisRow, type MechanismRow, type RecordRow, toAnalysis, toMechanism, toRecord } from "./rows";
+import type { Store, StoredAnalysis, StoredRecord } from "./types";
 
 export function openSqliteStore(file: string): Store {
   if (file !== ":memory:") mkdirSync(path.dirname(file), { recursive: true });
@@ -46,7 +24,7 @@ export function openSqliteStore(file: string): Store {
      VALUES (@id, @title, @description, @text, @format, @speciesCount, @reactionCount, @createdAt)`,
   );
   const selectMechanism = db.prepare("SELECT * FROM mechanisms WHERE id = ?");
-  const listMechanisms = db.prepare("SELECT * FROM mechanisms ORDER BY created_at DESC, id LIMIT ?");
+  const listMechanisms = db.prepare("SELECT * FROM mechanisms ORDER BY created_at DESC, id ASC LIMIT ?");
   const insertAnalysis = db.prepare(
     `INSERT INTO analyses (id, mechanism_id, engine_version, request_json, result_json, created_at)
      VALUES (?, ?, ?, ?, ?, ?)`,
@@ -58,17 +36,18 @@ export function openSqliteStore(file: string): Store {
   const selectRecord = db.prepare("SELECT * FROM records WHERE kind = ? AND id = ?");
 
   return {
-    putMechanism(m) {
+    backend: "sqlite",
+    async putMechanism(m) {
       return insertMechanism.run(m).changes === 1;
     },
-    getMechanism(id) {
+    async getMechanism(id) {
       const row = selectMechanism.get(id) as MechanismRow | undefined;
       return row ? toMechanism(row) : null;
     },
-    listMechanisms(limit) {
+    async listMechanisms(limit) {
       return (listMechanisms.all(limit) as MechanismRow[]).map(toMechanism);
     },
-    putAnalysis(a: StoredAnalysis) {
+    async putAnalysis(a: StoredAnalysis) {
       insertAnalysis.run(
         a.id,
         a.mechanismId,
@@ -78,44 +57,18 @@ export function openSqliteStore(file: string): Store {
         a.createdAt,
       );
     },
-    getAnalysis(id) {
-      const row = selectAnalysis.get(id) as
-        | {
-            id: string;
-            mechanism_id: string;
-            engine_version: string;
-            request_json: string;
-            result_json: string;
-            created_at: string;
-          }
-        | undefined;
-      if (!row) return null;
-      return {
-        id: row.id,
-        mechanismId: row.mechanism_id,
-        engineVersion: row.engine_version,
-        request: JSON.parse(row.request_json),
-        result: JSON.parse(row.result_json),
-        createdAt: row.created_at,
-      };
+    async getAnalysis(id) {
+      const row = selectAnalysis.get(id) as AnalysisRow | undefined;
+      return row ? toAnalysis(row) : null;
     },
-    putRecord(r: StoredRecord) {
+    async putRecord(r: StoredRecord) {
       insertRecord.run(r.kind, r.id, r.engineVersion, JSON.stringify(r.body), r.createdAt);
     },
-    getRecord(kind, id) {
-      const row = selectRecord.get(kind, id) as
-        | { kind: string; id: string; engine_version: string; body_json: string; created_at: string }
-        | undefined;
-      if (!row) return null;
-      return {
-        kind: row.kind,
-        id: row.id,
-        engineVersion: row.engine_version,
-        body: JSON.parse(row.body_json),
-        createdAt: row.created_at,
-      };
+    async getRecord(kind, id) {
+      const row = selectRecord.get(kind, id) as RecordRow | undefined;
+      return row ? toRecord(row) : null;
     },
-    close() {
+    async close() {
       db.close();
     },
   };
@@ -129,7 +82,7 @@ function migrate(db: Database.Database): void {
   for (const m of MIGRATIONS) {
     if (done.has(m.version)) continue;
     db.transaction(() => {
-      db.exec(m.sql);
+      db.exec(migrationSql(m, "sqlite"));
       db.prepare("INSERT INTO schema_migrations (version, applied_at) VALUES (?, ?)").run(
         m.version,
         new Date().toISOString(),

@@ -1,6 +1,8 @@
 /**
  * The storage interface: mechanisms are content-addressed, analyses are
- * immutable. One implementation per back end (SQLite is the default).
+ * immutable. One implementation per back end (SQLite is the default,
+ * PostgreSQL when DATABASE_URL is set); every method is asynchronous so that
+ * a networked database fits the same interface.
  */
 
 export interface StoredMechanism {
@@ -38,14 +40,18 @@ export interface StoredRecord<T = unknown> {
 }
 
 export interface Store {
-  /** Inserts the mechanism if its id is new; returns whether it was inserted. */
-  putMechanism(m: StoredMechanism): boolean;
-  getMechanism(id: string): StoredMechanism | null;
+  /** which back end this is, for diagnostics */
+  readonly backend: "sqlite" | "postgres";
+  /** Inserts the mechanism if its id is new; resolves to whether it was inserted. */
+  putMechanism(m: StoredMechanism): Promise<boolean>;
+  getMechanism(id: string): Promise<StoredMechanism | null>;
   /** Most recent uploads first. */
-  listMechanisms(limit: number): StoredMechanism[];
-  putAnalysis(a: StoredAnalysis): void;
-  getAnalysis(id: string): StoredAnalysis | null;
-  putRecord(r: StoredRecord): void;
-  getRecord(kind: string, id: string): StoredRecord | null;
-  close(): void;
+  listMechanisms(limit: number): Promise<StoredMechanism[]>;
+  /** Rejects when the id is taken (analyses are immutable). */
+  putAnalysis(a: StoredAnalysis): Promise<void>;
+  getAnalysis(id: string): Promise<StoredAnalysis | null>;
+  /** Rejects when (kind, id) is taken (records are immutable). */
+  putRecord(r: StoredRecord): Promise<void>;
+  getRecord(kind: string, id: string): Promise<StoredRecord | null>;
+  close(): Promise<void>;
 }
