@@ -16,11 +16,11 @@ export const MAX_ANALYSIS_BODY = 256 * 1024;
 
 export async function createAnalysis(body: unknown): Promise<{ id: string; result: AnalysisResult }> {
   const request = parseAnalysisRequest(body);
-  const src = mechanismSource(request.mechanismId);
+  const src = await mechanismSource(request.mechanismId);
   const out = await enginePool().run({ kind: "analysis", mechanism: src, request });
   const result = out.result;
   const id = newRecordId();
-  getStore().putAnalysis({
+  await getStore().putAnalysis({
     id,
     mechanismId: src.id,
     engineVersion: ENGINE_VERSION,
@@ -40,8 +40,8 @@ export interface AnalysisRecord {
   result: AnalysisResult;
 }
 
-export function getAnalysisRecord(id: string): AnalysisRecord {
-  const a = ID_PATTERN.test(id) ? getStore().getAnalysis(id) : null;
+export async function getAnalysisRecord(id: string): Promise<AnalysisRecord> {
+  const a = ID_PATTERN.test(id) ? await getStore().getAnalysis(id) : null;
   if (!a) throw notFound("analysis", id);
   return {
     id: a.id,
