@@ -73,8 +73,9 @@ export function Toolbar({
         Fit to view
       </button>
       <label className="flex items-center gap-1 text-[12px] text-stone-700">
-        <span>Inspect</span>
+        <span aria-hidden>Inspect</span>
         <select
+          aria-label="Inspect a species or reaction"
           value={selected ?? ""}
           onChange={(e) => onInspect(e.target.value || null)}
           className="max-w-[150px] rounded border border-stone-300 bg-white px-1 py-0.5 text-[12px] focus:outline-2 focus:outline-stone-800"

@@ -73,7 +73,7 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
   const H = all.y1 - all.y0 + 2 * m + top;
   const tx = (x: number) => f(x - all.x0 + m);
   const ty = (y: number) => f(y - all.y0 + m + top);
-  const op = (id: string) => (o.dimmed?.has(id) ? ' opacity="0.13"' : "");
+  const op = (id: string) => (o.dimmed?.has(id) ? ' opacity="0.18"' : "");
 
   const out: string[] = [];
   out.push(

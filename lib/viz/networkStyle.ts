@@ -115,8 +115,13 @@ export function networkStyle(): StyleRule[] {
     },
     { selector: "edge.hl", style: { opacity: 1, "z-index": 30 } },
     { selector: "node.species.hl", style: { "border-width": 2.5, "border-color": "#1f2328" } },
-    { selector: ".dim", style: { opacity: 0.13 } },
-    { selector: "node.frame.dim", style: { opacity: 0.45 } },
+    { selector: "node.dim", style: { opacity: 0.18 } },
+    { selector: "edge.dim", style: { opacity: 0.07 } },
+    // a frame's opacity would also fade the lit species inside it, so a dimmed frame fades its own paint only
+    {
+      selector: "node.frame.dim",
+      style: { opacity: 1, "background-opacity": 0.35, "border-opacity": 0.12, "text-opacity": 0.45 },
+    },
     {
       selector: "node:selected",
       style: { "overlay-color": "#1f2328", "overlay-opacity": 0.14, "overlay-padding": 5 },

@@ -152,7 +152,7 @@ test("everything in the conditions and the inspector can be reached from the key
   await expect(page.getByLabel("Altitude")).toBeFocused();
   await page.keyboard.press("Tab");
   await expect(page.getByLabel("Temperature")).toBeFocused();
-  await page.getByLabel("Inspect").selectOption("s:ClO");
+  await page.getByRole("combobox", { name: "Inspect a species or reaction" }).selectOption("s:ClO");
   await expect(page.getByTestId("inspector")).toContainText("mixing ratio");
   await expect(page).toHaveURL(/sel=s%3AClO/);
 });
@@ -196,6 +196,38 @@ test("a broken mechanism upload shows the problem at its line", async ({ page })
   await expect(marked).toBeVisible();
   await expect(marked).toContainText("Xq3");
   await shot(page, "upload-error");
+});
+
+test("a valid mechanism upload is checked, chosen and analysed", async ({ page }) => {
+  await openExplorer(page, "m=oxygen&z=30");
+  const doc = [
+    "title: Invented three-reaction upload",
+    'version: "0.1"',
+    "description: invented test document",
+    "species:",
+    "  - { id: O2, role: held, group: bath, mixingRatio: 0.2095 }",
+    "  - { id: M, role: third-body }",
+    "  - { id: O, role: solved, group: Ox }",
+    "  - { id: O3, role: solved, group: Ox }",
+    "reactions:",
+    "  - id: J1",
+    "    equation: O2 + hv -> 2 O",
+    "    rate: { law: photolysis, channel: O2 }",
+    "  - id: K1",
+    "    equation: O + O2 + M -> O3 + M",
+    "    rate: { law: termolecular, k0: 6.0e-34, n: 2.4 }",
+    "  - id: K2",
+    "    equation: O + O3 -> 2 O2",
+    "    rate: { law: arrhenius, A: 8.0e-12, E/R: 2060 }",
+  ].join("\n");
+  await page.getByRole("button", { name: "Upload…" }).click();
+  await page.getByLabel("Mechanism document (YAML or JSON)").fill(doc);
+  await page.getByRole("button", { name: "Check and use" }).click();
+  await expect(page.getByRole("dialog")).toBeHidden();
+  await expect(page.getByTestId("status")).toContainText("Invented three-reaction upload", { timeout: 60_000 });
+  await expect(page.getByTestId("status")).toContainText("converged");
+  await expect(page.getByTestId("cycle").first()).toContainText("O + O3 -> 2 O2");
+  await expect(page).not.toHaveURL(/m=oxygen(&|$)/);
 });
 
 test("a bad condition is reported beside its field", async ({ page }) => {

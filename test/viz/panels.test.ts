@@ -108,7 +108,7 @@ describe("graphSvg", () => {
   it("draws dimmed elements faint", () => {
     const svg = graphSvg(els, { dimmed: new Set(["r:K3"]) });
     expect(svg).toMatch(
-      /class="reaction" opacity="0.13" points="[^"]+" fill="[^"]+" stroke="[^"]+" stroke-width="1.5" stroke-linejoin="round"><title>O \+ O3 -&gt; 2 O2/,
+      /class="reaction" opacity="0.18" points="[^"]+" fill="[^"]+" stroke="[^"]+" stroke-width="1.5" stroke-linejoin="round"><title>O \+ O3 -&gt; 2 O2/,
     );
   });
 
