@@ -1,30 +1,21 @@
 /**
- * From a condition as a user states it to everything a solve needs: T, p and
- * [M] from the U.S. Standard Atmosphere 1976 unless overridden, the solar
- * zenith angle from latitude, date and local solar time (unless given), the
- * overhead ozone column and every photolysis frequency, and the held amounts
- * and pool totals from the default climatology unless overridden.
+ * A condition for one mechanism: the atmosphere and sunlight at the place and
+ * time (lib/photolysis `conditionAt`: U.S. Standard Atmosphere 1976, NOAA
+ * solar position, default climatology, every J, each with its source), cut
+ * down to the species, pools and photolysis channels this mechanism has.
  *
  * Precedence for a held species: the user's override, then the climatology,
  * then the mechanism's default amount. For a pool total: override, then the
- * climatology, then the mechanism's default total.
+ * climatology, then the mechanism's default total. O3 is held at the
+ * climatology unless the condition asks to solve it.
  */
-import {
-  climatologyAt,
-  DOBSON_UNIT_cm2,
-  dayOfYear,
-  ozoneColumnAbove_cm2,
-  solarZenithAngle,
-  standardAtmosphere,
-} from "../atmosphere";
+
+import { airColumnAbove_cm2, DOBSON_UNIT_cm2, O2_FRACTION, standardAtmosphere } from "../atmosphere";
 import { InputError } from "../errors";
 import type { Amount, CompiledMechanism } from "../mechanism/types";
-import { photolysisFrequencies } from "../photolysis";
+import { conditionAt, photolysisFrequencies } from "../photolysis";
 import type { SolveConditions } from "../solver/types";
 import type { ConditionInput, ResolvedCondition } from "./types";
-
-/** Boltzmann constant, J K⁻¹ (SI 2019, exact). */
-const K_B = 1.380649e-23;
 
 export const CONDITION_DEFAULTS = {
   latitude_deg: 45,
@@ -32,56 +23,91 @@ export const CONDITION_DEFAULTS = {
   localSolarTime_h: 12,
   mode: "instantaneous",
   ozone: "held",
-  jScale: 1,
 } as const;
 
 function amountToNumberDensity(a: Amount, M_cm3: number): number {
   return "mixingRatio" in a ? a.mixingRatio * M_cm3 : a.numberDensity_cm3;
 }
 
-/** The calendar year of a "YYYY-MM-DD" date (the solar position formulas use it). */
-export function yearOf(date: string): number {
-  return Number(date.slice(0, 4));
-}
-
-/** Resolves everything but the photolysis frequencies at one altitude and sun angle. */
 export function resolveCondition(mech: CompiledMechanism, input: ConditionInput): ResolvedCondition {
-  const z = input.altitude_km;
-  const std = standardAtmosphere(z);
-  const T_K = input.T_K ?? std.T_K;
-  const p_hPa = input.p_hPa ?? std.p_hPa;
-  const M_cm3 = (p_hPa * 100) / (K_B * T_K) / 1e6;
-  const latitude_deg = input.latitude_deg ?? CONDITION_DEFAULTS.latitude_deg;
-  const date = input.date ?? CONDITION_DEFAULTS.date;
-  const doy = dayOfYear(date);
-  const localSolarTime_h = input.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h;
-  const mode = input.mode ?? CONDITION_DEFAULTS.mode;
-  const ozone = input.ozone ?? CONDITION_DEFAULTS.ozone;
-  const zenith_deg =
-    input.zenith_deg ?? solarZenithAngle({ latitude_deg, dayOfYear: doy, localSolarTime_h, year: yearOf(date) });
+  checkIds(mech, input);
+  const base = conditionAt(input);
+  const { M_cm3 } = base;
+  const sources = { ...base.sources };
 
-  const clim: Readonly<Record<string, number>> = climatologyAt(z);
   const held_cm3: Record<string, number> = {};
   for (const sp of mech.species) {
-    if (sp.role !== "held" && !(sp.id === "O3" && ozone === "held")) continue;
-    const override = input.held?.[sp.id];
-    if (override !== undefined) held_cm3[sp.id] = override * M_cm3;
-    else if (clim[sp.id] !== undefined) held_cm3[sp.id] = clim[sp.id] * M_cm3;
-    else if (sp.defaultAmount) held_cm3[sp.id] = amountToNumberDensity(sp.defaultAmount, M_cm3);
-    else throw new InputError(`condition.held.${sp.id}`, `no amount for held species ${sp.id}: give a mixing ratio`);
-  }
-  for (const id of Object.keys(input.held ?? {})) {
-    if (!(id in mech.speciesIndex)) throw new InputError(`condition.held.${id}`, `unknown species ${id}`);
-    if (held_cm3[id] === undefined)
-      throw new InputError(`condition.held.${id}`, `${id} is solved in this mechanism and cannot be given an amount`);
+    if (sp.role !== "held" && !(sp.id === "O3" && base.ozone === "held")) continue;
+    const fromBase = base.held_cm3[sp.id];
+    if (fromBase !== undefined) held_cm3[sp.id] = fromBase;
+    else if (sp.defaultAmount) {
+      held_cm3[sp.id] = amountToNumberDensity(sp.defaultAmount, M_cm3);
+      sources[sp.id] = "mechanism default amount";
+    } else throw new InputError(`condition.held.${sp.id}`, `no amount for held species ${sp.id}: give a mixing ratio`);
   }
 
   const poolTotals_cm3: Record<string, number> = {};
   for (const pool of mech.pools) {
-    const override = input.poolTotals?.[pool.id];
-    if (override !== undefined) poolTotals_cm3[pool.id] = override * M_cm3;
-    else if (clim[pool.id] !== undefined) poolTotals_cm3[pool.id] = clim[pool.id] * M_cm3;
-    else if (pool.total) poolTotals_cm3[pool.id] = amountToNumberDensity(pool.total, M_cm3);
+    const fromBase = base.poolTotals_cm3[pool.id];
+    if (fromBase !== undefined) poolTotals_cm3[pool.id] = fromBase;
+    else if (pool.total) {
+      poolTotals_cm3[pool.id] = amountToNumberDensity(pool.total, M_cm3);
+      sources[pool.id] = "mechanism default total";
+    }
+  }
+
+  const keep = new Set([...Object.keys(held_cm3), ...Object.keys(poolTotals_cm3), "T_K", "p_hPa", "zenith_deg"]);
+  for (const k of ["o3Column", "J"]) keep.add(k);
+  return {
+    ...base,
+    J_s: restrictJ(mech, base.J_s),
+    held_cm3,
+    poolTotals_cm3,
+    sources: Object.fromEntries(Object.entries(sources).filter(([k]) => keep.has(k))),
+  };
+}
+
+/**
+ * The mechanism's photolysis frequencies at another zenith angle (the 24-hour
+ * cycle) or under another overhead O3 column (a profile with O3 solved takes
+ * it from the levels above), with the user's fixed values and scale applied.
+ */
+export function jAt(
+  mech: CompiledMechanism,
+  c: Pick<ResolvedCondition, "altitude_km" | "T_K" | "p_hPa" | "M_cm3" | "o3ColumnAbove_DU">,
+  input: Pick<ConditionInput, "J" | "jScale">,
+  zenith_deg: number,
+): Record<string, number> {
+  // The O2 column follows the pressure at the level when that is overridden (as in conditionAt).
+  const o2Above = O2_FRACTION * airColumnAbove_cm2(c.altitude_km) * (c.p_hPa / standardAtmosphere(c.altitude_km).p_hPa);
+  const all = photolysisFrequencies(
+    {
+      altitude_km: c.altitude_km,
+      zenith_deg,
+      T_K: c.T_K,
+      M_cm3: c.M_cm3,
+      o3ColumnAbove_cm2: c.o3ColumnAbove_DU * DOBSON_UNIT_cm2,
+      o2ColumnAbove_cm2: o2Above,
+    },
+    { jScale: input.jScale, fixed: input.J },
+  );
+  return restrictJ(mech, all);
+}
+
+function restrictJ(mech: CompiledMechanism, all: Record<string, number>): Record<string, number> {
+  const J: Record<string, number> = {};
+  for (const ch of mech.photolysisChannels) J[ch] = all[ch] ?? 0;
+  return J;
+}
+
+/** Overrides must name species, pools and channels this mechanism has. */
+function checkIds(mech: CompiledMechanism, input: ConditionInput): void {
+  const ozoneHeld = (input.ozone ?? CONDITION_DEFAULTS.ozone) === "held";
+  for (const id of Object.keys(input.held ?? {})) {
+    const sp = mech.species[mech.speciesIndex[id] ?? -1];
+    if (!sp) throw new InputError(`condition.held.${id}`, `unknown species ${id}`);
+    if (sp.role !== "held" && !(id === "O3" && ozoneHeld))
+      throw new InputError(`condition.held.${id}`, `${id} is solved in this mechanism and cannot be given an amount`);
   }
   for (const id of Object.keys(input.poolTotals ?? {})) {
     if (!mech.pools.some((p) => p.id === id))
@@ -97,49 +123,11 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
         `unknown photolysis channel ${id}; channels: ${mech.photolysisChannels.join(", ")}`,
       );
   }
-
-  const o3Column = ozoneColumnAbove_cm2(z);
-  const resolved: ResolvedCondition = {
-    altitude_km: z,
-    T_K,
-    p_hPa,
-    M_cm3,
-    latitude_deg,
-    date,
-    dayOfYear: doy,
-    localSolarTime_h,
-    zenith_deg,
-    mode,
-    ozone,
-    o3ColumnAbove_DU: o3Column / DOBSON_UNIT_cm2,
-    J_s: {},
-    held_cm3,
-    poolTotals_cm3,
-  };
-  resolved.J_s = jAt(mech, resolved, input, zenith_deg);
-  return resolved;
 }
 
-/** Photolysis frequencies at a given zenith angle, with the user's scale and fixed values applied. */
-export function jAt(
-  mech: CompiledMechanism,
-  c: Pick<ResolvedCondition, "altitude_km" | "T_K" | "M_cm3" | "o3ColumnAbove_DU">,
-  input: Pick<ConditionInput, "J" | "jScale">,
-  zenith_deg: number,
-): Record<string, number> {
-  const all = photolysisFrequencies(
-    {
-      altitude_km: c.altitude_km,
-      zenith_deg,
-      T_K: c.T_K,
-      M_cm3: c.M_cm3,
-      o3ColumnAbove_cm2: c.o3ColumnAbove_DU * DOBSON_UNIT_cm2,
-    },
-    { jScale: input.jScale ?? CONDITION_DEFAULTS.jScale },
-  );
-  const J: Record<string, number> = {};
-  for (const ch of mech.photolysisChannels) J[ch] = input.J?.[ch] ?? all[ch] ?? 0;
-  return J;
+/** The calendar year of a "YYYY-MM-DD" date (the solar position formulas use it). */
+export function yearOf(date: string): number {
+  return Number(date.slice(0, 4));
 }
 
 export function solveConditionsOf(c: ResolvedCondition, J_s: Record<string, number> = c.J_s): SolveConditions {

@@ -73,6 +73,8 @@ export interface ResolvedCondition {
   held_cm3: Record<string, number>;
   /** pool totals used, cm⁻³ */
   poolTotals_cm3: Record<string, number>;
+  /** where each value came from ("U.S. Standard Atmosphere 1976", "given", "default climatology: …"), by quantity */
+  sources?: Record<string, string>;
 }
 
 export interface AnalysisResult {
