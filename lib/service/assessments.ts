@@ -40,14 +40,14 @@ export const MAX_ANSWERS_BODY = 1024 * 1024;
 export const instructorPath = (id: string) => `/assess/i/${id}`;
 export const studentPath = (id: string) => `/assess/s/${id}`;
 
-function analyser(mechanismId: string) {
-  const src = mechanismSource(mechanismId);
+async function analyser(mechanismId: string) {
+  const src = await mechanismSource(mechanismId);
   return async (request: AnalysisRequest): Promise<AnalysisResult> =>
     (await enginePool().run({ kind: "analysis", mechanism: src, request })).result;
 }
 
-function offerOf(mechanismId: string) {
-  const m = mechanismDetail(mechanismId);
+async function offerOf(mechanismId: string) {
+  const m = await mechanismDetail(mechanismId);
   return {
     title: m.title,
     solvedSpecies: m.species.filter((s) => s.role === "solved").map((s) => s.id),
@@ -68,8 +68,8 @@ export async function previewAssessment(body: unknown) {
     mechanismId: string;
     condition: ConditionInput;
   };
-  const offer = offerOf(mechanismId);
-  const result = await analyser(mechanismId)({ mechanismId, condition });
+  const offer = await offerOf(mechanismId);
+  const result = await (await analyser(mechanismId))({ mechanismId, condition });
   return {
     mechanism: result.mechanism,
     status: result.steadyState.status,
@@ -98,10 +98,10 @@ export async function createAssessment(body: unknown): Promise<{
   assessment: InstructorAssessment;
 }> {
   const parsed = parseAssessmentSpec(body);
-  const offer = offerOf(parsed.mechanismId);
+  const offer = await offerOf(parsed.mechanismId);
   checkAgainstMechanism(parsed, offer);
   const spec: AssessmentSpec & { seed: number } = { ...parsed, seed: parsed.seed ?? randomBytes(4).readUInt32BE(0) };
-  const generated = await generateAssessment(spec, { analyse: analyser(spec.mechanismId) });
+  const generated = await generateAssessment(spec, { analyse: await analyser(spec.mechanismId) });
 
   const store = getStore();
   const createdAt = new Date().toISOString();
@@ -113,7 +113,7 @@ export async function createAssessment(body: unknown): Promise<{
     ] as const) {
       if (!request || !result) continue;
       const id = newRecordId();
-      store.putAnalysis({
+      await store.putAnalysis({
         id,
         mechanismId: spec.mechanismId,
         engineVersion: ENGINE_VERSION,
@@ -142,14 +142,14 @@ export async function createAssessment(body: unknown): Promise<{
     sheets: generated.sheets,
     warnings: generated.warnings,
   };
-  store.putRecord({
+  await store.putRecord({
     kind: STUDENT_KIND,
     id: studentId,
     engineVersion: ENGINE_VERSION,
     body: studentView(assessment),
     createdAt,
   });
-  store.putRecord({
+  await store.putRecord({
     kind: ASSESSMENT_KIND,
     id: instructorId,
     engineVersion: ENGINE_VERSION,
@@ -165,21 +165,21 @@ export async function createAssessment(body: unknown): Promise<{
   };
 }
 
-export function getInstructorAssessment(id: string): InstructorAssessment {
-  const r = ID_PATTERN.test(id) ? getStore().getRecord(ASSESSMENT_KIND, id) : null;
+export async function getInstructorAssessment(id: string): Promise<InstructorAssessment> {
+  const r = ID_PATTERN.test(id) ? await getStore().getRecord(ASSESSMENT_KIND, id) : null;
   if (!r) throw notFound("assessment", id);
   return r.body as InstructorAssessment;
 }
 
 /** Reads only the student record: the key is not in it. */
-export function getStudentAssessment(id: string): StudentAssessment {
-  const r = ID_PATTERN.test(id) ? getStore().getRecord(STUDENT_KIND, id) : null;
+export async function getStudentAssessment(id: string): Promise<StudentAssessment> {
+  const r = ID_PATTERN.test(id) ? await getStore().getRecord(STUDENT_KIND, id) : null;
   if (!r) throw notFound("student sheet", id);
   return r.body as StudentAssessment;
 }
 
-export function markAssessment(id: string, csvText: string): ClassMarks & { csv: string } {
-  const a = getInstructorAssessment(id);
+export async function markAssessment(id: string, csvText: string): Promise<ClassMarks & { csv: string }> {
+  const a = await getInstructorAssessment(id);
   const marks = markClass(csvText, a.key, { variants: a.variants.length, questions: a.questions.length });
   return { ...marks, csv: marksCsv(marks, a.questions.length) };
 }
