@@ -28,6 +28,15 @@ describe("resolving a condition", () => {
     expectClose(hot.M_cm3, c.M_cm3 * (std.T_K / 250), { rel: 1e-12 });
   });
 
+  it("names the source of every value it filled in", () => {
+    const c = resolveCondition(reference, { altitude_km: 30, T_K: 230, poolTotals: { Cly: 3e-9 } });
+    expect(c.sources?.T_K).toBe("given");
+    expect(c.sources?.p_hPa).toBe("U.S. Standard Atmosphere 1976");
+    expect(c.sources?.Cly).toBe("given");
+    expect(c.sources?.CH4).toMatch(/climatology/);
+    for (const id of Object.keys(c.held_cm3)) expect(c.sources?.[id], id).toBeTruthy();
+  });
+
   it("gives held amounts and pool totals from the climatology, with user overrides first", () => {
     const c = resolveCondition(reference, { altitude_km: 40, poolTotals: { Cly: 4e-9 }, held: { CH4: 5e-7 } });
     expectClose(c.poolTotals_cm3.Cly, 4e-9 * c.M_cm3, { rel: 1e-12 });
