@@ -45,11 +45,11 @@ export function jobView(s: JobStatus): JobView {
 }
 
 export async function startSweep(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("profile-sweep", validateSweep(body)));
+  return jobView(await jobBackend().submit("profile-sweep", await validateSweep(body)));
 }
 
 export async function startComparison(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("comparison", validateComparison(body)));
+  return jobView(await jobBackend().submit("comparison", await validateComparison(body)));
 }
 
 const JOB_ID = /^[A-Za-z0-9_-]{16}$/;

@@ -24,7 +24,7 @@ import { runSweep, type SweepExecutor, type SweepProgress } from "../profiles/ru
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { notFound } from "./http";
-import { mechanismSource } from "./mechanisms";
+import { listMechanisms, mechanismSource } from "./mechanisms";
 
 export const PROFILE_KIND = "profile";
 export const COMPARISON_KIND = "comparison";
@@ -53,11 +53,11 @@ interface Prepared {
 }
 
 /** Checks everything a sweep needs before it is queued; `path` prefixes error paths (e.g. "a"). */
-function prepareSweep(request: SweepRequest, path = ""): Prepared {
+async function prepareSweep(request: SweepRequest, path = ""): Promise<Prepared> {
   const at = (p: string) => (path ? `${path}.${p}` : p);
   let src: MechanismSource;
   try {
-    src = mechanismSource(request.mechanismId);
+    src = await mechanismSource(request.mechanismId);
   } catch {
     throw new InputError(at("mechanismId"), `unknown mechanism ${request.mechanismId}`, "unknown-mechanism");
   }
@@ -128,7 +128,7 @@ export interface ProfileRecordBody {
   result: SweepResult;
 }
 
-function storeSweep(p: Prepared, result: SweepResult): string {
+async function storeSweep(p: Prepared, result: SweepResult): Promise<string> {
   const id = newRecordId();
   // the CSV text is kept once, as the parsed profile
   const request: SweepRequest =
@@ -136,7 +136,7 @@ function storeSweep(p: Prepared, result: SweepResult): string {
       ? { ...p.request, profile: { kind: "csv", csv: "", name: p.request.profile.name } }
       : p.request;
   const body: ProfileRecordBody = { request, profile: p.profile, result };
-  getStore().putRecord({
+  await getStore().putRecord({
     id,
     kind: PROFILE_KIND,
     engineVersion: ENGINE_VERSION,
@@ -147,27 +147,27 @@ function storeSweep(p: Prepared, result: SweepResult): string {
 }
 
 /** Parses and checks a sweep request; throws InputError (400) before anything is queued. */
-export function validateSweep(body: unknown): SweepRequest {
+export async function validateSweep(body: unknown): Promise<SweepRequest> {
   const request = parseSweepRequest(body);
-  prepareSweep(request);
+  await prepareSweep(request);
   return request;
 }
 
 /** Job handler "profile-sweep". */
 export async function sweepJob(input: SweepRequest, ctx: JobContext) {
-  const p = prepareSweep(input);
+  const p = await prepareSweep(input);
   const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)));
   if (ctx.signal.aborted) throw ctx.signal.reason;
-  return { resultId: storeSweep(p, result), resultKind: PROFILE_KIND };
+  return { resultId: await storeSweep(p, result), resultKind: PROFILE_KIND };
 }
 
 /** Parses and checks a comparison request; stored sides must exist. */
-export function validateComparison(body: unknown): ComparisonRequest {
+export async function validateComparison(body: unknown): Promise<ComparisonRequest> {
   const request = parseComparisonRequest(body);
   for (const key of ["a", "b"] as const) {
     const side = request[key];
-    if ("sweepId" in side) getProfileRecord(side.sweepId, `${key}.sweepId`);
-    else prepareSweep(side, key);
+    if ("sweepId" in side) await getProfileRecord(side.sweepId, `${key}.sweepId`);
+    else await prepareSweep(side, key);
   }
   return request;
 }
@@ -179,10 +179,12 @@ export interface ComparisonRecordBody {
 
 /** Job handler "comparison": runs the sides that are not stored yet (each stored as a sweep), then compares. */
 export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
-  const prepared = (["a", "b"] as const).map((key) => {
-    const side = input[key];
-    return "sweepId" in side ? null : prepareSweep(side, key);
-  });
+  const prepared = await Promise.all(
+    (["a", "b"] as const).map((key) => {
+      const side = input[key];
+      return "sweepId" in side ? null : prepareSweep(side, key);
+    }),
+  );
   const done = [0, 0];
   const totals = prepared.map((p) => p?.plan.tasks.length ?? 0);
   const sides: { id: string; result: SweepResult }[] = [];
@@ -190,7 +192,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
     const side = input[key];
     const p = prepared[k];
     if ("sweepId" in side || !p) {
-      const rec = getProfileRecord((side as { sweepId: string }).sweepId, `${key}.sweepId`);
+      const rec = await getProfileRecord((side as { sweepId: string }).sweepId, `${key}.sweepId`);
       sides.push({ id: rec.id, result: rec.body.result });
       continue;
     }
@@ -200,7 +202,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
       ctx.progress(done[0] + done[1], totals[0] + totals[1], `${key.toUpperCase()}: ${stageOf(q)}`);
     });
     if (ctx.signal.aborted) throw ctx.signal.reason;
-    sides.push({ id: storeSweep(p, result), result });
+    sides.push({ id: await storeSweep(p, result), result });
   }
   const result = compareSweeps(sides[0].result, sides[1].result, {
     labels: input.labels,
@@ -213,7 +215,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
     request: { ...input, a: { sweepId: sides[0].id }, b: { sweepId: sides[1].id } },
     result,
   };
-  getStore().putRecord({
+  await getStore().putRecord({
     id,
     kind: COMPARISON_KIND,
     engineVersion: ENGINE_VERSION,
@@ -231,8 +233,8 @@ export interface StoredProfileRecord {
   body: ProfileRecordBody;
 }
 
-export function getProfileRecord(id: string, path = "id"): StoredProfileRecord {
-  const r = ID_PATTERN.test(id) ? getStore().getRecord(PROFILE_KIND, id) : null;
+export async function getProfileRecord(id: string, path = "id"): Promise<StoredProfileRecord> {
+  const r = ID_PATTERN.test(id) ? await getStore().getRecord(PROFILE_KIND, id) : null;
   if (!r) {
     const e = notFound("profile sweep", id);
     if (path !== "id") throw new InputError(path, `no stored profile sweep with id ${id}`, "not-found");
@@ -255,8 +257,8 @@ export interface StoredComparisonRecord {
   body: ComparisonRecordBody;
 }
 
-export function getComparisonRecord(id: string): StoredComparisonRecord {
-  const r = ID_PATTERN.test(id) ? getStore().getRecord(COMPARISON_KIND, id) : null;
+export async function getComparisonRecord(id: string): Promise<StoredComparisonRecord> {
+  const r = ID_PATTERN.test(id) ? await getStore().getRecord(COMPARISON_KIND, id) : null;
   if (!r) throw notFound("comparison", id);
   return {
     id: r.id,
@@ -290,14 +292,35 @@ const PROFILE_EXPORTS = {
 } as const;
 
 /** A CSV export of a stored sweep: levels.csv, cycles.csv or profile.csv; null for an unknown file. */
-export function profileExport(id: string, file: string): { csv: string; filename: string } | null {
+export async function profileExport(id: string, file: string): Promise<{ csv: string; filename: string } | null> {
   const make = PROFILE_EXPORTS[file as keyof typeof PROFILE_EXPORTS];
   if (!make) return null;
-  return { csv: make(getProfileRecord(id).body), filename: `profile-${id}-${file}` };
+  return { csv: make((await getProfileRecord(id)).body), filename: `profile-${id}-${file}` };
 }
 
 /** The CSV export of a stored comparison; null for an unknown file. */
-export function comparisonExport(id: string, file: string): { csv: string; filename: string } | null {
+export async function comparisonExport(id: string, file: string): Promise<{ csv: string; filename: string } | null> {
   if (file !== "comparison.csv") return null;
-  return { csv: comparisonCsv(getComparisonRecord(id).body.result), filename: `comparison-${id}.csv` };
+  return { csv: comparisonCsv((await getComparisonRecord(id)).body.result), filename: `comparison-${id}.csv` };
+}
+
+/** What the profile forms offer: mechanisms (id, title) and the built-in profiles (without their levels). */
+export async function profileFormOptions() {
+  let mechanisms: { id: string; title: string }[] = [];
+  try {
+    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({
+      id: m.id,
+      title: m.builtin ? m.title : `${m.title} (upload)`,
+    }));
+  } catch {
+    mechanisms = [{ id: "reference", title: "reference" }];
+  }
+  const profiles = listProfiles().map((p) => ({
+    id: p.id,
+    title: p.title,
+    demo: p.demo,
+    note: p.note,
+    range_km: [p.levels[0]?.altitude_km ?? 0, p.levels[p.levels.length - 1]?.altitude_km ?? 0] as [number, number],
+  }));
+  return { mechanisms, profiles };
 }

@@ -5,9 +5,9 @@ export const dynamic = "force-dynamic";
 
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
-  return respond(() => {
+  return respond(async () => {
     const json = id.endsWith(".json");
-    const record = getComparisonRecord(json ? id.slice(0, -5) : id);
+    const record = await getComparisonRecord(json ? id.slice(0, -5) : id);
     return json
       ? new Response(JSON.stringify(record, null, 2), {
           headers: {

@@ -5,8 +5,8 @@ export const dynamic = "force-dynamic";
 
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
   const { id, file } = await ctx.params;
-  return respond(() => {
-    const out = profileExport(id, file);
+  return respond(async () => {
+    const out = await profileExport(id, file);
     if (!out) throw notFound("export", file);
     return csvResponse(out.csv, out.filename);
   });

@@ -1,0 +1,22 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { ComparisonView } from "@/components/profile/ComparisonView";
+import { getComparisonRecord } from "@/lib/service/profiles";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Profile comparison · Ozone Loss Cycles" };
+
+export default async function ComparisonPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  let record: Awaited<ReturnType<typeof getComparisonRecord>>;
+  try {
+    record = await getComparisonRecord(id);
+  } catch {
+    notFound();
+  }
+  return (
+    <div className="mx-auto max-w-7xl px-4 py-6">
+      <ComparisonView id={record.id} result={record.body.result} createdAt={record.createdAt} />
+    </div>
+  );
+}
