@@ -12,7 +12,7 @@ type Search = Promise<Record<string, string | string[] | undefined>>;
 /** Reads the condition from the address and hands the explorer the mechanism list and the chosen mechanism. */
 export default async function ExplorePage({ searchParams }: { searchParams: Search }) {
   const q = parseExplorerQuery(await searchParams);
-  const { mechanisms, mechanism } = loadMechanisms(q.mechanismId);
+  const { mechanisms, mechanism } = await loadMechanisms(q.mechanismId);
   return (
     <Explorer
       mechanisms={mechanisms}
@@ -26,16 +26,18 @@ export default async function ExplorePage({ searchParams }: { searchParams: Sear
 }
 
 /** Server-side first look-up; on failure the explorer fetches them itself and shows the error where it happens. */
-export function loadMechanisms(id: string): { mechanisms: MechanismSummary[]; mechanism: MechanismView | null } {
+async function loadMechanisms(
+  id: string,
+): Promise<{ mechanisms: MechanismSummary[]; mechanism: MechanismView | null }> {
   let mechanisms: MechanismSummary[] = [];
   let mechanism: MechanismView | null = null;
   try {
-    mechanisms = listMechanisms().mechanisms;
+    mechanisms = (await listMechanisms()).mechanisms;
   } catch {
     mechanisms = [];
   }
   try {
-    const d = mechanismDetail(id);
+    const d = await mechanismDetail(id);
     mechanism = { ...d, text: undefined } as MechanismView;
   } catch {
     mechanism = null;

@@ -15,9 +15,9 @@ type Search = Promise<Record<string, string | string[] | undefined>>;
 /** A permalink: reopens the explorer with the stored request and its stored numbers. */
 export default async function AnalysisPage({ params, searchParams }: { params: Params; searchParams: Search }) {
   const { id } = await params;
-  let record: ReturnType<typeof getAnalysisRecord>;
+  let record: Awaited<ReturnType<typeof getAnalysisRecord>>;
   try {
-    record = getAnalysisRecord(id);
+    record = await getAnalysisRecord(id);
   } catch {
     notFound();
   }
@@ -26,12 +26,12 @@ export default async function AnalysisPage({ params, searchParams }: { params: P
   let mechanisms: MechanismSummary[] = [];
   let mechanism: MechanismView | null = null;
   try {
-    mechanisms = listMechanisms().mechanisms;
+    mechanisms = (await listMechanisms()).mechanisms;
   } catch {
     mechanisms = [];
   }
   try {
-    mechanism = { ...mechanismDetail(mechanismId), text: undefined } as MechanismView;
+    mechanism = { ...(await mechanismDetail(mechanismId)), text: undefined } as MechanismView;
   } catch {
     mechanism = null;
   }
