@@ -4,13 +4,13 @@ import { listMechanisms, MAX_MECHANISM_BODY, uploadMechanism } from "@/lib/servi
 export const dynamic = "force-dynamic";
 
 export function GET() {
-  return respond(() => Response.json(listMechanisms()));
+  return respond(async () => Response.json(await listMechanisms()));
 }
 
 export function POST(req: Request) {
   return respond(async () => {
     const text = await readBodyText(req, MAX_MECHANISM_BODY);
-    const out = uploadMechanism(text, req.headers.get("content-type") ?? "");
+    const out = await uploadMechanism(text, req.headers.get("content-type") ?? "");
     return Response.json(out, { status: out.created ? 201 : 200 });
   });
 }

@@ -5,5 +5,5 @@ export const dynamic = "force-dynamic";
 
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
-  return respond(() => Response.json(mechanismDetail(id)));
+  return respond(async () => Response.json(await mechanismDetail(id)));
 }

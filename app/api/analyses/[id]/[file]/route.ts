@@ -8,10 +8,10 @@ const EXPORTS = { "rates.csv": ratesCsv, "species.csv": speciesCsv, "cycles.csv"
 
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
   const { id, file } = await ctx.params;
-  return respond(() => {
+  return respond(async () => {
     const make = EXPORTS[file as keyof typeof EXPORTS];
     if (!make) throw notFound("export", file);
-    const record = getAnalysisRecord(id);
+    const record = await getAnalysisRecord(id);
     return csvResponse(make(record.result), `analysis-${id}-${file}`);
   });
 }
