@@ -290,7 +290,8 @@ export function solveDiurnal(
     }
     // Periodic when the day-to-day change is small and, where the monodromy is
     // known, so is the estimated distance to the periodic orbit (slow modes).
-    const settled = err <= tol && (!(d.S && Number.isFinite(distance)) || distance <= tol);
+    // At least one day with the monodromy (a slow drift can hide under a small change).
+    const settled = err <= tol && (n === 0 || (d.S !== undefined && (!Number.isFinite(distance) || distance <= tol)));
     if (settled) {
       status = "converged";
       message = `periodic to ${err.toExponential(2)} after ${day} day${day > 1 ? "s" : ""}`;

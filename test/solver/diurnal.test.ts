@@ -4,10 +4,13 @@
  * cos(zenith) above the horizon (not a radiative-transfer model).
  */
 import { describe, expect, it } from "vitest";
+import { solarZenithAngle } from "../../lib/atmosphere";
+import { loadBuiltinMechanism } from "../../lib/mechanism";
 import { type DiurnalInput, solveDiurnal, solveSteadyState } from "../../lib/solver";
 import type { SolveConditions } from "../../lib/solver/types";
 import { expectClose } from "../helpers/close";
 import { allNumbers, chapmanMechanism, chlorineMechanism, conditions30km } from "./helpers";
+import { realisticConditions } from "./realistic";
 
 function sunFollowing(base: SolveConditions, cosLatitude = Math.SQRT1_2, offset = 0): DiurnalInput["conditionsAt"] {
   const noon = cosLatitude + offset;
@@ -83,4 +86,35 @@ describe("24-hour steady state", () => {
     expect(d.status).toBe("converged");
     expect(d.atReportTime.numberDensity_cm3[mech.speciesIndex.O]).toBeGreaterThan(0);
   });
+
+  for (const [z, lat, day] of [
+    [30, 45, 80],
+    [25, 80, 355],
+  ]) {
+    it(`converges for the reference mechanism with the project's photolysis at ${z} km, ${lat}° N, day ${day}`, () => {
+      const mech = loadBuiltinMechanism("reference").mechanism;
+      const d = solveDiurnal(mech, {
+        conditionsAt: (t_h) =>
+          realisticConditions(
+            mech,
+            z,
+            solarZenithAngle({ latitude_deg: lat, dayOfYear: day, localSolarTime_h: t_h }),
+            "held",
+          ),
+        reportAt_h: 0,
+      });
+      expect(d.status).toBe("converged");
+      expect(allNumbers(d).every(Number.isFinite)).toBe(true);
+      for (const p of d.average.pools) {
+        const pool = mech.pools.find((q) => q.id === p.pool)!;
+        const total = (x: number[]) => pool.weights.reduce((a, t) => a + t.coef * x[t.species], 0);
+        // exact at local midnight, where the totals are imposed
+        expectClose(total(d.atReportTime.numberDensity_cm3), p.total_cm3, { rel: 1e-10 }, `${p.pool} at midnight`);
+        // over the day the pool's external source (here N2O + O(1D), CFC photolysis) adds at most its daily integral
+        expect(Math.abs(total(d.average.numberDensity_cm3) - p.total_cm3)).toBeLessThanOrEqual(
+          Math.abs(p.externalSource_cm3s) * 86_400 + 1e-9 * p.total_cm3,
+        );
+      }
+    });
+  }
 });
