@@ -6,10 +6,10 @@ import { listMechanisms } from "@/lib/service/mechanisms";
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Build an assessment · Ozone Loss Cycles" };
 
-export default function BuildAssessmentPage() {
+export default async function BuildAssessmentPage() {
   let mechanisms: MechanismOption[] = [];
   try {
-    mechanisms = listMechanisms().mechanisms.map((m) => ({ id: m.id, title: m.title, description: m.description }));
+    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({ id: m.id, title: m.title, description: m.description }));
   } catch {
     mechanisms = [];
   }

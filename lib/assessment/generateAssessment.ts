@@ -15,7 +15,7 @@
  */
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { InputError } from "../errors";
-import { drawCondition } from "./drawCondition";
+import { DEFAULTS as DRAW_DEFAULTS, drawCondition, SCALAR_FIELDS } from "./drawCondition";
 import { formatAnswer } from "./formatKey";
 import { sheetConditions } from "./sheetConditions";
 import { sortFamilies } from "./templates/cycleText";
@@ -92,42 +92,84 @@ function familiesOf(results: AnalysisResult[]): string[] {
   );
 }
 
-/** The first attempt of each variant: the first whose condition no earlier variant starts from. */
-export function distinctStarts(spec: AssessmentSpec & { seed: number }): { starts: number[]; repeated: number[] } {
+/**
+ * The first attempt of each variant: the first whose condition no earlier
+ * variant starts from and, for every ranged field whose grid has at least as
+ * many values as there are variants, whose value in that field is new too (so
+ * that two variants never share an altitude when only their Cly differs);
+ * failing that, the first with a new condition; failing that, attempt 0.
+ */
+export function distinctStarts(spec: AssessmentSpec & { seed: number }): {
+  starts: number[];
+  repeated: number[];
+  /** the fields kept distinct between variants */
+  strict: (typeof SCALAR_FIELDS)[number][];
+  /** each variant's starting condition */
+  conditions: ConditionInput[];
+} {
+  const ranges = spec.ranges ?? {};
+  const strict = SCALAR_FIELDS.filter((f) => {
+    const r = ranges[f];
+    if (!r) return false;
+    const step = r.step ?? DRAW_DEFAULTS.step[f];
+    return Math.floor((r.max - r.min) / step + 1e-9) + 1 >= spec.variants;
+  });
   const seen = new Set<string>();
+  const seenValues = new Map(strict.map((f) => [f, new Set<number>()]));
   const starts: number[] = [];
   const repeated: number[] = [];
+  const conditions: ConditionInput[] = [];
+  const conditionAt = (n: number, a: number) => drawCondition(spec.base, ranges, variantSeed(spec.seed, n, a));
   for (let n = 1; n <= spec.variants; n++) {
-    let start = 0;
-    let key = "";
-    for (let a = 0; a < DEFAULTS.maxDistinctTries; a++) {
-      key = JSON.stringify(drawCondition(spec.base, spec.ranges ?? {}, variantSeed(spec.seed, n, a)));
-      if (!seen.has(key)) {
-        start = a;
-        break;
-      }
-      if (a === DEFAULTS.maxDistinctTries - 1) {
-        repeated.push(n);
-        key = JSON.stringify(drawCondition(spec.base, spec.ranges ?? {}, variantSeed(spec.seed, n, 0)));
-      }
+    const tries = Array.from({ length: DEFAULTS.maxDistinctTries }, (_, a) => conditionAt(n, a));
+    const isNew = (c: ConditionInput) => !seen.has(JSON.stringify(c));
+    let start = tries.findIndex((c) => isNew(c) && strict.every((f) => !seenValues.get(f)?.has(c[f] as number)));
+    if (start < 0) start = tries.findIndex(isNew);
+    if (start < 0) {
+      start = 0;
+      repeated.push(n);
     }
-    seen.add(key);
+    seen.add(JSON.stringify(tries[start]));
+    conditions.push(tries[start]);
+    for (const f of strict) seenValues.get(f)?.add(tries[start][f] as number);
     starts.push(start);
   }
-  return { starts, repeated };
+  return { starts, repeated, strict, conditions };
+}
+
+/**
+ * The attempts a variant tries in order: its start, then later attempts whose
+ * strict fields avoid every other variant's starting values (so a redraw does
+ * not land on a neighbour's altitude), topped up with the plain sequence.
+ */
+function attemptsOf(
+  spec: AssessmentSpec & { seed: number },
+  n: number,
+  d: ReturnType<typeof distinctStarts>,
+  count: number,
+) {
+  const start = d.starts[n - 1];
+  const taken = d.strict.map((f) => new Set(d.conditions.filter((_, i) => i !== n - 1).map((c) => c[f] as number)));
+  const out = [start];
+  for (let a = start + 1; a < start + DEFAULTS.maxDistinctTries && out.length < count; a++) {
+    const c = drawCondition(spec.base, spec.ranges ?? {}, variantSeed(spec.seed, n, a));
+    if (d.strict.every((f, i) => !taken[i].has(c[f] as number))) out.push(a);
+  }
+  for (let a = start + 1; out.length < count; a++) if (!out.includes(a)) out.push(a);
+  return out;
 }
 
 async function drawVariant(
   spec: AssessmentSpec & { seed: number },
   n: number,
-  start: number,
+  attempts: number[],
   opts: GenerateOptions,
 ): Promise<Drawn> {
-  const maxAttempts = opts.maxAttempts ?? DEFAULTS.maxAttempts;
+  const maxAttempts = attempts.length;
   const extraTemplate = spec.questions.map((q) => templateOf(q.kind)).find((t) => t.extraCondition);
   const redraws: string[] = [];
   let last = { question: 0, problem: "" };
-  for (let attempt = start; attempt < start + maxAttempts; attempt++) {
+  for (const [k, attempt] of attempts.entries()) {
     const seed = variantSeed(spec.seed, n, attempt);
     const condition = drawCondition(spec.base, spec.ranges ?? {}, seed);
     const baseRequest: AnalysisRequest = { mechanismId: spec.mechanismId, condition };
@@ -146,7 +188,7 @@ async function drawVariant(
       .find((x) => !x.built.ok);
     if (!failed) return { variant: { number: n, seed, attempt, condition }, analyses, redraws };
     last = { question: failed.i, problem: (failed.built as { problem: string }).problem };
-    redraws.push(`variant ${n}, draw ${attempt + 1 - start}: question ${failed.i + 1} redrawn because ${last.problem}`);
+    redraws.push(`variant ${n}, draw ${k + 1}: question ${failed.i + 1} redrawn because ${last.problem}`);
   }
   throw new InputError(
     `questions[${last.question}]`,
@@ -177,8 +219,10 @@ export async function generateAssessment(
   opts: GenerateOptions,
 ): Promise<GeneratedAssessment> {
   const numbers = Array.from({ length: spec.variants }, (_, i) => i + 1);
-  const { starts, repeated } = distinctStarts(spec);
-  const drawn = await Promise.all(numbers.map((n) => drawVariant(spec, n, starts[n - 1], opts)));
+  const d = distinctStarts(spec);
+  const repeated = d.repeated;
+  const count = opts.maxAttempts ?? DEFAULTS.maxAttempts;
+  const drawn = await Promise.all(numbers.map((n) => drawVariant(spec, n, attemptsOf(spec, n, d, count), opts)));
   // One list of families on every sheet, so the choices give nothing away.
   const families = familiesOf(drawn.map((d) => d.analyses.base));
   const info = questionInfo(spec);

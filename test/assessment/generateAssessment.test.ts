@@ -107,9 +107,13 @@ describe("generateAssessment", () => {
   });
 
   test("throws if no draw gives an answer, naming the question", async () => {
-    const s = spec({ base: { altitude_km: 10 }, ranges: { altitude_km: { min: 5, max: 15 } } });
+    const s = spec({
+      base: { altitude_km: 10 },
+      ranges: { altitude_km: { min: 5, max: 15 } },
+      questions: [{ kind: "species-ratio", speciesA: "ClO", speciesB: "Cl" }, { kind: "chain-length", cycleId: CLOX_CYCLE }],
+    });
     await expect(generateAssessment(s, { analyse: fakeAnalyse })).rejects.toThrow(
-      /questions\[2\]: variant 1 found no conditions in 6 draws where question 3 has a sound answer/,
+      /questions\[1\]: variant 1 found no conditions in 6 draws where question 2 has a sound answer/,
     );
   });
 
@@ -169,4 +173,17 @@ describe("distinct variants", () => {
     });
     expect(g.warnings[0]).toMatch(/^the ranges allow too few distinct conditions: variants 3, 4 repeat/);
   });
+});
+
+test("variants that also draw Cly still get different altitudes when the altitude range allows it", async () => {
+  for (const seed of [1, 2, 3, 2026]) {
+    const g = await generateAssessment(
+      {
+        ...spec({ ranges: { altitude_km: { min: 25, max: 45 }, poolTotals: { Cly: { min: 2e-9, max: 4e-9 } } } }),
+        seed,
+      },
+      { analyse: fakeAnalyse },
+    );
+    expect(new Set(g.variants.map((v) => v.condition.altitude_km)).size, `seed ${seed}`).toBe(10);
+  }
 });

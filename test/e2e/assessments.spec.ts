@@ -73,7 +73,7 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
   await student.goto(`${studentHref}?v=1`);
   await student.screenshot({ path: `${SHOTS}/assess-student-print.png`, fullPage: true });
   await student.goto(studentHref as string);
-  const pdf = await student.pdf({ format: "A4", printBackground: true });
+  const pdf = await student.pdf({ path: `${SHOTS}/assess-student.pdf`, format: "A4", printBackground: true });
   const pages = (pdf.toString("latin1").match(/\/Type\s*\/Page[^s]/g) ?? []).length;
   expect(pages).toBe(10);
 
@@ -89,4 +89,10 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
   await expect(page.getByRole("button", { name: "Download marks (CSV)" })).toBeVisible();
   await page.getByRole("table", { name: "Marks" }).scrollIntoViewIfNeeded();
   await page.screenshot({ path: `${SHOTS}/assess-marks.png`, fullPage: true });
+
+  // The key prints without the links, the buttons and the marking panel.
+  await page.emulateMedia({ media: "print" });
+  await expect(page.getByRole("heading", { name: "Mark the class" })).toBeHidden();
+  await expect(page.getByRole("table", { name: "Answer key" })).toBeVisible();
+  await page.screenshot({ path: `${SHOTS}/assess-key-print.png`, fullPage: true });
 });

@@ -6,5 +6,5 @@ export const dynamic = "force-dynamic";
 /** The instructor record, key included: reachable only with the instructor id. */
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
-  return respond(() => Response.json(getInstructorAssessment(id)));
+  return respond(async () => Response.json(await getInstructorAssessment(id)));
 }

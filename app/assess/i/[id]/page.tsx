@@ -13,7 +13,7 @@ export default async function InstructorPage({ params }: { params: Promise<{ id:
   const { id } = await params;
   let a: InstructorAssessment;
   try {
-    a = getInstructorAssessment(id);
+    a = await getInstructorAssessment(id);
   } catch {
     notFound();
   }

@@ -21,7 +21,7 @@ export default async function StudentSheetsPage({
   const v = Number((await searchParams).v);
   let a: StudentAssessment;
   try {
-    a = getStudentAssessment(id);
+    a = await getStudentAssessment(id);
   } catch {
     notFound();
   }

@@ -8,9 +8,9 @@ const FILES = ["key.csv", "key.json", "answers-template.csv"] as const;
 
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
   const { id, file } = await ctx.params;
-  return respond(() => {
+  return respond(async () => {
     if (!FILES.includes(file as (typeof FILES)[number])) throw notFound("export", file);
-    const a = getInstructorAssessment(id);
+    const a = await getInstructorAssessment(id);
     if (file === "key.csv") return csvResponse(keyCsv(a), `assessment-${id}-key.csv`);
     if (file === "answers-template.csv")
       return csvResponse(answerTemplateCsv(a.questions.length, a.variants.length), `assessment-${id}-answers.csv`);

@@ -19,7 +19,7 @@ export async function POST(req: Request, ctx: { params: Promise<{ id: string }> 
       if (typeof csv !== "string") throw new HttpError(400, "invalid-request", "expected { csv: string }", "csv");
       text = csv;
     }
-    const marks = markAssessment(id, text);
+    const marks = await markAssessment(id, text);
     if (new URL(req.url).searchParams.get("format") === "csv")
       return csvResponse(marks.csv, `assessment-${id}-marks.csv`);
     return Response.json(marks);

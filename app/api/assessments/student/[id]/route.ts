@@ -6,5 +6,5 @@ export const dynamic = "force-dynamic";
 /** The student sheets: questions and conditions, never an answer (read from the student record only). */
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
-  return respond(() => Response.json(getStudentAssessment(id)));
+  return respond(async () => Response.json(await getStudentAssessment(id)));
 }
