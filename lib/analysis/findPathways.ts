@@ -26,10 +26,10 @@
 import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
-import { decomposeElementary, isElementary } from "./elementaryModes";
+import { decomposeElementary, eliminationWork, isElementary } from "./elementaryModes";
 import { gcd, matchingMultipliers, rationalOrThrow } from "./rational";
 import { reactionNet } from "./reactionNet";
-import { axpy, type SparseVector, valueAt, weightedSum } from "./sparseVector";
+import { axpy, type SparseVector, snap, valueAt, weightedSum } from "./sparseVector";
 import type { Pathway, PathwayOptions, PathwaySet } from "./types";
 import { validateState } from "./validateState";
 
@@ -49,6 +49,12 @@ interface Work {
   net: SparseVector;
   rate: number;
   key: string;
+  /** known to have no proper balanced sub-pathway (a reaction, or tested); stays true as branching points are added */
+  elementary: boolean;
+  /** the two pathways joined to make this one, while it is being created */
+  parents?: [Work, Work];
+  /** the parents share a reaction */
+  overlap?: boolean;
 }
 
 const keyOf = (rx: number[], mx: number[]) => rx.map((r, i) => `${r}*${mx[i]}`).join(",");
@@ -102,6 +108,47 @@ export function findPathways(
     }
   };
 
+  /**
+   * remove(rate, a·k + c·l) without building the joined pathway: the flux and
+   * the tracked sums are linear; the net is merged entry by entry so that its
+   * sign split per species is the joined pathway's.
+   */
+  const removePair = (rate: number, a: number, k: Work, c: number, l: Work, wk: number[], wl: number[]) => {
+    if (!(rate > 0)) return;
+    for (let t = 0; t < k.rx.length; t++) deletedFlux[k.rx[t]] += rate * a * k.mx[t];
+    for (let t = 0; t < l.rx.length; t++) deletedFlux[l.rx[t]] += rate * c * l.mx[t];
+    const x = k.net;
+    const y = l.net;
+    let i = 0;
+    let j = 0;
+    while (i < x.idx.length || j < y.idx.length) {
+      const xi = i < x.idx.length ? x.idx[i] : Number.POSITIVE_INFINITY;
+      const yj = j < y.idx.length ? y.idx[j] : Number.POSITIVE_INFINITY;
+      let s: number;
+      let v: number;
+      if (xi === yj) {
+        s = xi;
+        v = a * x.val[i++] + c * y.val[j++];
+      } else if (xi < yj) {
+        s = xi;
+        v = a * x.val[i++];
+      } else {
+        s = yj;
+        v = c * y.val[j++];
+      }
+      v = rate * snap(v);
+      if (v === 0) continue;
+      deletedNet[s] += v;
+      if (v > 0) deletedPos[s] += v;
+      else deletedNeg[s] -= v;
+    }
+    tracked.forEach(([name], t) => {
+      const dx = rate * (a * wk[t] + c * wl[t]);
+      if (dx > 0) deletedTracked[name].produced_cm3s += dx;
+      else deletedTracked[name].destroyed_cm3s -= dx;
+    });
+  };
+
   let current = new Map<string, Work>();
   const add = (map: Map<string, Work>, w: Work) => {
     if (w.net.idx.length === 0) {
@@ -127,7 +174,7 @@ export function findPathways(
       if (net.val[i] > 0) P0[net.idx[i]] += r * net.val[i];
       else D0[net.idx[i]] -= r * net.val[i];
     }
-    add(current, { rx: [j], mx: [1], net, rate: r, key: `${j}*1` });
+    add(current, { rx: [j], mx: [1], net, rate: r, key: `${j}*1`, elementary: true });
   });
 
   const excluded = new Set(opt.notBranching.map((id) => mech.speciesIndex[id]));
@@ -137,6 +184,26 @@ export function findPathways(
     .sort((x, y) => x.tau - y.tau || x.i - y.i);
 
   const processed = new Uint8Array(nS);
+  const work = eliminationWork(nS);
+  // species touched by the first parent, for the two-parent test (stamp = current epoch)
+  const touched = new Int32Array(nS);
+  let touchEpoch = 0;
+  /**
+   * Exact shortcut of the rank test: two elementary parents with no common
+   * reaction, joined at b, whose reactions touch no processed species other
+   * than b in common, make an elementary pathway (a null vector restricted to
+   * either parent's columns must be a multiple of that parent, and the row of
+   * b fixes the ratio).
+   */
+  const joinIsElementary = (w: Work, b: number): boolean => {
+    if (!w.parents || w.overlap) return false;
+    const [k, l] = w.parents;
+    if (!k.elementary || !l.elementary) return false;
+    const e = ++touchEpoch;
+    for (const j of k.rx) for (const s of nets[j].idx) if (processed[s] === 1) touched[s] = e;
+    for (const j of l.rx) for (const s of nets[j].idx) if (s !== b && touched[s] === e) return false;
+    return true;
+  };
   const storage: PathwaySet["storage"] = [];
   let truncated = false;
 
@@ -175,21 +242,35 @@ export function findPathways(
     );
 
     const created = new Map<string, Work>();
+    const sums = (w: Work) => tracked.map(([, wt]) => weightedSum(w.net, wt));
+    const maxOf = (w: Work) => w.mx.reduce((x, y) => Math.max(x, y), 0);
+    const consumerSums = consumers.map(sums);
+    const consumerMax = consumers.map(maxOf);
     producers.forEach((k, ik) => {
       const fp = k.rate * (pq[ik][0] / pq[ik][1]);
+      const kSums = sums(k);
+      const kMax = maxOf(k);
       consumers.forEach((l, il) => {
         const fd = l.rate * (dq[il][0] / dq[il][1]);
         const { a, c, L } = matchingMultipliers(pq[ik], dq[il]);
         let rate = (fp * fd) / (T * L);
+        // rate × (largest multiplicity) does not change when the vector is made coprime, and bounds the rate of
+        // every elementary part: below f_min the joined pathway is deleted before it is built.
+        if (rate * (a * kMax + c * consumerMax[il]) < fmin) {
+          removePair(rate, a, k, c, l, kSums, consumerSums[il]);
+          return;
+        }
         // merged multiplicities a·x_k + c·x_l, made coprime
         const rx: number[] = [];
         const mx: number[] = [];
         let p = 0;
         let q = 0;
+        let overlap = false;
         while (p < k.rx.length || q < l.rx.length) {
           const rk = p < k.rx.length ? k.rx[p] : Number.POSITIVE_INFINITY;
           const rl = q < l.rx.length ? l.rx[q] : Number.POSITIVE_INFINITY;
           if (rk === rl) {
+            overlap = true;
             rx.push(rk);
             mx.push(a * k.mx[p++] + c * l.mx[q++]);
           } else if (rk < rl) {
@@ -208,7 +289,7 @@ export function findPathways(
         const key = keyOf(rx, mx);
         const old = created.get(key);
         if (old) old.rate += rate;
-        else created.set(key, { rx, mx, net, rate, key });
+        else created.set(key, { rx, mx, net, rate, key, elementary: false, parents: [k, l], overlap });
       });
       // unconnected shares: storage of b, and the share that fed deleted consumers
       if (T - D > BALANCE_TOLERANCE * T) add(next, { ...k, rate: (k.rate * (T - D)) / T });
@@ -222,12 +303,26 @@ export function findPathways(
     }
 
     for (const w of created.values()) {
+      const parents = w.parents;
+      w.parents = undefined;
       if (next.has(w.key) || w.net.idx.length === 0) {
         add(next, w);
         continue;
       }
+      // Every elementary part of w runs at most at rate·max(multiplicity) < f_min, so all of them would be
+      // deleted: deleting w whole removes the same flux and net effect, without the split.
+      let mMax = 0;
+      for (const m of w.mx) mMax = Math.max(mMax, m);
+      if (w.rate * mMax < fmin) {
+        remove(w.rate, w);
+        continue;
+      }
+      w.parents = parents;
+      const shortcut = joinIsElementary(w, b);
+      w.parents = undefined;
       const isRow = (s: number) => processed[s] === 1 && valueAt(w.net, s) === 0;
-      if (isElementary(w.rx, nets, isRow)) {
+      if (shortcut || isElementary(w.rx, nets, isRow, work)) {
+        w.elementary = true;
         add(next, w);
         continue;
       }
@@ -236,6 +331,7 @@ export function findPathways(
         w.rx,
         nets,
         isRow,
+        work,
       );
       if (!parts) {
         warnings.push(
@@ -255,7 +351,7 @@ export function findPathways(
             net = axpy(1, net, m, nets[w.rx[t]]);
           }
         });
-        add(next, { rx, mx, net, rate: part.rate, key: keyOf(rx, mx) });
+        add(next, { rx, mx, net, rate: part.rate, key: keyOf(rx, mx), elementary: true });
       }
     }
 

@@ -12,7 +12,8 @@ export interface SparseVector {
 /** Values this close to an integer are snapped to it; smaller magnitudes are dropped. */
 const SNAP = 1e-9;
 
-function snap(v: number): number {
+/** `v` snapped to the nearest integer when within SNAP of it. */
+export function snap(v: number): number {
   const r = Math.round(v);
   return Math.abs(v - r) <= SNAP * Math.max(1, Math.abs(v)) ? r : v;
 }
