@@ -16,10 +16,12 @@ import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";
 import { assembleSteadyState } from "./assembleSteadyState";
 import { buildSystem, type ChemSystem } from "./buildSystem";
+import { chemistryOde } from "./chemistryOde";
 import { applyWarmStart, chooseReplaced, coldGuess, toLog } from "./initialGuess";
 import { effectiveConstants, reactionRates } from "./massAction";
 import { evaluateResidual, NEWTON_DEFAULTS, type NewtonLogResult, NewtonWorkspace, newtonLog } from "./newtonLog";
 import { rateConstants } from "./rateConstants";
+import { integrateOde } from "./rosenbrock";
 import { structuralChecks } from "./structuralChecks";
 import type { SolveConditions, SolveStatus, SteadyState, SteadyStateOptions } from "./types";
 
@@ -32,6 +34,8 @@ export const STEADY_STATE_DEFAULTS = {
   maxIterations: 60,
   /** pseudo-transient continuation steps */
   maxColdStartSteps: 200,
+  /** length of the fallback integration when the pseudo-transient cold start fails, s */
+  fallbackIntegration_s: 1e6,
   /** a species below this (cm⁻³) with loss ≫ production is reported as vanishing */
   vanishing_cm3: 1e-20,
 };
@@ -217,6 +221,30 @@ export function solveSteadyState(
     res = attempt();
     totalIterations += res.newtonIterations + res.ptcSteps;
     totalCold += res.ptcSteps;
+  }
+  if (!res.converged) {
+    // Last resort: follow the real chemistry for a while from the cold guess
+    // (ROS3, pools conserved by the integration), then iterate from there.
+    coldGuess(sys, kEff, cond.M_cm3, structure.reachable, ws, x);
+    const ode = chemistryOde(sys, (_t, out) => out.set(kEff), true);
+    const run = integrateOde(
+      ode,
+      x,
+      0,
+      STEADY_STATE_DEFAULTS.fallbackIntegration_s,
+      { rtol: 1e-3, atol: 1, maxSteps: 5000 },
+      { nonNegative: true },
+    );
+    if (run.y.every(Number.isFinite)) {
+      for (let i = 0; i < n; i++) x[i] = Math.max(run.y[i], 1e-30);
+      warnings.push(
+        `the pseudo-transient cold start failed; restarted after ${run.acceptedSteps} integration steps (${STEADY_STATE_DEFAULTS.fallbackIntegration_s} s)`,
+      );
+      settings.startWithNewton = false;
+      res = attempt();
+      totalIterations += res.newtonIterations + res.ptcSteps + run.acceptedSteps;
+      totalCold += res.ptcSteps + run.acceptedSteps;
+    }
   }
   if (res.converged) {
     return report("converged", "converged", totalIterations, res.residualNorm, totalCold);

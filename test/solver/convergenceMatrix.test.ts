@@ -10,7 +10,7 @@ import { solveSteadyState } from "../../lib/solver";
 import { allNumbers } from "./helpers";
 import { realisticConditions } from "./realistic";
 
-const LEVELS = Array.from({ length: 11 }, (_, i) => 10 + 5 * i);
+const LEVELS = Array.from({ length: 51 }, (_, i) => 10 + i);
 const ZENITH = [0, 30, 60, 85];
 
 describe("convergence matrix 10–60 km × zenith 0–85°", () => {
