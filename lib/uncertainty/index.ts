@@ -1,0 +1,13 @@
+export { type ProfileBand, profileShareBands, type ShareBand, shareBands } from "./bandSeries";
+export { defineOutputs, OUTPUT_DEFAULTS, type OutputOptions } from "./defineOutputs";
+export { evaluateOutputs } from "./evaluateOutputs";
+export { finishMonteCarlo, MONTE_CARLO_DEFAULTS, type MonteCarloPlan, monteCarlo, planMonteCarlo } from "./monteCarlo";
+export { normalDraws } from "./normalDraws";
+export { quantile } from "./quantile";
+export { RANK_DEFAULTS, type RankOptions, rankAgainstAltitude, rankSensitivities } from "./rankSensitivities";
+export { runSampleBatch, type SampleBatch } from "./runSampleBatch";
+export { logFactors, SAMPLE_DEFAULTS, type SampleOptions, sampleMultipliers } from "./sampleMultipliers";
+export { SENSITIVITY_DEFAULTS, type SensitivityOptions, sensitivities, sensitivityParameters } from "./sensitivities";
+export { SUMMARY_DEFAULTS, summariseSamples } from "./summariseSamples";
+export type * from "./types";
+export { monteCarloCsv, sensitivityCsv } from "./uncertaintyCsv";
