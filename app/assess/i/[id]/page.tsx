@@ -23,7 +23,7 @@ export default async function InstructorPage({ params }: { params: Promise<{ id:
     a.sheets
       .find((s) => s.variant === v.number)
       ?.conditions.filter((c) => !["Temperature", "Pressure", "Date"].includes(c.label))
-      .map((c) => `${c.label.toLowerCase()} ${c.value}`)
+      .map((c) => `${c.label.charAt(0).toLowerCase()}${c.label.slice(1)} ${c.value}`)
       .join(", ");
   return (
     <div className="mx-auto max-w-6xl space-y-6 px-4 py-8 print:p-0">
