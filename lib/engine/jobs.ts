@@ -4,6 +4,8 @@
  */
 import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
+import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
+import type { SampleBatchResult } from "../uncertainty/types";
 import { compileSource, type MechanismSource } from "./mechanism-source";
 import { runAnalysis } from "./run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "./types";
@@ -11,11 +13,14 @@ import type { AnalysisRequest, AnalysisResult } from "./types";
 export type EngineJob =
   | { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] }
   /** neighbouring levels of a profile sweep, each warm-started from the one before (lib/profiles) */
-  | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch };
+  | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch }
+  /** a batch of Monte Carlo samples around a central steady state (lib/uncertainty) */
+  | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch };
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
-  | { kind: "profile-levels"; result: LevelBatchResult };
+  | { kind: "profile-levels"; result: LevelBatchResult }
+  | { kind: "uncertainty-samples"; result: SampleBatchResult };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -34,6 +39,10 @@ export function runJob(job: EngineJob): EngineJobResult {
         kind: "profile-levels",
         result: runLevelBatch(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.batch),
       };
+    }
+    case "uncertainty-samples": {
+      const mech = compileSource(job.mechanism);
+      return { kind: "uncertainty-samples", result: runSampleBatch(mech, job.batch) };
     }
     default:
       throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);

@@ -47,6 +47,19 @@ export const analysisRequestSchema = z
       .object({
         fminRelative: finite.refine((v) => v > 0 && v < 0.5, "expected a fraction between 0 and 0.5").optional(),
         oxDefinition: z.enum(["standard", "extended"]).optional(),
+        uncertaintySamples: z
+          .number()
+          .int("expected a whole number of samples")
+          .min(0, "expected 0 or more samples")
+          .max(100_000, "expected at most 100000 samples")
+          .optional(),
+        uncertaintySeed: z
+          .number()
+          .int("expected an integer seed")
+          .min(0, "expected a seed between 0 and 4294967295")
+          .max(0xffffffff, "expected a seed between 0 and 4294967295")
+          .optional(),
+        sensitivity: z.boolean().optional(),
       })
       .strict()
       .optional(),

@@ -9,6 +9,7 @@ import { solarZenithAngle } from "../atmosphere";
 import type { CompiledMechanism } from "../mechanism/types";
 import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
+import { analysisUncertainty } from "../uncertainty/analysisUncertainty";
 import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
 import type { AnalysisOptions, AnalysisRequest, AnalysisResult } from "./types";
 import { ENGINE_VERSION } from "./version";
@@ -16,6 +17,9 @@ import { ENGINE_VERSION } from "./version";
 export const ANALYSIS_DEFAULTS: Required<AnalysisOptions> = {
   fminRelative: 1e-4,
   oxDefinition: "standard",
+  uncertaintySamples: 0,
+  uncertaintySeed: 1,
+  sensitivity: false,
 };
 
 function emptyReport(warning: string, oxDefinition: CycleReport["oxDefinition"]): CycleReport {
@@ -86,18 +90,28 @@ export function runAnalysis(
     steadyState = solveSteadyState(mech, solveConditionsOf(condition), { initialState: run.initialState });
   }
   const heldSpecies = Object.keys(condition.held_cm3);
+  const cycleOptions = { fminRelative: options.fminRelative, oxDefinition: options.oxDefinition, heldSpecies };
   // Pathways of a state that is not a steady state would not close any budget: report none.
   const cycles =
     steadyState.status === "converged"
-      ? analyseCycles(mech, steadyState, {
-          fminRelative: options.fminRelative,
-          oxDefinition: options.oxDefinition,
-          heldSpecies,
-        })
+      ? analyseCycles(mech, steadyState, cycleOptions)
       : emptyReport(
           `no cycle analysis: the steady state did not converge (${steadyState.message})`,
           options.oxDefinition,
         );
+  // sensitivities and Monte Carlo ranges (lib/uncertainty), only when asked for
+  const uncertaintyOf = () => {
+    const uncertainty = analysisUncertainty(
+      mech,
+      condition.mode,
+      solveConditionsOf(condition),
+      steadyState,
+      cycles,
+      cycleOptions,
+      { sensitivity: options.sensitivity, samples: options.uncertaintySamples, seed: options.uncertaintySeed },
+    );
+    return uncertainty ? { uncertainty } : {};
+  };
   return {
     engineVersion: ENGINE_VERSION,
     mechanism: mechanismRef,
@@ -106,5 +120,6 @@ export function runAnalysis(
     steadyState,
     cycles,
     elapsed_ms: performance.now() - t0,
+    ...uncertaintyOf(),
   };
 }

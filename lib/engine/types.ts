@@ -4,6 +4,7 @@
  */
 import type { CycleReport } from "../analysis/types";
 import type { SteadyState } from "../solver/types";
+import type { UncertaintyResult } from "../uncertainty/types";
 
 export type AnalysisMode = "instantaneous" | "diurnal";
 
@@ -42,6 +43,12 @@ export interface AnalysisOptions {
   fminRelative?: number;
   /** odd-oxygen family: "O+O(1D)+O3" (default) or "extended" (adds NO2, NO3, 2·N2O5, ClO, BrO, …) */
   oxDefinition?: "standard" | "extended";
+  /** Monte Carlo samples over the rate-constant uncertainties (lib/uncertainty); default 0 (none) */
+  uncertaintySamples?: number;
+  /** seed of the Monte Carlo draws, unsigned 32-bit integer; default 1 */
+  uncertaintySeed?: number;
+  /** normalised sensitivity coefficients ∂ln(output)/∂ln k of the key outputs (lib/uncertainty); default false */
+  sensitivity?: boolean;
 }
 
 export interface AnalysisRequest {
@@ -81,9 +88,12 @@ export interface AnalysisResult {
   engineVersion: string;
   mechanism: { id: string; title: string };
   condition: ResolvedCondition;
-  options: Required<AnalysisOptions>;
+  /** the options used: fminRelative and oxDefinition always filled in; the uncertainty options when given */
+  options: Required<Pick<AnalysisOptions, "fminRelative" | "oxDefinition">> & AnalysisOptions;
   steadyState: SteadyState;
   cycles: CycleReport;
   /** wall time of the computation, ms */
   elapsed_ms: number;
+  /** sensitivities and Monte Carlo ranges, when the options ask for them (lib/uncertainty) */
+  uncertainty?: UncertaintyResult;
 }

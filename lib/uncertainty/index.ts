@@ -1,3 +1,4 @@
+export { type AnalysisUncertaintyOptions, analysisUncertainty } from "./analysisUncertainty";
 export { type ProfileBand, profileShareBands, type ShareBand, shareBands } from "./bandSeries";
 export { defineOutputs, OUTPUT_DEFAULTS, type OutputOptions } from "./defineOutputs";
 export { evaluateOutputs } from "./evaluateOutputs";

@@ -126,6 +126,8 @@ export interface MonteCarloResult {
 export interface UncertaintyResult {
   sensitivity?: SensitivityReport;
   monteCarlo?: MonteCarloResult;
+  /** why something asked for was not computed (e.g. the 24-hour mode) */
+  warnings: string[];
 }
 
 /** Options of the Monte Carlo draw. */
