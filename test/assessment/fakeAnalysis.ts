@@ -6,6 +6,7 @@
  * generator, key and marking be tested without the science core.
  */
 import type { CatalyticCycle } from "@/lib/analysis/types";
+import { ANALYSIS_DEFAULTS } from "@/lib/engine/run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 
 export const CLOX_CYCLE = "R3+R4";
@@ -81,7 +82,7 @@ export function fakeResult(req: AnalysisRequest): AnalysisResult {
       held_cm3: {},
       poolTotals_cm3: { Cly: cly * M },
     },
-    options: { fminRelative: 1e-4, oxDefinition: "standard" },
+    options: { ...ANALYSIS_DEFAULTS },
     steadyState: {
       status: "converged",
       message: "",

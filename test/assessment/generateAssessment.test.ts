@@ -110,7 +110,10 @@ describe("generateAssessment", () => {
     const s = spec({
       base: { altitude_km: 10 },
       ranges: { altitude_km: { min: 5, max: 15 } },
-      questions: [{ kind: "species-ratio", speciesA: "ClO", speciesB: "Cl" }, { kind: "chain-length", cycleId: CLOX_CYCLE }],
+      questions: [
+        { kind: "species-ratio", speciesA: "ClO", speciesB: "Cl" },
+        { kind: "chain-length", cycleId: CLOX_CYCLE },
+      ],
     });
     await expect(generateAssessment(s, { analyse: fakeAnalyse })).rejects.toThrow(
       /questions\[1\]: variant 1 found no conditions in 6 draws where question 2 has a sound answer/,
