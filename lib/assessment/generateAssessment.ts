@@ -35,6 +35,8 @@ import { variantSeed } from "./variantSeed";
 export const DEFAULTS = {
   /** draws per variant before generation gives up */
   maxAttempts: 6,
+  /** share of the Ox loss (fraction) a family needs on some variant to be offered as a choice */
+  minChoiceShare: 0.01,
   /** draws tried per variant for a condition no earlier variant has */
   maxDistinctTries: 50,
   /** marks per question */
@@ -86,9 +88,12 @@ function build(q: QuestionSpec, condition: ConditionInput, a: VariantAnalyses, f
   return templateOf(q.kind).build({ question: q, condition, base: a.base, extra: a.extra, families });
 }
 
+/** Families offered as choices: those with at least `minChoiceShare` of the loss on some variant. */
 function familiesOf(results: AnalysisResult[]): string[] {
   return sortFamilies(
-    results.flatMap((r) => r.cycles.budget.byFamily.filter((f) => f.fraction > 0).map((f) => f.family)),
+    results.flatMap((r) =>
+      r.cycles.budget.byFamily.filter((f) => f.fraction >= DEFAULTS.minChoiceShare).map((f) => f.family),
+    ),
   );
 }
 

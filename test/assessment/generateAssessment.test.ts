@@ -190,3 +190,16 @@ test("variants that also draw Cly still get different altitudes when the altitud
     expect(new Set(g.variants.map((v) => v.condition.altitude_km)).size, `seed ${seed}`).toBe(10);
   }
 });
+
+test("a family below 1 % of the loss on every variant is not offered as a choice", async () => {
+  const analyse = async (r: AnalysisRequest) => {
+    const out = fakeResult(r);
+    out.cycles.budget.byFamily.push(
+      { family: "BrOx", oxLoss_cm3s: 1, fraction: 0.001 },
+      { family: "unassigned", oxLoss_cm3s: 1, fraction: 0.2 },
+    );
+    return out;
+  };
+  const g = await generateAssessment(spec({ questions: [{ kind: "dominant-family" }] }), { analyse });
+  expect(g.sheets[0].questions[0].choices?.map((c) => c.value)).toEqual(["Ox", "NOx", "ClOx"]);
+});
