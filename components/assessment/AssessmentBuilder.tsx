@@ -99,7 +99,12 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
   const [instructions, setInstructions] = useState("");
   const [preview, setPreview] = useState<Preview | null>(null);
   const [previewing, setPreviewing] = useState(false);
-  const [questions, setQuestions] = useState<QuestionState[]>([]);
+  // A new assessment starts with the one question that needs no choice of cycle or species.
+  const [questions, setQuestions] = useState<QuestionState[]>(
+    templates.some((t) => t.kind === "dominant-family")
+      ? [{ uid: 0, kind: "dominant-family", cycleId: "", speciesA: "", speciesB: "", tolerance: "", points: "1" }]
+      : [],
+  );
   const [nextUid, setNextUid] = useState(1);
   const [addKind, setAddKind] = useState<QuestionKind>(templates[0]?.kind ?? "dominant-family");
   const [building, setBuilding] = useState(false);

@@ -23,7 +23,8 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
     await page.getByLabel("Question kind", { exact: true }).selectOption({ label: kind });
     await page.getByRole("button", { name: "Add question" }).click();
   };
-  await add("Dominant odd-oxygen loss family");
+  // the builder starts with the dominant-family question
+  await expect(page.getByRole("listitem", { name: "Question 1: Dominant odd-oxygen loss family" })).toBeVisible();
   await add("Rate-limiting step of a cycle");
   await add("Chain length of a cycle");
   await add("Steady-state ratio of two species");
@@ -33,7 +34,9 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
   await q4.getByLabel("Denominator [B]", { exact: true }).selectOption("Cl");
   // the cycle questions start on the first cycle that fits; the chlorine cycle is what we want here
   for (const n of [2, 3]) {
-    const cycle = page.getByRole("listitem", { name: new RegExp(`Question ${n}`) }).getByLabel("Cycle", { exact: true });
+    const cycle = page
+      .getByRole("listitem", { name: new RegExp(`Question ${n}`) })
+      .getByLabel("Cycle", { exact: true });
     const value = await cycle.locator("option", { hasText: "ClOx: Cl + O3" }).first().getAttribute("value");
     await cycle.selectOption(value as string);
   }
