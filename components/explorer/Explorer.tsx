@@ -61,7 +61,8 @@ export function Explorer(props: Props) {
   const [notice, setNotice] = useState<string | null>(
     props.queryWarnings?.length ? props.queryWarnings.join("; ") : null,
   );
-  const touched = useRef(false);
+  // the live explorer writes its canonical address at once; a permalink keeps /a/<id> until something changes
+  const touched = useRef(!props.stored);
   const net = useRef<NetworkHandle>(null);
   const mechanism = cache[mechanismId] ?? null;
 

@@ -3,3 +3,6 @@ export const chipWidth = (label: string): number => Math.max(44, Math.round([...
 
 /** Height of a species chip, px. */
 export const CHIP_HEIGHT_PX = 30;
+
+/** Width a family frame needs for its title at 16 px semibold, px (about 9.5 px a character). */
+export const frameTitleWidth = (title: string): number => Math.round([...title].length * 9.5 + 16);

@@ -60,6 +60,15 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
       y1: Math.max(b.y1, p.y + h.h + o.framePadding_px),
     });
   }
+  for (const el of elements) {
+    if (el.data.kind !== "frame") continue;
+    const b = frames.get(el.data.id);
+    if (b && b.x1 - b.x0 < el.data.minWidth) {
+      const grow = (el.data.minWidth - (b.x1 - b.x0)) / 2;
+      b.x0 -= grow;
+      b.x1 += grow;
+    }
+  }
   const all: Box = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
   for (const b of frames.values()) grow(all, { ...b, y0: b.y0 - 20 });
   for (const [id, p] of pos) {

@@ -9,7 +9,7 @@
  * size = log flux in both modes. Rates in molecules cm⁻³ s⁻¹.
  */
 import type { AnalysisResult } from "../engine/types";
-import { chipWidth } from "./chipWidth";
+import { chipWidth, frameTitleWidth } from "./chipWidth";
 import { divergingColor } from "./divergingColor";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
@@ -71,6 +71,7 @@ export function networkElements(
         kind: "frame",
         family: f,
         label: familyLabel(f),
+        minWidth: frameTitleWidth(familyLabel(f)),
         fill: st.frame,
         stroke: st.frameInk,
       },

@@ -11,7 +11,8 @@
  * Positions depend on the mechanism only, never on the numbers, so the
  * picture stays put while the altitude changes. Units: px.
  */
-import { CHIP_HEIGHT_PX, chipWidth } from "./chipWidth";
+import { CHIP_HEIGHT_PX, chipWidth, frameTitleWidth } from "./chipWidth";
+import { familyLabel } from "./familyLabel";
 import { familyOf, familyRank } from "./familyOf";
 import { parseEquation } from "./parseEquation";
 import type { MechanismView, Point } from "./types";
@@ -98,7 +99,9 @@ export function networkLayout(
     const n = byFamily.get(f)!.length;
     const cols = Math.max(1, Math.ceil(Math.sqrt(n / 1.2)));
     const rows = Math.ceil(n / cols);
-    dims.set(f, { cols, rows, w: cols * o.cellWidth_px, h: rows * o.cellHeight_px });
+    // the block is at least as wide as its frame's title (less the frame's padding on both sides)
+    const w = Math.max(cols * o.cellWidth_px, frameTitleWidth(familyLabel(f)) - 40);
+    dims.set(f, { cols, rows, w, h: rows * o.cellHeight_px });
   }
   const colW = new Map<number, number>();
   const rowH = new Map<number, number>();

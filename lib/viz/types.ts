@@ -116,6 +116,8 @@ export interface FrameNodeData {
   /** tint, hex */
   fill: string;
   stroke: string;
+  /** smallest width that holds the title, px */
+  minWidth: number;
 }
 
 export interface EdgeData {

@@ -38,7 +38,22 @@ test("the explorer opens with a network, cycles and a budget at the conditions i
   await expect(page.getByTestId("legend")).toContainText("molecules cm⁻³ s⁻¹");
   const e = await edges(page);
   expect(e.length).toBeGreaterThan(50);
+  // the address is canonical at once, so it can be shared before anything is touched
+  await expect(page).toHaveURL(/m=reference&z=40&lat=45&date=2026-03-20&t=12&mode=instantaneous/);
   await shot(page, "explorer-40km");
+});
+
+test("hiding held species removes them and their edges without moving anything else", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=40");
+  const before = await nodes(page);
+  expect(before.some((n) => n.id === "s:O2")).toBe(true);
+  await page.getByLabel("show held species").uncheck();
+  await expect(page).toHaveURL(/spectators=hide/);
+  const after = await nodes(page);
+  expect(after.some((n) => n.id === "s:O2")).toBe(false);
+  expect((await edges(page)).some((e) => e.id.endsWith(":O2"))).toBe(false);
+  expect(after.length).toBeLessThan(before.length);
+  await shot(page, "explorer-held-hidden");
 });
 
 test("moving the altitude slider recomputes, changes the numbers and the address, and keeps the layout", async ({

@@ -89,7 +89,13 @@ export const fixtureResult: AnalysisResult = {
     held_cm3: { O2: 8.0e16, N2: 3.0e17, CH4: 5.0e11 },
     poolTotals_cm3: { Cly: 5.1e9 },
   },
-  options: { fminRelative: 1e-4, oxDefinition: "standard", uncertaintySamples: 0, uncertaintySeed: 1, sensitivity: false },
+  options: {
+    fminRelative: 1e-4,
+    oxDefinition: "standard",
+    uncertaintySamples: 0,
+    uncertaintySeed: 1,
+    sensitivity: false,
+  },
   steadyState: {
     status: "converged",
     message: "",
