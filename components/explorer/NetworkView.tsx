@@ -33,7 +33,7 @@ declare global {
     /** read-only view of the canvas for the browser tests */
     __ozoneNetwork?: {
       edges(): { id: string; color: string; width: number; classes: string[] }[];
-      nodes(): { id: string; classes: string[] }[];
+      nodes(): { id: string; classes: string[]; x: number; y: number }[];
     };
   }
 }
@@ -96,7 +96,10 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
             width: e.data("width"),
             classes: e.classes(),
           })) ?? []) as { id: string; color: string; width: number; classes: string[] }[],
-        nodes: () => cyRef.current?.nodes().map((n) => ({ id: n.id(), classes: n.classes() })) ?? [],
+        nodes: () =>
+          cyRef.current
+            ?.nodes()
+            .map((n) => ({ id: n.id(), classes: n.classes(), x: n.position("x"), y: n.position("y") })) ?? [],
       };
       apply(cy, latest.current.elements, latest.current.highlight, latest.current.selected);
       box.current.dataset.ready = "true";

@@ -11,7 +11,9 @@ const shot = (page: Page, name: string) => page.screenshot({ path: `test-results
 type EdgeInfo = { id: string; color: string; width: number; classes: string[] };
 const edges = (page: Page) => page.evaluate(() => window.__ozoneNetwork?.edges() ?? []) as Promise<EdgeInfo[]>;
 const nodes = (page: Page) =>
-  page.evaluate(() => window.__ozoneNetwork?.nodes() ?? []) as Promise<{ id: string; classes: string[] }[]>;
+  page.evaluate(() => window.__ozoneNetwork?.nodes() ?? []) as Promise<
+    { id: string; classes: string[]; x: number; y: number }[]
+  >;
 
 async function openExplorer(page: Page, query: string) {
   await page.goto(`/explore?${query}`);
@@ -53,6 +55,10 @@ test("hiding held species removes them and their edges without moving anything e
   expect(after.some((n) => n.id === "s:O2")).toBe(false);
   expect((await edges(page)).some((e) => e.id.endsWith(":O2"))).toBe(false);
   expect(after.length).toBeLessThan(before.length);
+  const was = new Map(before.map((n) => [n.id, n]));
+  for (const n of after.filter((x) => !x.id.startsWith("f:"))) {
+    expect([n.x, n.y], n.id).toEqual([was.get(n.id)!.x, was.get(n.id)!.y]);
+  }
   await shot(page, "explorer-held-hidden");
 });
 
@@ -62,6 +68,9 @@ test("moving the altitude slider recomputes, changes the numbers and the address
   await openExplorer(page, "m=reference&z=30");
   const before = await numbers(page);
   const widthsBefore = (await edges(page)).map((e) => e.width);
+  const places = async () =>
+    (await nodes(page)).filter((n) => !n.id.startsWith("f:")).map(({ id, x, y }) => ({ id, x, y }));
+  const placesBefore = await places();
   const slider = page.getByLabel("Altitude");
   await slider.focus();
   for (let i = 0; i < 20; i++) await page.keyboard.press("ArrowRight");
@@ -71,6 +80,7 @@ test("moving the altitude slider recomputes, changes the numbers and the address
   const after = await numbers(page);
   expect(after.budget).not.toBe(before.budget);
   expect((await edges(page)).map((e) => e.width)).not.toEqual(widthsBefore);
+  expect(await places()).toEqual(placesBefore);
   await expect(page).toHaveURL(/[?&]z=40(&|$)/);
   await shot(page, "explorer-after-slider");
 });
