@@ -1,0 +1,9 @@
+import { respond } from "@/lib/service/http";
+import { getUncertaintyProfile } from "@/lib/service/uncertainty";
+
+export const dynamic = "force-dynamic";
+
+export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => Response.json(await getUncertaintyProfile(id)));
+}

@@ -1,0 +1,244 @@
+/**
+ * Uncertainty jobs: Monte Carlo ranges (and sensitivities) of one analysis or
+ * of every level of a stored profile sweep, run in the engine pool with
+ * progress. One analysis: the central solve is one pool job, the samples go
+ * out in batches (job kind "uncertainty-samples"), and the result is stored
+ * as an analysis record with `result.uncertainty` (so GET /api/analyses/{id}
+ * and its CSV exports show it). A profile: one pool job per level (the
+ * level's analysis with the uncertainty options, samples in that worker),
+ * stored as a record of kind "uncertainty-profile" with the family-share
+ * bands against altitude.
+ *
+ * These jobs have their own embedded back end; lib/service/jobs.ts does not
+ * know the kind (see docs/uncertainty.md, "Routes").
+ */
+import "server-only";
+import { z } from "zod";
+import { compileSource } from "../engine/mechanism-source";
+import { enginePool } from "../engine/pool";
+import { analysisRequestSchema, parseWith } from "../engine/request-schema";
+import type { AnalysisRequest, AnalysisResult } from "../engine/types";
+import { ENGINE_VERSION } from "../engine/version";
+import { EmbeddedJobBackend } from "../jobs/embeddedBackend";
+import type { JobBackend, JobContext, JobStatus } from "../jobs/types";
+import { getStore, ID_PATTERN, newRecordId } from "../store";
+import {
+  finishMonteCarlo,
+  type MonteCarloResult,
+  type ProfileBand,
+  planMonteCarlo,
+  profileShareBands,
+  type SampleBatchResult,
+  type SensitivityReport,
+} from "../uncertainty";
+import { notFound } from "./http";
+import { mechanismSource } from "./mechanisms";
+import { getProfileRecord } from "./profiles";
+
+export const UNCERTAINTY_PROFILE_KIND = "uncertainty-profile";
+export const MAX_UNCERTAINTY_BODY = 256 * 1024;
+
+const seed = z.number().int().min(0).max(0xffffffff);
+const jobSchema = z.union([
+  z.object({ analysis: analysisRequestSchema }).strict(),
+  z
+    .object({
+      profileId: z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected a stored profile sweep id"),
+      samples: z.number().int("expected a whole number of samples").min(0).max(100_000),
+      seed: seed.optional(),
+      sensitivity: z.boolean().optional(),
+    })
+    .strict(),
+]);
+
+export type UncertaintyJobInput = z.infer<typeof jobSchema>;
+
+export interface UncertaintyProfileLevel {
+  altitude_km: number;
+  /** "ok", or why the level has no ranges */
+  status: string;
+  message: string;
+  monteCarlo: MonteCarloResult | null;
+  sensitivity: SensitivityReport | null;
+}
+
+export interface UncertaintyProfileBody {
+  profileId: string;
+  samples: number;
+  seed: number;
+  levels: UncertaintyProfileLevel[];
+  /** family shares' median and 5–95 % range against altitude */
+  bands: ProfileBand[];
+  elapsed_ms: number;
+}
+
+/** Central analysis, then the Monte Carlo batches in parallel; stores an analysis record. */
+async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
+  const t0 = performance.now();
+  const src = await mechanismSource(request.mechanismId);
+  const samples = request.options?.uncertaintySamples ?? 0;
+  ctx.progress(0, samples + 1, "central steady state");
+  const centralRequest = { ...request, options: { ...request.options, uncertaintySamples: 0 } };
+  const { result } = await enginePool().run({ kind: "analysis", mechanism: src, request: centralRequest });
+  const out: AnalysisResult = { ...result, options: { ...result.options, ...request.options } };
+  const warnings = [...(result.uncertainty?.warnings ?? [])];
+  if (samples > 0 && result.condition.mode === "diurnal")
+    warnings.push("Monte Carlo ranges need the instantaneous steady state; not computed in the 24-hour mode");
+  else if (samples > 0 && result.steadyState.status !== "converged")
+    warnings.push(`no Monte Carlo ranges: the central steady state did not converge (${result.steadyState.message})`);
+  else if (samples > 0) {
+    const mech = compileSource(src);
+    const plan = planMonteCarlo(
+      mech,
+      {
+        T_K: result.condition.T_K,
+        M_cm3: result.condition.M_cm3,
+        J_s: result.condition.J_s,
+        held_cm3: result.condition.held_cm3,
+        poolTotals_cm3: result.condition.poolTotals_cm3,
+      },
+      result.steadyState,
+      result.cycles,
+      {
+        fminRelative: result.options.fminRelative,
+        oxDefinition: result.options.oxDefinition,
+        heldSpecies: Object.keys(result.condition.held_cm3),
+      },
+      { samples, seed: request.options?.uncertaintySeed },
+    );
+    let done = 0;
+    const batches: SampleBatchResult[] = await Promise.all(
+      plan.batches.map(async (batch) => {
+        if (ctx.signal.aborted) throw ctx.signal.reason;
+        const r = (await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch })).result;
+        done += batch.count;
+        ctx.progress(1 + done, samples + 1, `Monte Carlo samples (${done} of ${samples})`);
+        return r;
+      }),
+    );
+    const monteCarlo: MonteCarloResult = finishMonteCarlo(plan, batches, performance.now() - t0);
+    out.uncertainty = { ...result.uncertainty, monteCarlo, warnings };
+  }
+  if (!out.uncertainty && warnings.length > 0) out.uncertainty = { warnings };
+  const id = newRecordId();
+  await getStore().putAnalysis({
+    id,
+    mechanismId: src.id,
+    engineVersion: ENGINE_VERSION,
+    request,
+    result: out,
+    createdAt: new Date().toISOString(),
+  });
+  return { resultId: id, resultKind: "analysis" };
+}
+
+/** Every converged level of a stored sweep, one pool job each; stores an uncertainty-profile record. */
+async function profileJob(input: Extract<UncertaintyJobInput, { profileId: string }>, ctx: JobContext) {
+  const t0 = performance.now();
+  const profile = await getProfileRecord(input.profileId, "profileId");
+  const levels = profile.body.result.levels;
+  const src = await mechanismSource(profile.body.request.mechanismId);
+  const seedValue = input.seed ?? 1;
+  let done = 0;
+  ctx.progress(0, levels.length, "levels");
+  const results: UncertaintyProfileLevel[] = await Promise.all(
+    levels.map(async (level, i): Promise<UncertaintyProfileLevel> => {
+      const base = { altitude_km: level.altitude_km, monteCarlo: null, sensitivity: null };
+      if (level.status !== "converged")
+        return { ...base, status: level.status, message: `the sweep level did not converge: ${level.message}` };
+      if (ctx.signal.aborted) throw ctx.signal.reason;
+      const request: AnalysisRequest = {
+        ...level.request,
+        options: {
+          ...level.request.options,
+          uncertaintySamples: input.samples,
+          // a different stream per level, reproducible from the one seed
+          uncertaintySeed: (seedValue + Math.imul(i, 0x9e3779b1)) >>> 0,
+          sensitivity: input.sensitivity ?? false,
+        },
+      };
+      try {
+        const { result } = await enginePool().run({ kind: "analysis", mechanism: src, request });
+        done++;
+        ctx.progress(done, levels.length, `levels (${done} of ${levels.length})`);
+        return {
+          ...base,
+          status: result.steadyState.status === "converged" ? "ok" : result.steadyState.status,
+          message: result.uncertainty?.warnings.join("; ") ?? "",
+          monteCarlo: result.uncertainty?.monteCarlo ?? null,
+          sensitivity: result.uncertainty?.sensitivity ?? null,
+        };
+      } catch (e) {
+        done++;
+        return { ...base, status: "failed", message: e instanceof Error ? e.message : String(e) };
+      }
+    }),
+  );
+  const body: UncertaintyProfileBody = {
+    profileId: input.profileId,
+    samples: input.samples,
+    seed: seedValue,
+    levels: results,
+    bands: profileShareBands(results),
+    elapsed_ms: performance.now() - t0,
+  };
+  const id = newRecordId();
+  await getStore().putRecord({
+    id,
+    kind: UNCERTAINTY_PROFILE_KIND,
+    engineVersion: ENGINE_VERSION,
+    body,
+    createdAt: new Date().toISOString(),
+  });
+  return { resultId: id, resultKind: UNCERTAINTY_PROFILE_KIND };
+}
+
+async function uncertaintyJob(input: UncertaintyJobInput, ctx: JobContext) {
+  return "analysis" in input ? analysisJob(input.analysis as AnalysisRequest, ctx) : profileJob(input, ctx);
+}
+
+const KEY = Symbol.for("ozone.uncertaintyJobBackend");
+
+function backend(): JobBackend {
+  const g = globalThis as unknown as Record<symbol, JobBackend | undefined>;
+  g[KEY] ??= new EmbeddedJobBackend({ uncertainty: uncertaintyJob as never });
+  return g[KEY];
+}
+
+export interface UncertaintyJobView extends JobStatus {
+  statusUrl: string;
+  /** the stored result as JSON, when done */
+  resultApiUrl?: string;
+}
+
+function view(s: JobStatus): UncertaintyJobView {
+  const v: UncertaintyJobView = { ...s, statusUrl: `/api/uncertainty/jobs/${s.id}` };
+  if (s.state === "done" && s.resultId)
+    v.resultApiUrl =
+      s.resultKind === "analysis" ? `/api/analyses/${s.resultId}` : `/api/uncertainty/profiles/${s.resultId}`;
+  return v;
+}
+
+/** Validates and queues; throws InputError (400) before anything is queued. */
+export async function startUncertaintyJob(body: unknown): Promise<UncertaintyJobView> {
+  const input = parseWith(jobSchema, body) as UncertaintyJobInput;
+  if ("analysis" in input) await mechanismSource(input.analysis.mechanismId);
+  else await getProfileRecord(input.profileId, "profileId");
+  return view(await backend().submit("uncertainty", input));
+}
+
+const JOB_ID = /^[A-Za-z0-9_-]{16}$/;
+
+export async function getUncertaintyJob(id: string): Promise<UncertaintyJobView> {
+  const s = JOB_ID.test(id) ? await backend().status(id) : null;
+  if (!s) throw notFound("uncertainty job", id);
+  return view(s);
+}
+
+export async function getUncertaintyProfile(
+  id: string,
+): Promise<{ id: string; createdAt: string; body: UncertaintyProfileBody }> {
+  const r = ID_PATTERN.test(id) ? await getStore().getRecord(UNCERTAINTY_PROFILE_KIND, id) : null;
+  if (!r) throw notFound("uncertainty profile", id);
+  return { id: r.id, createdAt: r.createdAt, body: r.body as UncertaintyProfileBody };
+}
