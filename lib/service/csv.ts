@@ -1,5 +1,6 @@
 /** CSV exports of an analysis, with units in the headers (RFC 4180 quoting). */
 import type { AnalysisResult } from "../engine/types";
+import { monteCarloCsv, sensitivityCsv } from "../uncertainty";
 
 function cell(v: unknown): string {
   if (v === null || v === undefined) return "";
@@ -85,4 +86,16 @@ export function cyclesCsv(r: AnalysisResult): string {
       c.chainLength,
     ]),
   );
+}
+
+/** Monte Carlo medians and 5–95 % ranges (lib/uncertainty); a comment line only when the analysis has none. */
+export function uncertaintyCsv(r: AnalysisResult): string {
+  const mc = r.uncertainty?.monteCarlo;
+  return mc ? monteCarloCsv(mc) : "# no Monte Carlo ranges: request options.uncertaintySamples > 0\n";
+}
+
+/** Sensitivity coefficients in long form (lib/uncertainty); a comment line only when the analysis has none. */
+export function sensitivitiesCsv(r: AnalysisResult): string {
+  const s = r.uncertainty?.sensitivity;
+  return s ? sensitivityCsv(s) : "# no sensitivities: request options.sensitivity = true\n";
 }
