@@ -71,9 +71,8 @@ export function SweepView({
             : ""}
           {result.columnSource === "profile" ? ", overhead O3 column from the profile" : ""} · {result.levels.length}{" "}
           levels
-          {failed ? `, ${failed} failed` : ""} · {(result.timing.wall_ms / 1000).toFixed(1)} s in {result.timing.chunks}{" "}
-          chunk
-          {result.timing.chunks === 1 ? "" : "s"}
+          {failed ? `, ${failed} failed` : ""} · {(result.timing.wall_ms / 1000).toFixed(1)} s on {result.timing.chains}{" "}
+          warm-started {result.timing.chains === 1 ? "chain" : "chains"}
         </p>
         {p.demo ? (
           <p className="rounded bg-amber-50 px-3 py-2 text-[13px] text-amber-900" data-testid="demo-notice">

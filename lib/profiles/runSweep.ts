@@ -1,12 +1,14 @@
 /**
  * Runs a planned sweep over an executor (the engine pool, or this thread).
  *
- * The levels are split into as many contiguous chunks as the executor has
- * workers; each chunk runs from its top level down, each level warm-started
- * from the one above, and the chunks run side by side. Levels are sent in
+ * The levels run as warm-started chains, one per worker of the executor:
+ * the profile is cut into contiguous segments, and each segment is worked by
+ * two chains, one from its top down and one from its bottom up, each level
+ * warm-started from the one its chain did before, until they meet (a single
+ * chain runs from the top down). Levels are sent in
  * small batches so that progress and cancellation are per level. With O3
  * solved, each level's overhead O3 column is integrated from the freshest O3
- * of the levels above it (solved in this pass where the chunk has reached
+ * of the levels above it (solved in this pass where the chain has reached
  * them, else from the previous pass, else the climatology): a Gauss–Seidel
  * fixed-point iteration, repeated with each level warm-started from its own
  * previous state until no column changes by more than the tolerance (the
@@ -47,10 +49,10 @@ export interface SweepProgress {
 }
 
 export interface RunSweepOptions extends Partial<typeof SWEEP_DEFAULTS> {
-  /** "auto": one chunk per worker; "sequential": one chain; default "auto" */
+  /** "auto": one chain per worker; "sequential": one chain from the top down; default "auto" */
   parallel?: "auto" | "sequential";
-  /** explicit number of chunks (benchmarks); overrides `parallel` */
-  chunks?: number;
+  /** explicit number of warm-started chains run at once (tests, benchmarks); overrides `parallel` */
+  chains?: number;
   onProgress?: (p: SweepProgress) => void;
   /** checked before each batch; a cancelled sweep rejects with the signal's reason */
   signal?: AbortSignal;
@@ -71,10 +73,26 @@ export async function runSweep(
   const o = { ...SWEEP_DEFAULTS, ...options };
   const t0 = performance.now();
   const n = plan.tasks.length;
-  const nChunks = options.chunks ?? (options.parallel === "sequential" ? 1 : executor.workers);
-  // top-down order: index 0 is the highest level
-  const order = plan.tasks.map((_, i) => n - 1 - i);
-  const chunks = splitChunks(n, nChunks).map((c) => c.map((k) => order[k]));
+  const nChains = Math.max(
+    1,
+    Math.min(n, options.chains ?? (options.parallel === "sequential" ? 1 : executor.workers)),
+  );
+  // each segment of neighbouring levels is worked from both ends by two chains that meet wherever
+  // the cost puts them (the low levels cost far more than the high ones), so no worker idles; with O3
+  // solved every chain runs top down, so that each level sees the O3 its chain solved above it
+  const bothEnds = plan.ozone !== "solved";
+  const segments = splitChunks(n, bothEnds ? Math.ceil(nChains / 2) : nChains).map((c) => ({
+    lo: c[0],
+    hi: c[c.length - 1],
+  }));
+  const chainPlan = segments.flatMap((seg, k) =>
+    bothEnds && 2 * k + 1 < nChains
+      ? [
+          { seg, dir: -1 as const },
+          { seg, dir: 1 as const },
+        ]
+      : [{ seg, dir: -1 as const }],
+  );
   const maxPasses = plan.ozone === "solved" ? Math.max(1, o.maxColumnPasses) : 1;
   const warnings = [...plan.warnings];
   const progress: SweepProgress = { done: 0, total: n, pass: 1 };
@@ -100,13 +118,16 @@ export async function runSweep(
     const nextLevels: SweepLevel[] = new Array(n);
     const nextStates: (number[] | null)[] = new Array(n).fill(null);
     const nextMs: (number | null)[] = new Array(n).fill(null);
+    const cursors = segments.map((seg) => ({ lo: seg.lo, hi: seg.hi }));
     await Promise.all(
-      chunks.map(async (chunk) => {
+      chainPlan.map(async ({ seg, dir }) => {
+        const cur = cursors[segments.indexOf(seg)];
         let state: number[] | null = null;
         let stateM: number | null = null;
-        for (let s = 0; s < chunk.length; s += o.batchSize) {
+        while (cur.lo <= cur.hi) {
           if (options.signal?.aborted) throw options.signal.reason ?? new Error("cancelled");
-          const idx = chunk.slice(s, s + o.batchSize);
+          const idx: number[] = [];
+          while (idx.length < o.batchSize && cur.lo <= cur.hi) idx.push(dir < 0 ? cur.hi-- : cur.lo++);
           // solved O3: the column from the freshest O3 of the levels above (this pass where already solved)
           if (solved) for (const i of idx) used[i] = columnAbove(i);
           const tasks = idx.map((i) => ({
@@ -181,7 +202,7 @@ export async function runSweep(
     timing: {
       wall_ms: performance.now() - t0,
       compute_ms: levels.reduce((s, l) => s + l.elapsed_ms, 0),
-      chunks: chunks.length,
+      chains: chainPlan.length,
       passes,
     },
     warnings,

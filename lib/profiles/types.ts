@@ -157,8 +157,8 @@ export interface SweepTiming {
   wall_ms: number;
   /** sum of the levels' own compute times, ms */
   compute_ms: number;
-  /** contiguous chunks run side by side */
-  chunks: number;
+  /** warm-started chains run side by side */
+  chains: number;
   /** passes over the levels (more than one when the overhead O3 column is iterated) */
   passes: number;
 }

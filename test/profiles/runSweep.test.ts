@@ -59,7 +59,7 @@ describe("runSweep", () => {
     const { mech, ref, sweep } = setup("oxygen-chlorine");
     const r = await sweep({ grid: { from_km: 20, to_km: 50, step_km: 5 } });
     expect(r.levels.map((l) => l.altitude_km)).toEqual([20, 25, 30, 35, 40, 45, 50]);
-    expect(r.timing.chunks).toBe(2);
+    expect(r.timing.chains).toBe(2);
     expect(r.levels.filter((l) => l.warmStarted).length).toBe(5);
     for (const level of r.levels) expectLevelEqualsAnalysis(level, runAnalysis(mech, ref, level.request));
   });
@@ -99,7 +99,7 @@ describe("runSweep", () => {
     const one = await sweep({ grid }, 1);
     const two = await sweep({ grid }, 2);
     const cold = await sweep({ grid }, 5);
-    expect(one.timing.chunks).toBe(1);
+    expect(one.timing.chains).toBe(1);
     expect(cold.levels.every((l) => !l.warmStarted)).toBe(true);
     one.levels.forEach((l, i) => {
       expectClose(two.levels[i].budget?.loss_cm3s as number, l.budget?.loss_cm3s as number, { rel: 1e-6 });
