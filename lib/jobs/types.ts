@@ -37,6 +37,19 @@ export interface JobStatus {
   updatedAt: string;
 }
 
+/**
+ * Where a job's units of work (JSON tasks: a batch of levels, a block of
+ * samples) are computed. Given to handlers by back ends that distribute
+ * tasks (BullMQ: queue workers on any machine); absent on the embedded back
+ * end, whose handlers use the engine pool of their own process.
+ */
+export interface TaskRunner {
+  /** how many tasks are worth running at once (e.g. the number of sweep chunks) */
+  parallel: number;
+  /** computes one engine task (plain JSON, e.g. { kind: "profile-levels", … }); resolves to its result */
+  run(task: unknown): Promise<unknown>;
+}
+
 /** What a handler is given besides its input. */
 export interface JobContext {
   jobId: string;
@@ -44,6 +57,8 @@ export interface JobContext {
   signal: AbortSignal;
   /** reports progress; `stage` is optional text for people */
   progress(done: number, total: number, stage?: string): void;
+  /** where to send the job's tasks; absent: the process's own engine pool */
+  tasks?: TaskRunner;
 }
 
 /** Does the work of one job kind and stores its result; returns where. */
