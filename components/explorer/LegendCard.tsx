@@ -9,15 +9,15 @@ export function LegendCard({ legend, empty }: { legend: Legend; empty: boolean }
   return (
     <div
       data-testid="legend"
-      className="flex flex-wrap items-start gap-x-5 gap-y-1 rounded-md border border-stone-300 bg-white px-3 py-1.5 text-[11px] leading-tight text-stone-700"
+      className="flex flex-wrap items-start gap-x-4 gap-y-1 rounded-md border border-stone-300 bg-white px-3 py-1 text-[10.5px] leading-tight text-stone-700"
     >
-      <div className="w-[300px] max-w-full">
+      <div className="w-[290px] max-w-full">
         <div className="flex items-baseline justify-between gap-2">
           <span className="font-semibold text-stone-900">{legend.title}</span>
           <span className="text-stone-500">{legend.unit}</span>
         </div>
-        <div className="mt-1 h-2.5 rounded-sm border border-stone-300" style={{ background: gradient }} aria-hidden />
-        <div className="relative mt-0.5 h-3.5">
+        <div className="mt-0.5 h-2.5 rounded-sm border border-stone-300" style={{ background: gradient }} aria-hidden />
+        <div className="relative h-3.5">
           {(empty ? [] : legend.ticks).map((t) => (
             <span
               key={`${t.offset}-${t.label}`}
@@ -33,45 +33,42 @@ export function LegendCard({ legend, empty }: { legend: Legend; empty: boolean }
           <span>{legend.highLabel} →</span>
         </div>
       </div>
-      <div className="space-y-1 pt-0.5">
-        <div className="flex items-center gap-3">
-          <span className="text-stone-500">edge width = rate</span>
+      <div className="grid grid-cols-[auto_auto] items-center gap-x-3 gap-y-0.5 pt-0.5 text-stone-600">
+        <span className="text-stone-500">width = rate</span>
+        <span className="flex items-center gap-2">
           {(empty ? [] : legend.widths).map((w) => (
-            <span key={w.label} className="flex items-center gap-1">
-              <svg width="22" height="12" aria-hidden>
-                <line x1="1" y1="6" x2="21" y2="6" stroke="#4a5560" strokeWidth={w.width} strokeLinecap="round" />
+            <span key={w.label} className="flex items-center gap-0.5">
+              <svg width="18" height="10" aria-hidden>
+                <line x1="1" y1="5" x2="17" y2="5" stroke="#4a5560" strokeWidth={w.width} strokeLinecap="round" />
               </svg>
               {w.label}
             </span>
           ))}
-        </div>
-        <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-stone-600">
-          <span className="flex items-center gap-1">
-            <svg width="26" height="14" aria-hidden>
-              <polygon points={CHIP} fill="#eeeaf4" stroke="#7a6a90" strokeWidth="1.2" />
-            </svg>
-            species
-          </span>
-          <span className="flex items-center gap-1">
-            <svg width="26" height="14" aria-hidden>
-              <polygon points={CHIP} fill="#fff" stroke="#7a7a7a" strokeWidth="1.2" strokeDasharray="3 2" />
-            </svg>
-            held
-          </span>
-          <span className="flex items-center gap-1">
-            <svg width="14" height="14" aria-hidden>
-              <polygon points={HEX} fill="#5b8fa8" />
-            </svg>
-            reaction
-          </span>
-          <span className="flex items-center gap-1">
-            <svg width="14" height="14" aria-hidden>
-              <polygon points={HEX} fill="#fff" stroke="#a9a69d" />
-            </svg>
-            no flux
-          </span>
-          <span>chevron: into a product</span>
-        </div>
+        </span>
+        <span className="flex items-center gap-1">
+          <svg width="26" height="14" aria-hidden>
+            <polygon points={CHIP} fill="#eeeaf4" stroke="#7a6a90" strokeWidth="1.2" />
+          </svg>
+          species
+        </span>
+        <span className="flex items-center gap-1">
+          <svg width="26" height="14" aria-hidden>
+            <polygon points={CHIP} fill="#fff" stroke="#7a7a7a" strokeWidth="1.2" strokeDasharray="3 2" />
+          </svg>
+          held
+        </span>
+        <span className="flex items-center gap-1">
+          <svg width="14" height="14" aria-hidden>
+            <polygon points={HEX} fill="#5b8fa8" />
+          </svg>
+          reaction
+        </span>
+        <span className="flex items-center gap-1">
+          <svg width="14" height="14" aria-hidden>
+            <polygon points={HEX} fill="#fff" stroke="#a9a69d" />
+          </svg>
+          no flux · chevron = product
+        </span>
       </div>
     </div>
   );

@@ -72,37 +72,39 @@ export function Toolbar({
       >
         Fit to view
       </button>
-      <label className="flex items-center gap-1 text-[12px] text-stone-700">
-        <span aria-hidden>Inspect</span>
-        <select
-          aria-label="Inspect a species or reaction"
-          value={selected ?? ""}
-          onChange={(e) => onInspect(e.target.value || null)}
-          className="max-w-[150px] rounded border border-stone-300 bg-white px-1 py-0.5 text-[12px] focus:outline-2 focus:outline-stone-800"
-        >
-          <option value="">— pick —</option>
-          <optgroup label="Species">
-            {mechanism?.species
-              .filter((s) => s.role !== "third-body")
-              .map((s) => (
-                <option key={s.id} value={`s:${s.id}`}>
-                  {s.label || s.id}
+      <div className="flex w-full min-w-0 items-center gap-3">
+        <label className="flex items-center gap-1 text-[12px] text-stone-700">
+          <span aria-hidden>Inspect</span>
+          <select
+            aria-label="Inspect a species or reaction"
+            value={selected ?? ""}
+            onChange={(e) => onInspect(e.target.value || null)}
+            className="max-w-[180px] rounded border border-stone-300 bg-white px-1 py-0.5 text-[12px] focus:outline-2 focus:outline-stone-800"
+          >
+            <option value="">— pick —</option>
+            <optgroup label="Species">
+              {mechanism?.species
+                .filter((s) => s.role !== "third-body")
+                .map((s) => (
+                  <option key={s.id} value={`s:${s.id}`}>
+                    {s.label || s.id}
+                  </option>
+                ))}
+            </optgroup>
+            <optgroup label="Reactions">
+              {mechanism?.reactions.map((r) => (
+                <option key={r.id} value={`r:${r.id}`}>
+                  {r.id}: {r.equation}
                 </option>
               ))}
-          </optgroup>
-          <optgroup label="Reactions">
-            {mechanism?.reactions.map((r) => (
-              <option key={r.id} value={`r:${r.id}`}>
-                {r.id}: {r.equation}
-              </option>
-            ))}
-          </optgroup>
-        </select>
-      </label>
-      <p data-testid="status" aria-live="polite" className="ml-auto min-w-0 truncate text-[11px] text-stone-500">
-        {loading ? "Computing… " : ""}
-        {status ?? (loading ? "" : "No analysis yet")}
-      </p>
+            </optgroup>
+          </select>
+        </label>
+        <p data-testid="status" aria-live="polite" className="ml-auto min-w-0 truncate text-[11px] text-stone-500">
+          {loading ? "Computing… " : ""}
+          {status ?? (loading ? "" : "No analysis yet")}
+        </p>
+      </div>
     </div>
   );
 }
