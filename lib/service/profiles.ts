@@ -13,13 +13,14 @@ import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { resolveCondition } from "../engine/resolve-condition";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
-import type { JobContext } from "../jobs/types";
+import type { JobContext, TaskRunner } from "../jobs/types";
 import { builtinProfiles, resolveProfileSpec } from "../profiles/builtinProfiles";
 import { compareSweeps } from "../profiles/compareSweeps";
 import { comparisonCsv, sweepCyclesCsv, sweepLevelsCsv } from "../profiles/csvTables";
 import { planSweep, type SweepPlan } from "../profiles/planSweep";
 import { profileToCsv } from "../profiles/profileToCsv";
 import { parseComparisonRequest, parseSweepRequest } from "../profiles/requestSchema";
+import type { LevelBatchResult } from "../profiles/runLevelBatch";
 import { runSweep, type SweepExecutor, type SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
@@ -84,7 +85,15 @@ async function prepareSweep(request: SweepRequest, path = ""): Promise<Prepared>
   return { request, src, profile, plan };
 }
 
-function poolExecutor(src: MechanismSource): SweepExecutor {
+/** The process's engine pool, or the job back end's task runner when it distributes tasks (BullMQ). */
+function poolExecutor(src: MechanismSource, tasks?: TaskRunner): SweepExecutor {
+  if (tasks) {
+    return {
+      workers: tasks.parallel,
+      run: async (batch) =>
+        ((await tasks.run({ kind: "profile-levels", mechanism: src, batch })) as { result: LevelBatchResult }).result,
+    };
+  }
   return {
     workers: POOL_DEFAULTS.size,
     run: async (batch) => (await enginePool().run({ kind: "profile-levels", mechanism: src, batch })).result,
@@ -95,10 +104,11 @@ async function runPrepared(
   p: Prepared,
   signal: AbortSignal,
   onProgress: (q: SweepProgress) => void,
+  tasks?: TaskRunner,
 ): Promise<SweepResult> {
   return runSweep(
     p.plan,
-    poolExecutor(p.src),
+    poolExecutor(p.src, tasks),
     {
       engineVersion: ENGINE_VERSION,
       mechanism: { id: p.src.id, title: p.src.title },
@@ -156,7 +166,7 @@ export async function validateSweep(body: unknown): Promise<SweepRequest> {
 /** Job handler "profile-sweep". */
 export async function sweepJob(input: SweepRequest, ctx: JobContext) {
   const p = await prepareSweep(input);
-  const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)));
+  const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)), ctx.tasks);
   if (ctx.signal.aborted) throw ctx.signal.reason;
   return { resultId: await storeSweep(p, result), resultKind: PROFILE_KIND };
 }
@@ -196,11 +206,16 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
       sides.push({ id: rec.id, result: rec.body.result });
       continue;
     }
-    const result = await runPrepared(p, ctx.signal, (q) => {
-      done[k] = q.done;
-      totals[k] = q.total;
-      ctx.progress(done[0] + done[1], totals[0] + totals[1], `${key.toUpperCase()}: ${stageOf(q)}`);
-    });
+    const result = await runPrepared(
+      p,
+      ctx.signal,
+      (q) => {
+        done[k] = q.done;
+        totals[k] = q.total;
+        ctx.progress(done[0] + done[1], totals[0] + totals[1], `${key.toUpperCase()}: ${stageOf(q)}`);
+      },
+      ctx.tasks,
+    );
     if (ctx.signal.aborted) throw ctx.signal.reason;
     sides.push({ id: await storeSweep(p, result), result });
   }
