@@ -1,16 +1,18 @@
 /**
- * The process's job back end (embedded: in memory, compute in the engine
- * pool) with the handlers of every long job kind. Routes submit and read
- * jobs only through this module, so another back end (a Redis queue) can
- * replace the embedded one here.
+ * The process's job back end with the handlers of every long job kind:
+ * embedded (in memory, compute in the engine pool) by default, BullMQ on
+ * Redis when REDIS_URL is set (the handlers then run in `npm run worker`
+ * processes, which import JOB_HANDLERS from here). Routes submit and read
+ * jobs only through this module.
  */
 import "server-only";
-import { EmbeddedJobBackend } from "../jobs/embeddedBackend";
+import { createJobBackend } from "../jobs/createJobBackend";
 import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
 import { notFound } from "./http";
 import { comparisonJob, comparisonPath, profilePath, sweepJob, validateComparison, validateSweep } from "./profiles";
 
-const HANDLERS: Record<string, JobHandler<never>> = {
+/** The handler of every job kind (also run by the queue workers). */
+export const JOB_HANDLERS: Record<string, JobHandler<never>> = {
   "profile-sweep": sweepJob as JobHandler<never>,
   comparison: comparisonJob as JobHandler<never>,
 };
@@ -20,7 +22,7 @@ const KEY = Symbol.for("ozone.jobBackend");
 /** The process-wide back end (kept on globalThis so that every route module sees the same one). */
 export function jobBackend(): JobBackend {
   const g = globalThis as unknown as Record<symbol, JobBackend | undefined>;
-  g[KEY] ??= new EmbeddedJobBackend(HANDLERS);
+  g[KEY] ??= createJobBackend(JOB_HANDLERS);
   return g[KEY];
 }
 
@@ -72,7 +74,8 @@ export function jobEvents(id: string, signal: AbortSignal): Response {
   const encoder = new TextEncoder();
   let unsubscribe = () => {};
   const stream = new ReadableStream<Uint8Array>({
-    start(controller) {
+    // the first status is read before watching: a back end in another process answers asynchronously
+    async start(controller) {
       let closed = false;
       const close = () => {
         if (closed) return;
@@ -80,14 +83,16 @@ export function jobEvents(id: string, signal: AbortSignal): Response {
         unsubscribe();
         controller.close();
       };
-      let seen = false;
-      unsubscribe = jobBackend().watch(id, (s) => {
-        seen = true;
-        if (closed) return;
-        controller.enqueue(encoder.encode(`event: status\ndata: ${JSON.stringify(jobView(s))}\n\n`));
-        if (s.state === "done" || s.state === "failed" || s.state === "cancelled") queueMicrotask(close);
-      });
-      if (!seen) {
+      const first = await jobBackend()
+        .status(id)
+        .catch(() => null);
+      if (first) {
+        unsubscribe = jobBackend().watch(id, (s) => {
+          if (closed) return;
+          controller.enqueue(encoder.encode(`event: status\ndata: ${JSON.stringify(jobView(s))}\n\n`));
+          if (s.state === "done" || s.state === "failed" || s.state === "cancelled") queueMicrotask(close);
+        });
+      } else {
         controller.enqueue(
           encoder.encode(
             `event: error\ndata: ${JSON.stringify({ code: "not-found", message: `no job with id ${id}` })}\n\n`,
