@@ -216,6 +216,18 @@ test.describe("assessment routes", () => {
     expect(lines[1].startsWith("Ada,1,1,1,1,1,2,1,7,7")).toBe(true);
   });
 
+  test("the answers may also come as JSON { csv }, and a body over 1 MiB is refused", async ({ request }) => {
+    const csv = "student,variant,q1,q2,q3,q4,q5,q6\nAda,1,,,,,,\n";
+    const r = await request.post(`/api/assessments/${created.instructorId}/marks`, { data: { csv } });
+    expect(r.status()).toBe(200);
+    expect((await r.json()).students[0].total).toBe(0);
+    const big = await request.post(`/api/assessments/${created.instructorId}/marks`, {
+      data: `student,variant,q1,q2,q3,q4,q5,q6\n${"x".repeat(1_100_000)}`,
+      headers: { "content-type": "text/csv" },
+    });
+    expect(big.status()).toBe(413);
+  });
+
   test("a malformed answer file is a 400 naming the row and the column", async ({ request }) => {
     const r = await request.post(`/api/assessments/${created.instructorId}/marks`, {
       data: "student,variant,q1,q2,q3,q4,q5,q6\nAda,11,a,a,1,1,1,1\n",
