@@ -127,66 +127,92 @@ export function isElementary(
   return n - rref(work.a, m, n, work.pivots) <= 1;
 }
 
-/** Null-space basis of the support, as d column vectors of length n (free-variable form: 1 at its free column). */
+/** Buffers of one decomposition (n columns, d null-space dimensions), allocated once per call. */
+interface Split {
+  n: number;
+  d: number;
+  /** null-space basis, d rows of n (free-variable form) */
+  basis: Float64Array;
+  /** restricted system, up to n × d */
+  r: Float64Array;
+  rPivots: Int32Array;
+  isPivot: Uint8Array;
+  inside: Uint8Array;
+  coords: Float64Array;
+  cand: Float64Array;
+  u: Float64Array;
+}
+
 function nullBasis(
   columns: ArrayLike<number>,
   nets: SparseVector[],
   isRow: (s: number) => boolean,
   work: EliminationWork,
-): Float64Array[] {
+): Split {
   const { m, n } = fill(columns, nets, isRow, work);
   const rank = rref(work.a, m, n, work.pivots);
-  const isPivot = new Uint8Array(n);
+  const d = n - rank;
+  const basis = new Float64Array(d * n);
+  const isPivot = new Uint8Array(Math.max(n, d));
   for (let r = 0; r < rank; r++) isPivot[work.pivots[r]] = 1;
-  const basis: Float64Array[] = [];
+  let k = 0;
   for (let f = 0; f < n; f++) {
     if (isPivot[f]) continue;
-    const w = new Float64Array(n);
-    w[f] = 1;
-    for (let r = 0; r < rank; r++) w[work.pivots[r]] = -work.a[r * n + f];
-    basis.push(w);
+    basis[k * n + f] = 1;
+    for (let r = 0; r < rank; r++) basis[k * n + work.pivots[r]] = -work.a[r * n + f];
+    k++;
   }
-  return basis;
+  return {
+    n,
+    d,
+    basis,
+    r: new Float64Array(n * d),
+    rPivots: new Int32Array(d),
+    isPivot,
+    inside: new Uint8Array(n),
+    coords: new Float64Array(d * d),
+    cand: new Float64Array(n),
+    u: new Float64Array(n),
+  };
 }
 
 /**
- * Basis (in the d coordinates of `basis`) of the vectors Σ c_k basis_k that
- * vanish outside `inside` (a mask over the n components).
+ * Coordinates (rows of sp.coords, d each) of a basis of the vectors Σ c_k basis_k
+ * that vanish outside sp.inside; returns how many.
  */
-function restrictedCoordinates(basis: Float64Array[], inside: Uint8Array): Float64Array[] {
-  const d = basis.length;
-  const n = inside.length;
-  const rows: number[] = [];
-  for (let i = 0; i < n; i++) if (!inside[i]) rows.push(i);
-  const m = rows.length;
-  const a = new Float64Array(Math.max(1, m * d));
-  rows.forEach((i, r) => {
-    for (let k = 0; k < d; k++) a[r * d + k] = basis[k][i];
-  });
-  const pivots = new Int32Array(d);
-  const rank = rref(a, m, d, pivots);
-  const isPivot = new Uint8Array(d);
-  for (let r = 0; r < rank; r++) isPivot[pivots[r]] = 1;
-  const out: Float64Array[] = [];
+function restrictedCoordinates(sp: Split): number {
+  const { n, d, basis, r, rPivots, isPivot, inside, coords } = sp;
+  let m = 0;
+  for (let i = 0; i < n; i++) {
+    if (inside[i]) continue;
+    for (let k = 0; k < d; k++) r[m * d + k] = basis[k * n + i];
+    m++;
+  }
+  const rank = rref(r, m, d, rPivots);
+  isPivot.fill(0, 0, d);
+  for (let q = 0; q < rank; q++) isPivot[rPivots[q]] = 1;
+  let count = 0;
   for (let f = 0; f < d; f++) {
     if (isPivot[f]) continue;
-    const c = new Float64Array(d);
-    c[f] = 1;
-    for (let r = 0; r < rank; r++) c[pivots[r]] = -a[r * d + f];
-    out.push(c);
+    const row = count * d;
+    coords.fill(0, row, row + d);
+    coords[row + f] = 1;
+    for (let q = 0; q < rank; q++) coords[row + rPivots[q]] = -r[q * d + f];
+    count++;
   }
-  return out;
+  return count;
 }
 
-function combine(basis: Float64Array[], c: Float64Array, n: number): Float64Array {
-  const v = new Float64Array(n);
-  for (let k = 0; k < basis.length; k++) {
-    const ck = c[k];
+/** sp.cand = Σ_k coords[row k]·basis_k */
+function combine(sp: Split, row: number): Float64Array {
+  const { n, d, basis, coords, cand } = sp;
+  cand.fill(0);
+  for (let k = 0; k < d; k++) {
+    const ck = coords[row * d + k];
     if (ck === 0) continue;
-    const b = basis[k];
-    for (let i = 0; i < n; i++) v[i] += ck * b[i];
+    for (let i = 0; i < n; i++) cand[i] += ck * basis[k * n + i];
   }
-  return v;
+  return cand;
 }
 
 function proportional(u: Float64Array, w: Float64Array): boolean {
@@ -203,40 +229,35 @@ function proportional(u: Float64Array, w: Float64Array): boolean {
   return true;
 }
 
-/** One elementary vector inside the support of the balanced vector `v` (≥ 0, in the span of `basis`). */
-function elementaryInside(v: Float64Array, basis: Float64Array[]): Float64Array | null {
-  const n = v.length;
-  let u = v;
+/** One elementary vector inside the support of the balanced vector `v` (≥ 0, in the span of the basis), in sp.u. */
+function elementaryInside(v: Float64Array, sp: Split): Float64Array | null {
+  const { n, u, inside } = sp;
+  u.set(v);
   for (let guard = 0; guard <= n; guard++) {
     let scale = 0;
     for (let i = 0; i < n; i++) scale = Math.max(scale, u[i]);
-    const inside = new Uint8Array(n);
-    for (let i = 0; i < n; i++) if (u[i] > DEFAULTS.tolerance * scale) inside[i] = 1;
-    const coords = restrictedCoordinates(basis, inside);
-    if (coords.length <= 1) {
-      const e = new Float64Array(n);
-      for (let i = 0; i < n; i++) if (inside[i]) e[i] = u[i];
-      return e;
+    for (let i = 0; i < n; i++) {
+      inside[i] = u[i] > DEFAULTS.tolerance * scale ? 1 : 0;
+      if (!inside[i]) u[i] = 0;
     }
+    const count = restrictedCoordinates(sp);
+    if (count <= 1) return u;
     let w: Float64Array | undefined;
-    for (const c of coords) {
-      const cand = combine(basis, c, n);
-      if (!proportional(u, cand)) {
-        w = cand;
-        break;
-      }
+    for (let row = 0; row < count && !w; row++) {
+      const cand = combine(sp, row);
+      if (!proportional(u, cand)) w = cand;
     }
     if (!w) return null;
-    if (!w.some((x) => x > DEFAULTS.tolerance)) for (let i = 0; i < n; i++) w[i] = -w[i];
+    let anyPositive = false;
+    for (let i = 0; i < n; i++) if (w[i] > DEFAULTS.tolerance) anyPositive = true;
+    if (!anyPositive) for (let i = 0; i < n; i++) w[i] = -w[i];
     let t = Number.POSITIVE_INFINITY;
     for (let i = 0; i < n; i++) if (inside[i] && w[i] > DEFAULTS.tolerance) t = Math.min(t, u[i] / w[i]);
-    const next = new Float64Array(n);
     for (let i = 0; i < n; i++) {
       if (!inside[i]) continue;
       const x = u[i] - t * w[i];
-      next[i] = x > DEFAULTS.tolerance * scale ? x : 0;
+      u[i] = x > DEFAULTS.tolerance * scale ? x : 0;
     }
-    u = next;
   }
   return null;
 }
@@ -254,25 +275,27 @@ export function decomposeElementary(
   isRow: (species: number) => boolean,
   work: EliminationWork,
 ): { multiplicity: number[]; rate: number }[] | null {
-  const basis = nullBasis(columns, nets, isRow, work);
+  const sp = nullBasis(columns, nets, isRow, work);
   const out: { multiplicity: number[]; rate: number }[] = [];
-  let v = Float64Array.from(flux);
-  const scale = Math.max(...flux);
+  const v = Float64Array.from(flux);
+  let scale = 0;
+  for (const x of flux) scale = Math.max(scale, x);
   for (let guard = 0; guard <= flux.length; guard++) {
-    if (!v.some((x) => x > DEFAULTS.tolerance * scale)) return out;
-    const e = elementaryInside(v, basis);
+    let left = false;
+    for (let i = 0; i < v.length; i++) if (v[i] > DEFAULTS.tolerance * scale) left = true;
+    if (!left) return out;
+    const e = elementaryInside(v, sp);
     if (!e) return null;
-    const ints = integerProportional(Array.from(e));
+    const ints = integerProportional(e);
     if (!ints) return null;
     let beta = Number.POSITIVE_INFINITY;
-    ints.forEach((m, i) => {
-      if (m > 0) beta = Math.min(beta, v[i] / m);
-    });
+    for (let i = 0; i < ints.length; i++) if (ints[i] > 0) beta = Math.min(beta, v[i] / ints[i]);
     out.push({ multiplicity: ints, rate: beta });
-    v = v.map((x, i) => {
-      const y = x - beta * ints[i];
-      return y > DEFAULTS.tolerance * scale ? y : 0;
-    });
+    for (let i = 0; i < v.length; i++) {
+      const y = v[i] - beta * ints[i];
+      v[i] = y > DEFAULTS.tolerance * scale ? y : 0;
+    }
   }
-  return v.some((x) => x > DEFAULTS.tolerance * scale) ? null : out;
+  for (let i = 0; i < v.length; i++) if (v[i] > DEFAULTS.tolerance * scale) return null;
+  return out;
 }

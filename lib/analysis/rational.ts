@@ -81,14 +81,14 @@ export function normaliseIntegers(v: number[]): { v: number[]; g: number } {
 }
 
 /** Real vector with rational ratios to the smallest integer vector proportional to it, or null. */
-export function integerProportional(v: number[]): number[] | null {
+export function integerProportional(v: ArrayLike<number>): number[] | null {
   let min = Number.POSITIVE_INFINITY;
-  for (const x of v) if (x > 0 && x < min) min = x;
+  for (let i = 0; i < v.length; i++) if (v[i] > 0 && v[i] < min) min = v[i];
   if (!Number.isFinite(min)) return null;
   const fr: [number, number][] = [];
   let l = 1;
-  for (const x of v) {
-    const q = toRational(x / min);
+  for (let i = 0; i < v.length; i++) {
+    const q = toRational(v[i] / min);
     if (!q) return null;
     fr.push(q);
     l = (l * q[1]) / gcd(l, q[1]);
