@@ -9,7 +9,11 @@ export const metadata: Metadata = { title: "Build an assessment · Ozone Loss Cy
 export default async function BuildAssessmentPage() {
   let mechanisms: MechanismOption[] = [];
   try {
-    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({ id: m.id, title: m.title, description: m.description }));
+    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({
+      id: m.id,
+      title: m.title,
+      description: m.description,
+    }));
   } catch {
     mechanisms = [];
   }

@@ -262,6 +262,8 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
               onChange={(e) => {
                 setMechanismId(e.target.value);
                 setPreview(null);
+                // cycles and species belong to the mechanism: choose them again
+                setQuestions((qs) => qs.map((q) => ({ ...q, cycleId: "", speciesA: "", speciesB: "" })));
               }}
               className="mt-0.5 rounded border border-stone-300 bg-white px-2 py-1 text-[13px] focus:outline-2 focus:outline-stone-800"
             >
