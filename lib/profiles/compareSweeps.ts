@@ -73,7 +73,7 @@ export function explainDifference(a: SweepLevel, b: SweepLevel, total_cm3s: numb
 }
 
 export function compareSweeps(a: SweepResult, b: SweepResult, options: CompareOptions = {}): ComparisonResult {
-  const o = { ...COMPARE_DEFAULTS, ...options };
+  const o = { ...COMPARE_DEFAULTS, ...definedOnly(options) };
   if (!(Number.isInteger(o.topCycles) && o.topCycles >= 1 && o.topCycles <= 50)) {
     throw new InputError("topCycles", `expected a whole number from 1 to 50, got ${o.topCycles}`);
   }
@@ -137,4 +137,9 @@ export function compareSweeps(a: SweepResult, b: SweepResult, options: CompareOp
     levels,
     warnings,
   };
+}
+
+/** The options that are set: an `undefined` must not override a default. */
+function definedOnly<T extends object>(o: T): Partial<T> {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
 }

@@ -47,6 +47,12 @@ export function planSweep(request: SweepRequest, profile: Profile, mech: Mechani
     );
   }
   if (grid.from_km > grid.to_km) {
+    if (request.grid?.from_km !== undefined || request.grid?.to_km !== undefined) {
+      throw new InputError(
+        "grid.to_km",
+        `expected an altitude at or above from_km (${grid.from_km} km), got ${grid.to_km} km`,
+      );
+    }
     throw new InputError(
       "grid",
       `the profile "${profile.title}" (${lo}–${hi} km) has no level on the default grid 10–60 km; give grid.from_km and grid.to_km`,

@@ -70,7 +70,8 @@ export async function runSweep(
   meta: SweepMeta,
   options: RunSweepOptions = {},
 ): Promise<SweepResult> {
-  const o = { ...SWEEP_DEFAULTS, ...options };
+  // an option given as undefined keeps its default
+  const o = { ...SWEEP_DEFAULTS, ...Object.fromEntries(Object.entries(options).filter(([, v]) => v !== undefined)) };
   const t0 = performance.now();
   const n = plan.tasks.length;
   const nChains = Math.max(
