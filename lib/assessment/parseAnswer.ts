@@ -41,12 +41,13 @@ export function parseNumberAnswer(raw: string): number | null {
   return Number.isFinite(v) ? v : null;
 }
 
-/** A name for comparison: no case, no spaces, one arrow style, no surrounding brackets of a letter. */
+/** A name for comparison: no case, no spaces, one arrow style, one dash, no surrounding brackets of a letter. */
 export function normaliseName(raw: string): string {
   return raw
     .trim()
     .toLowerCase()
     .replace(/[→⟶]|=>|-->|=/g, "->")
+    .replace(/[‐‑–—]/g, "-")
     .replace(/\s+/g, "")
     .replace(/^\(([a-z])\)\.?$/, "$1")
     .replace(/^([a-z])[.)]$/, "$1");

@@ -44,6 +44,7 @@ describe("normaliseName", () => {
     expect(normaliseName("(b)")).toBe("b");
     expect(normaliseName("b)")).toBe("b");
     expect(normaliseName("B.")).toBe("b");
+    expect(normaliseName("ClOx–NOx")).toBe("clox-nox");
   });
 });
 

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { QUESTION_TEMPLATES, type QuestionSpec, templateOf } from "@/lib/assessment";
+import { markAnswer, QUESTION_TEMPLATES, type QuestionSpec, templateOf } from "@/lib/assessment";
 import { clyMixingRatio } from "@/lib/assessment/templates";
 import { expectClose } from "../helpers/close";
 import { CLOX_CYCLE, fakeResult, NOX_CYCLE } from "./fakeAnalysis";
@@ -39,6 +39,31 @@ describe("question templates", () => {
     // invented rates: R5 = loss, R6 = 0.6·loss, so R6 is the slower step
     expect(built.value).toBe("R6");
     expect(built.accepted).toEqual(["b", "NO2 + O → NO + O2", "NO2 + O -> NO + O2"]);
+  });
+
+  test("the dominant family is accepted as its letter, its name or the text printed beside the letter", () => {
+    const base = at(30);
+    base.cycles.budget.byFamily.push({ family: "ClOx-NOx", oxLoss_cm3s: 1e12, fraction: 0.99 });
+    const built = templateOf("dominant-family").build({
+      ...ctx(base, { kind: "dominant-family" }),
+      families: ["Ox", "NOx", "ClOx", "ClOx-NOx"],
+    });
+    if (!built.ok) throw new Error(built.problem);
+    expect(built.value).toBe("ClOx-NOx");
+    const entry = {
+      variant: 1,
+      question: 1,
+      kind: "dominant-family" as const,
+      value: built.value,
+      display: "",
+      unit: "",
+      tolerance: { kind: "exact" as const },
+      accepted: built.accepted,
+      points: 1,
+    };
+    for (const g of ["d", "ClOx-NOx", "clox–nox", "ClOx–NOx (coupled)"])
+      expect(markAnswer(entry, g).status, g).toBe("correct");
+    expect(markAnswer(entry, "ClOx").status).toBe("incorrect");
   });
 
   test("a cycle question reports a problem when the cycle is absent instead of inventing an answer", () => {

@@ -32,13 +32,13 @@ export const dominantFamily: QuestionTemplate = {
       return { ok: false, problem: `${shares[0].family} and ${shares[1].family} remove nearly the same share` };
     const top = shares[0].family;
     const choices = lettered(withFamily(families, top).map((f) => ({ value: f, text: familyText(f) })));
-    const letter = choices.find((c) => c.value === top)?.letter as string;
+    const answer = choices.find((c) => c.value === top) as (typeof choices)[number];
     return {
       ok: true,
       text: `Which family of catalytic cycles removes the most odd oxygen (${oddOxygenText(base)}) at these conditions? Write the letter or the name of the family.`,
       choices,
       value: top,
-      accepted: [letter],
+      accepted: [answer.letter, answer.text],
     };
   },
 };
