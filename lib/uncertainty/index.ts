@@ -1,4 +1,5 @@
 export { type AnalysisUncertaintyOptions, analysisUncertainty } from "./analysisUncertainty";
+export { bandPolygons } from "./bandPolygons";
 export { type ProfileBand, profileShareBands, type ShareBand, shareBands } from "./bandSeries";
 export { defineOutputs, OUTPUT_DEFAULTS, type OutputOptions } from "./defineOutputs";
 export { evaluateOutputs } from "./evaluateOutputs";
