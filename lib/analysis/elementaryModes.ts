@@ -263,6 +263,82 @@ function elementaryInside(v: Float64Array, sp: Split): Float64Array | null {
 }
 
 /**
+ * Null space of dimension 2: the non-negative vectors N c form a pointed
+ * planar cone around v, whose two boundary rays are the only elementary
+ * vectors inside supp(v), and v is their unique positive combination (the
+ * greedy decomposition gives the same two). With c(θ) = cos θ ĉ_v + sin θ q̂
+ * (q̂ ⟂ ĉ_v), component i stays ≥ 0 for θ between atan2(α_i, −β_i) − π and
+ * atan2(α_i, −β_i), α_i = N_i·ĉ_v > 0, β_i = N_i·q̂; the rays are the tightest bounds.
+ */
+function decomposePlanar(flux: number[], sp: Split): { multiplicity: number[]; rate: number }[] | null {
+  const { n, basis } = sp;
+  // coordinates of v: the value at each basis vector's free column (1 there, 0 at the other's)
+  let f0 = -1;
+  let f1 = -1;
+  for (let i = 0; i < n; i++) {
+    if (basis[i] === 1 && basis[n + i] === 0 && f0 < 0) f0 = i;
+    else if (basis[n + i] === 1 && basis[i] === 0 && f1 < 0) f1 = i;
+  }
+  if (f0 < 0 || f1 < 0) return null;
+  const c0 = flux[f0];
+  const c1 = flux[f1];
+  const len = Math.hypot(c0, c1);
+  const p0 = c0 / len;
+  const p1 = c1 / len;
+  let hi = Math.PI;
+  let lo = -Math.PI;
+  for (let i = 0; i < n; i++) {
+    const a0 = basis[i];
+    const a1 = basis[n + i];
+    const alpha = a0 * p0 + a1 * p1;
+    const beta = -a0 * p1 + a1 * p0;
+    if (!(alpha > 0)) return null;
+    const up = Math.atan2(alpha, -beta);
+    hi = Math.min(hi, up);
+    lo = Math.max(lo, up - Math.PI);
+  }
+  const out: { multiplicity: number[]; rate: number }[] = [];
+  const rays: Float64Array[] = [];
+  for (const th of [hi, lo]) {
+    const e0 = Math.cos(th) * p0 - Math.sin(th) * p1;
+    const e1 = Math.cos(th) * p1 + Math.sin(th) * p0;
+    const x = new Float64Array(n);
+    let scale = 0;
+    for (let i = 0; i < n; i++) {
+      x[i] = e0 * basis[i] + e1 * basis[n + i];
+      scale = Math.max(scale, x[i]);
+    }
+    for (let i = 0; i < n; i++) if (!(x[i] > DEFAULTS.tolerance * 1e3 * scale)) x[i] = 0;
+    rays.push(x);
+  }
+  // v = α·r0 + β·r1, solved on the two free columns
+  const [r0, r1] = rays;
+  const det = r0[f0] * r1[f1] - r0[f1] * r1[f0];
+  if (!(Math.abs(det) > 0)) return null;
+  const alpha = (flux[f0] * r1[f1] - flux[f1] * r1[f0]) / det;
+  const beta = (r0[f0] * flux[f1] - r0[f1] * flux[f0]) / det;
+  let scale = 0;
+  for (const x of flux) scale = Math.max(scale, x);
+  for (const [r, coef] of [
+    [r0, alpha],
+    [r1, beta],
+  ] as const) {
+    if (!(coef > 0)) return null;
+    const ints = integerProportional(r);
+    if (!ints) return null;
+    let k = -1;
+    for (let i = 0; i < n; i++) if (ints[i] > 0 && (k < 0 || r[i] > r[k])) k = i;
+    out.push({ multiplicity: ints, rate: (coef * r[k]) / ints[k] });
+  }
+  // the two parts must give back the flux
+  for (let i = 0; i < n; i++) {
+    const back = out[0].rate * out[0].multiplicity[i] + out[1].rate * out[1].multiplicity[i];
+    if (Math.abs(back - flux[i]) > 1e-7 * scale) return null;
+  }
+  return out;
+}
+
+/**
  * Decomposes the flux vector `flux` (per entry of `columns`, molecules cm⁻³ s⁻¹
  * through each reaction) into elementary pathways: integer multiplicities
  * aligned with `columns` and a rate. Returns null when the decomposition fails
@@ -276,6 +352,10 @@ export function decomposeElementary(
   work: EliminationWork,
 ): { multiplicity: number[]; rate: number }[] | null {
   const sp = nullBasis(columns, nets, isRow, work);
+  if (sp.d === 2) {
+    const two = decomposePlanar(flux, sp);
+    if (two) return two;
+  }
   const out: { multiplicity: number[]; rate: number }[] = [];
   const v = Float64Array.from(flux);
   let scale = 0;

@@ -149,6 +149,37 @@ export function findPathways(
     });
   };
 
+  // Σ m_t·net(rx_t) in a dense scratch row, gathered sorted
+  const scratch = new Float64Array(nS);
+  const seen = new Uint8Array(nS);
+  const combineNets = (rx: number[], mx: number[]): SparseVector => {
+    const list: number[] = [];
+    for (let t = 0; t < rx.length; t++) {
+      const net = nets[rx[t]];
+      for (let q = 0; q < net.idx.length; q++) {
+        const sp = net.idx[q];
+        if (!seen[sp]) {
+          seen[sp] = 1;
+          list.push(sp);
+        }
+        scratch[sp] += mx[t] * net.val[q];
+      }
+    }
+    list.sort((x, y) => x - y);
+    const idx: number[] = [];
+    const val: number[] = [];
+    for (const sp of list) {
+      const v = snap(scratch[sp]);
+      scratch[sp] = 0;
+      seen[sp] = 0;
+      if (v !== 0) {
+        idx.push(sp);
+        val.push(v);
+      }
+    }
+    return { idx, val };
+  };
+
   let current = new Map<string, Work>();
   const add = (map: Map<string, Work>, w: Work) => {
     if (w.net.idx.length === 0) {
@@ -343,15 +374,19 @@ export function findPathways(
       for (const part of parts) {
         const rx: number[] = [];
         const mx: number[] = [];
-        let net: SparseVector = { idx: [], val: [] };
         part.multiplicity.forEach((m, t) => {
           if (m > 0) {
             rx.push(w.rx[t]);
             mx.push(m);
-            net = axpy(1, net, m, nets[w.rx[t]]);
           }
         });
-        add(next, { rx, mx, net, rate: part.rate, key: keyOf(rx, mx), elementary: true });
+        const key = keyOf(rx, mx);
+        const known = next.get(key);
+        if (known && part.rate >= fmin) {
+          known.rate += part.rate;
+          continue;
+        }
+        add(next, { rx, mx, net: known ? known.net : combineNets(rx, mx), rate: part.rate, key, elementary: true });
       }
     }
 
