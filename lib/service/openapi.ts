@@ -440,6 +440,30 @@ export const openApiDocument = {
       },
     },
     ...profilePaths,
+    "/api/analyses/{id}/uncertainty.csv": csv("Monte Carlo central value, median and 5–95 % range of each output"),
+    "/api/analyses/{id}/sensitivities.csv": csv("Sensitivity coefficients, one row per output and rate constant"),
+    "/api/uncertainty": {
+      post: {
+        summary:
+          "Start Monte Carlo ranges (and sensitivities) as a job: { analysis: AnalysisRequest } stores an analysis with result.uncertainty; { profileId, samples, seed?, sensitivity? } runs every level of a stored sweep",
+        responses: { 202: { description: "job status with statusUrl" }, ...errors(400, 404, 413) },
+      },
+    },
+    "/api/uncertainty/jobs/{id}": {
+      get: {
+        summary: "Status and progress of an uncertainty job; resultApiUrl when done",
+        parameters: [jobId],
+        responses: { 200: { description: "job status" }, ...errors(404) },
+      },
+    },
+    "/api/uncertainty/profiles/{id}": {
+      get: {
+        summary:
+          "A stored profile uncertainty record: per-level Monte Carlo results and family-share bands against altitude",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "record" }, ...errors(404) },
+      },
+    },
   },
   components: {
     parameters: {
@@ -569,6 +593,19 @@ export const openApiDocument = {
                 description: "pathway threshold, fraction of total Ox loss",
               },
               oxDefinition: { enum: ["standard", "extended"], default: "standard" },
+              uncertaintySamples: {
+                type: "integer",
+                minimum: 0,
+                maximum: 100000,
+                default: 0,
+                description: "Monte Carlo samples over the JPL rate-constant uncertainties (docs/uncertainty.md)",
+              },
+              uncertaintySeed: { type: "integer", minimum: 0, maximum: 4294967295, default: 1 },
+              sensitivity: {
+                type: "boolean",
+                default: false,
+                description: "normalised sensitivity coefficients d ln(output)/d ln(k) of the key outputs",
+              },
             },
           },
         },
