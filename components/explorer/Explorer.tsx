@@ -5,7 +5,6 @@
  * the state, keeps it in the URL, and recomputes through the analysis route.
  */
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { UncertaintyPanel } from "@/components/uncertainty";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "@/lib/engine/types";
 import { cycleHighlight } from "@/lib/viz/cycleHighlight";
 import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery";
@@ -328,7 +327,6 @@ export function Explorer(props: Props) {
           onInspectReaction={(id) => setViewPart({ select: `r:${id}` })}
         />
         <BudgetPanel budget={result?.cycles.budget ?? null} />
-        {result?.uncertainty && <UncertaintyPanel uncertainty={result.uncertainty} />}
       </div>
     </div>
   );
