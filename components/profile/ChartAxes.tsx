@@ -21,10 +21,10 @@ export function ChartAxes({ frame }: { frame: ChartFrame }) {
           </text>
         </g>
       ))}
-      {frame.xTicks.map((t) => (
+      {frame.xTicks.map((t, i) => (
         <g key={`x${t.label}${t.px}`}>
           <line x1={t.px} x2={t.px} y1={plot.top} y2={plot.bottom} stroke="#eeece8" />
-          <text x={t.px} y={plot.bottom + 13} textAnchor="middle">
+          <text x={t.px} y={plot.bottom + 13} textAnchor={i === frame.xTicks.length - 1 && i > 0 ? "end" : "middle"}>
             {t.label}
           </text>
         </g>

@@ -66,7 +66,8 @@ export function SideFields({
         </label>
         {demo ? (
           <p className="col-span-2 rounded bg-amber-50 px-2 py-1 text-[12px] text-amber-900" data-testid="demo-label">
-            Invented demo data, not a measurement. {profiles.find((p) => `demo:${p.id}` === value.source)?.note}
+            <strong>Invented demo data, not a measurement:</strong>{" "}
+            {profiles.find((p) => `demo:${p.id}` === value.source)?.note.replace(/^invented demo data:\s*/i, "")}
           </p>
         ) : null}
         {value.source === "csv" ? (
@@ -103,6 +104,7 @@ export function SideFields({
             </label>
             {csvStatus ? (
               <p
+                data-testid="csv-status"
                 role={csvStatus.ok ? "status" : "alert"}
                 className={`text-[12px] ${csvStatus.ok ? "text-emerald-800" : "text-red-800"}`}
               >

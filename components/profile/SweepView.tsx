@@ -76,7 +76,7 @@ export function SweepView({
         </p>
         {p.demo ? (
           <p className="rounded bg-amber-50 px-3 py-2 text-[13px] text-amber-900" data-testid="demo-notice">
-            Invented demo data, not a measurement: {p.note}
+            <strong>Invented demo data, not a measurement:</strong> {p.note.replace(/^invented demo data:\s*/i, "")}
           </p>
         ) : null}
         {result.warnings.length ? (

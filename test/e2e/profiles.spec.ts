@@ -51,12 +51,14 @@ test("a comparison of the two demo profiles shows both partitions, the differenc
 
 test("an uploaded CSV with a bad cell is refused with the row and column named", async ({ page }) => {
   await page.goto("/profiles");
-  await page.getByLabel("Profile", { exact: true }).selectOption("csv");
+  await page.getByRole("combobox", { name: /^Profile/ }).selectOption("csv");
   await page.getByLabel("or paste it").fill("altitude (km),T (K),p (hPa)\n20,216.65,55.29\n25,warm,25.49\n");
-  await expect(page.getByRole("alert")).toContainText('profile.csv row 3, column "T (K)": "warm" is not a number');
+  await expect(page.getByTestId("csv-status")).toContainText(
+    'profile.csv row 3, column "T (K)": "warm" is not a number',
+  );
   await page
     .getByLabel("or paste it")
     .fill("# title: my test\naltitude (km),T (K),p (hPa)\n20,216.65,55.29\n25,221.55,25.49\n");
-  await expect(page.getByRole("status")).toContainText("2 levels, 20–25 km");
+  await expect(page.getByTestId("csv-status")).toContainText("2 levels, 20–25 km");
   await page.screenshot({ path: "test-results/screenshots/profiles-upload.png", fullPage: true });
 });

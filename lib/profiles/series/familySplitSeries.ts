@@ -70,7 +70,9 @@ export function familySplitSeries(
       run.forEach((l, i) => {
         const w = hi[i] - lo[i];
         maxFraction = Math.max(maxFraction, w);
-        if (w > best.w) best = { w, x: x((lo[i] + hi[i]) / 2), y: y(l.altitude_km) };
+        // labels stay 10 px inside the plot
+        const yl = Math.min(plot.bottom - 10, Math.max(plot.top + 10, y(l.altitude_km)));
+        if (w > best.w) best = { w, x: x((lo[i] + hi[i]) / 2), y: yl };
       });
       // a single level is drawn as a thin band of ±0.3 km
       const ys =
