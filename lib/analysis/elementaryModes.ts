@@ -35,6 +35,8 @@ export interface EliminationWork {
   /** dense row-major matrix, grown on demand */
   a: Float64Array;
   pivots: Int32Array;
+  /** buffers of the current decomposition, grown on demand */
+  split: Split;
 }
 
 export function eliminationWork(nSpecies: number): EliminationWork {
@@ -44,6 +46,18 @@ export function eliminationWork(nSpecies: number): EliminationWork {
     epoch: 0,
     a: new Float64Array(1024),
     pivots: new Int32Array(64),
+    split: {
+      n: 0,
+      d: 0,
+      basis: new Float64Array(0),
+      r: new Float64Array(0),
+      rPivots: new Int32Array(0),
+      isPivot: new Uint8Array(0),
+      inside: new Uint8Array(0),
+      coords: new Float64Array(0),
+      cand: new Float64Array(0),
+      u: new Float64Array(0),
+    },
   };
 }
 
@@ -162,17 +176,35 @@ function nullBasis(
     for (let r = 0; r < rank; r++) basis[k * n + work.pivots[r]] = -work.a[r * n + f];
     k++;
   }
+  let raw = work.split;
+  if (raw.u.length < n || raw.r.length < n * d || raw.coords.length < d * d || raw.rPivots.length < d) {
+    const N = 2 * Math.max(n, 16);
+    raw = {
+      n: 0,
+      d: 0,
+      basis: raw.basis,
+      r: new Float64Array(N * N),
+      rPivots: new Int32Array(N),
+      isPivot: raw.isPivot,
+      inside: new Uint8Array(N),
+      coords: new Float64Array(N * N),
+      cand: new Float64Array(N),
+      u: new Float64Array(N),
+    };
+    work.split = raw;
+  }
+  // exact-length views of the reused buffers
   return {
     n,
     d,
     basis,
-    r: new Float64Array(n * d),
-    rPivots: new Int32Array(d),
+    r: raw.r.subarray(0, n * d),
+    rPivots: raw.rPivots.subarray(0, d),
     isPivot,
-    inside: new Uint8Array(n),
-    coords: new Float64Array(d * d),
-    cand: new Float64Array(n),
-    u: new Float64Array(n),
+    inside: raw.inside.subarray(0, n),
+    coords: raw.coords.subarray(0, d * d),
+    cand: raw.cand.subarray(0, n),
+    u: raw.u.subarray(0, n),
   };
 }
 

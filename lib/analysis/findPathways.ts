@@ -57,7 +57,12 @@ interface Work {
   overlap?: boolean;
 }
 
-const keyOf = (rx: number[], mx: number[]) => rx.map((r, i) => `${r}*${mx[i]}`).join(",");
+/** Merge key of a multiplicity vector: "reaction*multiplicity" pairs in reaction order. */
+function keyOf(rx: number[], mx: number[]): string {
+  let key = "";
+  for (let t = 0; t < rx.length; t++) key += t === 0 ? `${rx[t]}*${mx[t]}` : `,${rx[t]}*${mx[t]}`;
+  return key;
+}
 
 export function findPathways(
   mech: CompiledMechanism,
@@ -108,45 +113,19 @@ export function findPathways(
     }
   };
 
-  /**
-   * remove(rate, a·k + c·l) without building the joined pathway: the flux and
-   * the tracked sums are linear; the net is merged entry by entry so that its
-   * sign split per species is the joined pathway's.
-   */
-  const removePair = (rate: number, a: number, k: Work, c: number, l: Work, wk: number[], wl: number[]) => {
-    if (!(rate > 0)) return;
-    for (let t = 0; t < k.rx.length; t++) deletedFlux[k.rx[t]] += rate * a * k.mx[t];
-    for (let t = 0; t < l.rx.length; t++) deletedFlux[l.rx[t]] += rate * c * l.mx[t];
-    const x = k.net;
-    const y = l.net;
-    let i = 0;
-    let j = 0;
-    while (i < x.idx.length || j < y.idx.length) {
-      const xi = i < x.idx.length ? x.idx[i] : Number.POSITIVE_INFINITY;
-      const yj = j < y.idx.length ? y.idx[j] : Number.POSITIVE_INFINITY;
-      let s: number;
-      let v: number;
-      if (xi === yj) {
-        s = xi;
-        v = a * x.val[i++] + c * y.val[j++];
-      } else if (xi < yj) {
-        s = xi;
-        v = a * x.val[i++];
-      } else {
-        s = yj;
-        v = c * y.val[j++];
-      }
-      v = rate * snap(v);
-      if (v === 0) continue;
+  /** remove(coef, w) for the flux and the net, except species `skip` (where every join cancels exactly) and the tracked sums (counted per join). */
+  const removeLinear = (coef: number, w: Work, skip: number) => {
+    if (!(coef > 0)) return;
+    for (let t = 0; t < w.rx.length; t++) deletedFlux[w.rx[t]] += coef * w.mx[t];
+    const net = w.net;
+    for (let i = 0; i < net.idx.length; i++) {
+      const s = net.idx[i];
+      if (s === skip) continue;
+      const v = coef * net.val[i];
       deletedNet[s] += v;
       if (v > 0) deletedPos[s] += v;
       else deletedNeg[s] -= v;
     }
-    tracked.forEach(([name], t) => {
-      const dx = rate * (a * wk[t] + c * wl[t]);
-      if (dx > 0) deletedTracked[name].produced_cm3s += dx;
-      else deletedTracked[name].destroyed_cm3s -= dx;
-    });
   };
 
   // Σ m_t·net(rx_t) in a dense scratch row, gathered sorted
@@ -215,6 +194,8 @@ export function findPathways(
     .sort((x, y) => x.tau - y.tau || x.i - y.i);
 
   const processed = new Uint8Array(nS);
+  const candidate = new Uint8Array(nS);
+  for (const o of order) candidate[o.i] = 1;
   const work = eliminationWork(nS);
   // species touched by the first parent, for the two-parent test (stamp = current epoch)
   const touched = new Int32Array(nS);
@@ -277,10 +258,64 @@ export function findPathways(
     const maxOf = (w: Work) => w.mx.reduce((x, y) => Math.max(x, y), 0);
     const consumerSums = consumers.map(sums);
     const consumerMax = consumers.map(maxOf);
+    // Joins deleted before they are built: their flux and net are linear in the parents, so each parent's share is
+    // summed and removed once; only at branching points still to come, where one parent produces what the other
+    // consumes, does the joined net differ from the sum of the parts in its sign split (corrected per join).
+    const future = (w: Work): SparseVector => {
+      const idx: number[] = [];
+      const val: number[] = [];
+      for (let t = 0; t < w.net.idx.length; t++) {
+        const sp = w.net.idx[t];
+        if (candidate[sp] === 1 && processed[sp] === 0) {
+          idx.push(sp);
+          val.push(w.net.val[t]);
+        }
+      }
+      return { idx, val };
+    };
+    const consumerFuture = consumers.map(future);
+    const shareK = new Float64Array(producers.length);
+    const shareL = new Float64Array(consumers.length);
+    const removeJoin = (
+      rate: number,
+      a: number,
+      ik: number,
+      kf: SparseVector,
+      kSums: number[],
+      c: number,
+      il: number,
+    ) => {
+      if (!(rate > 0)) return;
+      shareK[ik] += rate * a;
+      shareL[il] += rate * c;
+      const lf = consumerFuture[il];
+      let i = 0;
+      let j = 0;
+      while (i < kf.idx.length && j < lf.idx.length) {
+        if (kf.idx[i] < lf.idx[j]) i++;
+        else if (kf.idx[i] > lf.idx[j]) j++;
+        else {
+          const x = a * kf.val[i++];
+          const y = c * lf.val[j];
+          const sp = lf.idx[j++];
+          if (x > 0 === y > 0) continue;
+          const m = rate * Math.min(Math.abs(x), Math.abs(y));
+          deletedPos[sp] -= m;
+          deletedNeg[sp] -= m;
+        }
+      }
+      const wl = consumerSums[il];
+      tracked.forEach(([name], t) => {
+        const dx = rate * (a * kSums[t] + c * wl[t]);
+        if (dx > 0) deletedTracked[name].produced_cm3s += dx;
+        else deletedTracked[name].destroyed_cm3s -= dx;
+      });
+    };
     producers.forEach((k, ik) => {
       const fp = k.rate * (pq[ik][0] / pq[ik][1]);
       const kSums = sums(k);
       const kMax = maxOf(k);
+      const kFuture = future(k);
       consumers.forEach((l, il) => {
         const fd = l.rate * (dq[il][0] / dq[il][1]);
         const { a, c, L } = matchingMultipliers(pq[ik], dq[il]);
@@ -288,7 +323,7 @@ export function findPathways(
         // rate × (largest multiplicity) does not change when the vector is made coprime, and bounds the rate of
         // every elementary part: below f_min the joined pathway is deleted before it is built.
         if (rate * (a * kMax + c * consumerMax[il]) < fmin) {
-          removePair(rate, a, k, c, l, kSums, consumerSums[il]);
+          removeJoin(rate, a, ik, kFuture, kSums, c, il);
           return;
         }
         // merged multiplicities a·x_k + c·x_l, made coprime
@@ -327,6 +362,8 @@ export function findPathways(
       else remove((k.rate * (T - D)) / T, k);
       remove((k.rate * dD) / T, k);
     });
+    producers.forEach((k, ik) => removeLinear(shareK[ik], k, b));
+    consumers.forEach((l, il) => removeLinear(shareL[il], l, b));
     for (const l of consumers) {
       if (T - P > BALANCE_TOLERANCE * T) add(next, { ...l, rate: (l.rate * (T - P)) / T });
       else remove((l.rate * (T - P)) / T, l);
