@@ -61,14 +61,14 @@ export function rankAgainstAltitude(
 ): { parameters: { id: string; label: string }[]; altitude_km: number[]; coefficients: (number | null)[][] } {
   const chosen = new Map<string, string>();
   for (const l of levels) {
-    if (!l.report || l.report.status !== "ok" || !l.report.outputs.some((o) => o.key === outputKey)) continue;
+    if (l.report?.status !== "ok" || !l.report.outputs.some((o) => o.key === outputKey)) continue;
     for (const row of rankSensitivities(l.report, outputKey, options)) chosen.set(row.parameter, row.label);
   }
   const parameters = [...chosen].map(([id, label]) => ({ id, label }));
   const coefficients = parameters.map(({ id }) =>
     levels.map((l) => {
       const rep = l.report;
-      if (!rep || rep.status !== "ok") return null;
+      if (rep?.status !== "ok") return null;
       const i = rep.outputs.findIndex((o) => o.key === outputKey);
       const q = rep.parameters.findIndex((p) => p.id === id);
       return i < 0 || q < 0 ? null : rep.coefficients[i][q];
