@@ -216,7 +216,7 @@ export function Explorer(props: Props) {
           onInspect={(id) => setViewPart({ select: id })}
           status={
             ss
-              ? `${err ? "Showing the last analysis that succeeded: " : ""}${result?.mechanism.title} · ${result?.condition.altitude_km} km · T ${formatNumber(result?.condition.T_K, 4)} K · p ${formatNumber(result?.condition.p_hPa, 3)} hPa · ${ss.status === "converged" ? `converged in ${ss.iterations} iterations` : ss.status}`
+              ? `${err ? "Showing the last analysis that succeeded: " : ""}${result?.condition.altitude_km} km · T ${formatNumber(result?.condition.T_K, 4)} K · p ${formatNumber(result?.condition.p_hPa, 3)} hPa · ${ss.status === "converged" ? `converged in ${ss.iterations} iterations` : ss.status}`
               : null
           }
         />

@@ -249,8 +249,8 @@ test("a valid mechanism upload is checked, chosen and analysed", async ({ page }
   await page.getByLabel("Mechanism document (YAML or JSON)").fill(doc);
   await page.getByRole("button", { name: "Check and use" }).click();
   await expect(page.getByRole("dialog")).toBeHidden();
-  await expect(page.getByTestId("status")).toContainText("Invented three-reaction upload", { timeout: 60_000 });
-  await expect(page.getByTestId("status")).toContainText("converged");
+  await expect(page.locator("#mechanism option:checked")).toHaveText("Invented three-reaction upload");
+  await expect(page.getByTestId("status")).toContainText("converged", { timeout: 60_000 });
   await expect(page.getByTestId("cycle").first()).toContainText("O + O3 -> 2 O2");
   await expect(page).not.toHaveURL(/m=oxygen(&|$)/);
 });
