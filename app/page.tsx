@@ -1,8 +1,31 @@
 import Link from "next/link";
 
+const TOOLS = [
+  {
+    href: "/explore",
+    title: "Explorer",
+    text: "One place and time: the steady state, the reaction network coloured by flux and by ozone destroyed, the cycles and the odd-oxygen budget.",
+  },
+  {
+    href: "/profiles",
+    title: "Profiles",
+    text: "Sweep an altitude profile and see how the loss is split among the families at every level.",
+  },
+  {
+    href: "/compare",
+    title: "Compare",
+    text: "Two profiles, mechanisms or loadings side by side, with the difference and the cycles that explain it.",
+  },
+  {
+    href: "/assess",
+    title: "Assessments",
+    text: "For instructors: question variants with answer keys computed by the same engine, printable sheets and marking.",
+  },
+] as const;
+
 export default function Home() {
   return (
-    <div className="mx-auto max-w-3xl px-4 py-16">
+    <div className="mx-auto max-w-4xl px-4 py-14">
       <h1 className="text-3xl font-semibold tracking-tight">Ozone Loss Cycles</h1>
       <p className="mt-4 text-lg leading-relaxed text-slate-700">
         Load a chemical mechanism, pick a place and time in the stratosphere, and this tool computes the photochemical
@@ -18,6 +41,16 @@ export default function Home() {
           Open the explorer
         </Link>
       </p>
+      <ul className="mt-10 grid gap-4 sm:grid-cols-2">
+        {TOOLS.map((t) => (
+          <li key={t.href} className="rounded border border-stone-300 bg-white p-4">
+            <Link href={t.href} className="font-medium text-slate-900 underline-offset-2 hover:underline">
+              {t.title}
+            </Link>
+            <p className="mt-1 text-sm text-slate-600">{t.text}</p>
+          </li>
+        ))}
+      </ul>
     </div>
   );
 }
