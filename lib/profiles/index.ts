@@ -27,6 +27,7 @@ export {
   type SweepExecutor,
   type SweepMeta,
   type SweepProgress,
+  useParallel,
 } from "./runSweep";
 export { splitChunks } from "./splitChunks";
 export { STANDARD_PROFILE_ID, standardProfile } from "./standardProfile";

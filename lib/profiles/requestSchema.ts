@@ -45,7 +45,7 @@ export const sweepRequestSchema = z
       .object({
         fminRelative: finite.refine((v) => v > 0 && v < 0.5, "expected a fraction between 0 and 0.5").optional(),
         oxDefinition: z.enum(["standard", "extended"]).optional(),
-        parallel: z.enum(["auto", "sequential"]).optional(),
+        parallel: z.enum(["auto", "parallel", "sequential"]).optional(),
         maxColumnPasses: z.number().int().min(1).max(10).optional(),
         columnTolerance: finite.refine((v) => v > 0 && v < 1, "expected a fraction between 0 and 1").optional(),
       })

@@ -72,10 +72,13 @@ export type SweepCondition = Omit<ConditionInput, "altitude_km" | "T_K" | "p_hPa
 
 export interface SweepOptions extends AnalysisOptions {
   /**
-   * "auto" (default): contiguous chunks over the pool's workers; "sequential":
-   * one warm-started chain from the top down (one worker at a time).
+   * "parallel": one warm-started chain per pool worker (segments worked from
+   * both ends); "sequential": one chain from the top down; "auto" (default):
+   * parallel for the 24-hour mode, sequential for the instantaneous one (on
+   * the 2-core machine the instantaneous sweep took the same wall time either
+   * way and twice the CPU in parallel; see bench/cases/profiles.ts).
    */
-  parallel?: "auto" | "sequential";
+  parallel?: "auto" | "parallel" | "sequential";
   /** with O3 solved: most passes of (solve every level → recompute the overhead O3 column); default 3 */
   maxColumnPasses?: number;
   /** with O3 solved: stop when no level's overhead column changed by more than this fraction; default 0.01 */

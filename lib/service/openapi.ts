@@ -205,9 +205,10 @@ const profileSchemas = {
           fminRelative: { type: "number", default: 1e-4 },
           oxDefinition: { enum: ["standard", "extended"], default: "standard" },
           parallel: {
-            enum: ["auto", "sequential"],
+            enum: ["auto", "parallel", "sequential"],
             default: "auto",
-            description: "auto: one contiguous chunk per engine worker",
+            description:
+              "parallel: one warm-started chain per engine worker; sequential: one chain from the top down; auto: parallel for the 24-hour mode only",
           },
           maxColumnPasses: {
             type: "integer",

@@ -7,7 +7,7 @@ import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { analyseLevel } from "@/lib/profiles/analyseLevel";
 import { planSweep } from "@/lib/profiles/planSweep";
 import { runLevelBatch } from "@/lib/profiles/runLevelBatch";
-import { inlineExecutor, runSweep, type SweepExecutor } from "@/lib/profiles/runSweep";
+import { inlineExecutor, runSweep, type SweepExecutor, useParallel } from "@/lib/profiles/runSweep";
 import { standardProfile } from "@/lib/profiles/standardProfile";
 import type { SweepLevel, SweepRequest, SweepResult } from "@/lib/profiles/types";
 import { expectClose } from "../helpers/close";
@@ -26,7 +26,7 @@ function setup(id: string) {
       planSweep({ mechanismId: id, profile: { kind: "standard" }, ...request }, standardProfile(), mech),
       executor(workers),
       { ...META, mechanism: ref },
-      options,
+      { parallel: "parallel" as const, ...options },
     );
   return { mech, ref, sweep, executor };
 }
@@ -169,6 +169,15 @@ describe("runSweep", () => {
     });
     // columns grow downwards
     for (let i = 1; i < z.length; i++) expect(col[i - 1]).toBeGreaterThan(col[i]);
+  });
+});
+
+describe("useParallel", () => {
+  it("runs chains side by side for the 24-hour mode and when asked, one chain otherwise", () => {
+    expect(useParallel("auto", "diurnal")).toBe(true);
+    expect(useParallel("auto", "instantaneous")).toBe(false);
+    expect(useParallel("parallel", "instantaneous")).toBe(true);
+    expect(useParallel("sequential", "diurnal")).toBe(false);
   });
 });
 
