@@ -27,22 +27,22 @@ const mech = {
 };
 
 describe("the SQLite store", () => {
-  it("creates its directory and runs the migrations on first open", () => {
+  it("creates its directory and runs the migrations on first open", async () => {
     const s = openSqliteStore(tempFile());
-    expect(s.listMechanisms(10)).toEqual([]);
-    s.close();
+    expect(await s.listMechanisms(10)).toEqual([]);
+    await s.close();
   });
 
-  it("stores a mechanism once by content id and keeps the first copy", () => {
+  it("stores a mechanism once by content id and keeps the first copy", async () => {
     const s = openSqliteStore(tempFile());
-    expect(s.putMechanism(mech)).toBe(true);
-    expect(s.putMechanism({ ...mech, title: "other" })).toBe(false);
-    expect(s.getMechanism(mech.id)?.title).toBe("t");
-    expect(s.getMechanism("m-missing")).toBeNull();
-    s.close();
+    expect(await s.putMechanism(mech)).toBe(true);
+    expect(await s.putMechanism({ ...mech, title: "other" })).toBe(false);
+    expect((await s.getMechanism(mech.id))?.title).toBe("t");
+    expect(await s.getMechanism("m-missing")).toBeNull();
+    await s.close();
   });
 
-  it("keeps analyses immutable: a second write under the same id is refused", () => {
+  it("keeps analyses immutable: a second write under the same id is refused", async () => {
     const s = openSqliteStore(tempFile());
     const a = {
       id: newRecordId(),
@@ -52,23 +52,23 @@ describe("the SQLite store", () => {
       result: { b: [1, 2] },
       createdAt: "x",
     };
-    s.putAnalysis(a);
-    expect(() => s.putAnalysis({ ...a, result: { b: [3] } })).toThrow();
-    expect(s.getAnalysis(a.id)?.result).toEqual({ b: [1, 2] });
-    s.close();
+    await s.putAnalysis(a);
+    await expect(s.putAnalysis({ ...a, result: { b: [3] } })).rejects.toThrow();
+    expect((await s.getAnalysis(a.id))?.result).toEqual({ b: [1, 2] });
+    await s.close();
   });
 
-  it("keeps what it stored across a close and reopen", () => {
+  it("keeps what it stored across a close and reopen", async () => {
     const file = tempFile();
     const s = openSqliteStore(file);
-    s.putMechanism(mech);
-    s.putRecord({ kind: "profile", id: "p1", engineVersion: "0.1.0", body: { levels: [1] }, createdAt: "x" });
-    s.close();
+    await s.putMechanism(mech);
+    await s.putRecord({ kind: "profile", id: "p1", engineVersion: "0.1.0", body: { levels: [1] }, createdAt: "x" });
+    await s.close();
     const again = openSqliteStore(file);
-    expect(again.getMechanism(mech.id)?.text).toBe("title: t");
-    expect(again.getRecord("profile", "p1")?.body).toEqual({ levels: [1] });
-    expect(again.getRecord("assessment", "p1")).toBeNull();
-    again.close();
+    expect((await again.getMechanism(mech.id))?.text).toBe("title: t");
+    expect((await again.getRecord("profile", "p1"))?.body).toEqual({ levels: [1] });
+    expect(await again.getRecord("assessment", "p1")).toBeNull();
+    await again.close();
   });
 });
 

@@ -1,0 +1,100 @@
+// `npm run worker`: a queue worker of the BullMQ job back end. Start any
+// number, on any machines that reach the same Redis (REDIS_URL) and the same
+// database (DATABASE_URL; SQLite under OZONE_DATA_DIR only when every process
+// runs on one machine). Each takes job orchestrations and tasks (level
+// batches, sample blocks) from Redis and computes tasks in its own engine
+// worker threads (OZONE_WORKER_TASKS, default: the cores). Stops cleanly on
+// SIGTERM/SIGINT: entries it had not finished are taken back by the others.
+import { existsSync, renameSync, rmSync } from "node:fs";
+import path from "node:path";
+import { pathToFileURL } from "node:url";
+import { build } from "esbuild";
+
+if (!process.env.REDIS_URL) {
+  console.error("npm run worker: set REDIS_URL (redis://host:port) to the Redis that the web instances use");
+  process.exit(2);
+}
+
+const root = process.cwd();
+const banner = { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" };
+// "server-only" guards modules against client bundles; in a plain Node process it has nothing to guard
+const serverOnly = {
+  name: "server-only",
+  setup(b) {
+    b.onResolve({ filter: /^server-only$/ }, () => ({ path: "server-only", namespace: "empty" }));
+    b.onLoad({ filter: /.*/, namespace: "empty" }, () => ({ contents: "", loader: "js" }));
+  },
+};
+
+// the engine's worker-thread bundle, built when missing (to a temporary name first: several workers may start at once)
+const engineBundle = path.join(root, ".engine", "worker.mjs");
+if (!existsSync(engineBundle)) {
+  const tmp = `${engineBundle}.${process.pid}.tmp.mjs`;
+  await build({
+    entryPoints: ["lib/engine/worker-entry.ts"],
+    outfile: tmp,
+    bundle: true,
+    platform: "node",
+    format: "esm",
+    target: "node20",
+    logLevel: "warning",
+    banner,
+  });
+  renameSync(tmp, engineBundle);
+}
+
+const out = path.join(root, ".engine", `queue-worker.${process.pid}.mjs`);
+await build({
+  stdin: {
+    contents: `
+      import { EnginePool, POOL_DEFAULTS } from "./lib/engine/pool";
+      import { bullmqConfigFromEnv } from "./lib/jobs/bullmqConfig";
+      import { startQueueWorker } from "./lib/jobs/bullmqWorker";
+      import { JOB_HANDLERS } from "./lib/service/jobs";
+      export async function main() {
+        const config = bullmqConfigFromEnv();
+        const pool = new EnginePool({ ...POOL_DEFAULTS, size: config.workerTasks });
+        const worker = await startQueueWorker(config, { handlers: JOB_HANDLERS, runTask: (t) => pool.run(t) });
+        return { worker, config, close: async () => { await worker.close(); await pool.close(); } };
+      }
+    `,
+    resolveDir: root,
+    loader: "ts",
+    sourcefile: "queue-worker-entry.ts",
+  },
+  outfile: out,
+  bundle: true,
+  platform: "node",
+  format: "esm",
+  target: "node20",
+  packages: "external",
+  logLevel: "warning",
+  banner,
+  plugins: [serverOnly],
+});
+
+let running = null;
+let stopping = false;
+async function stop(code) {
+  if (stopping) return;
+  stopping = true;
+  try {
+    await running?.close();
+  } finally {
+    rmSync(out, { force: true });
+    process.exit(code);
+  }
+}
+for (const sig of ["SIGINT", "SIGTERM"]) process.on(sig, () => void stop(0));
+
+try {
+  const { main } = await import(pathToFileURL(out).href);
+  running = await main();
+  const c = running.config;
+  console.log(
+    `queue worker ${running.worker.name}: ${c.workerTasks} task thread(s), ${c.workerJobs} job(s) at once, Redis at ${new URL(c.url).host}, store ${process.env.DATABASE_URL ? "PostgreSQL" : "SQLite"}`,
+  );
+} catch (e) {
+  console.error(`queue worker failed to start: ${e instanceof Error ? e.message : e}`);
+  await stop(1);
+}

@@ -1,0 +1,276 @@
+// A profile sweep over the BullMQ back end with real worker processes
+// (`npm run worker`), against the embedded pool's sweep of the same request:
+// equal results, a worker killed mid-sweep, a web instance restarted
+// mid-job, cancellation, and the server-sent events the browser reads.
+import { execFileSync } from "node:child_process";
+import { existsSync } from "node:fs";
+import { type Job, Queue } from "bullmq";
+import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import { POOL_DEFAULTS } from "@/lib/engine/pool";
+import { BullmqJobBackend } from "@/lib/jobs/bullmqBackend";
+import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "@/lib/jobs/bullmqConfig";
+import { EmbeddedJobBackend } from "@/lib/jobs/embeddedBackend";
+import { isFinal, type JobBackend, type JobStatus } from "@/lib/jobs/types";
+import type { SweepRequest, SweepResult } from "@/lib/profiles/types";
+import { JOB_HANDLERS } from "@/lib/service/jobs";
+import { getProfileRecord, validateSweep } from "@/lib/service/profiles";
+import { expectClose } from "../helpers/close";
+import { redisUrl, startWorker, type WorkerProcess } from "./services";
+
+// 26 levels of the reference mechanism, O3 held (one pass): one task per level. One warm-started
+// chain ("sequential") makes the result independent of timing; with several chains ("auto") the
+// chains of a segment meet where their speed puts them, so the level where they meet can be
+// warm-started from either side and differ in its last digits between any two runs (on either back end).
+const REQUEST = {
+  mechanismId: "reference",
+  profile: { kind: "standard" },
+  grid: { from_km: 10, to_km: 60, step_km: 2 },
+  options: { parallel: "sequential" },
+};
+const PARALLEL_REQUEST = { ...REQUEST, options: { parallel: "auto" } };
+const LEVELS = 26;
+
+let prefixCount = 0;
+/** A configuration with its own Redis key prefix, so that tests do not see each other's queues. */
+function freshConfig(): BullmqConfig {
+  return {
+    ...bullmqConfigFromEnv({ REDIS_URL: redisUrl() } as unknown as NodeJS.ProcessEnv),
+    prefix: `ozt${process.pid}x${++prefixCount}`,
+    lock_ms: 2000,
+    backoff_ms: 200,
+    parallel: POOL_DEFAULTS.size,
+  };
+}
+
+const workerEnv = (c: BullmqConfig): Record<string, string> => ({
+  REDIS_URL: c.url,
+  OZONE_QUEUE_PREFIX: c.prefix,
+  OZONE_QUEUE_LOCK_MS: String(c.lock_ms),
+  OZONE_QUEUE_PARALLEL: String(c.parallel),
+  OZONE_WORKER_TASKS: "1",
+});
+
+const workers: WorkerProcess[] = [];
+const closers: (() => Promise<void>)[] = [];
+afterEach(async () => {
+  for (const c of closers.splice(0).reverse()) await c().catch(() => {});
+  await Promise.all(workers.splice(0).map((w) => w.stop()));
+});
+
+async function startWorkers(c: BullmqConfig, n: number): Promise<WorkerProcess[]> {
+  const started = await Promise.all(Array.from({ length: n }, () => startWorker(workerEnv(c))));
+  workers.push(...started);
+  return started;
+}
+
+function backendFor(c: BullmqConfig): BullmqJobBackend {
+  const b = new BullmqJobBackend(c, { kinds: Object.keys(JOB_HANDLERS), poll_ms: 250 });
+  closers.push(() => b.close());
+  return b;
+}
+
+function tasksQueue(c: BullmqConfig): Queue {
+  const q = new Queue(TASKS_QUEUE, { connection: connect(c), prefix: c.prefix });
+  closers.push(() => q.close());
+  return q;
+}
+
+/** Resolves with every status `watch` reports, once the job is final. */
+function untilFinal(b: JobBackend, id: string, timeout_ms = 180_000): Promise<JobStatus[]> {
+  return new Promise((resolve, reject) => {
+    const seen: JobStatus[] = [];
+    const timer = setTimeout(() => {
+      stop();
+      reject(new Error(`job ${id} not final after ${timeout_ms / 1000} s; last: ${JSON.stringify(seen.at(-1))}`));
+    }, timeout_ms);
+    const stop = b.watch(id, (s) => {
+      seen.push(s);
+      if (isFinal(s.state)) {
+        clearTimeout(timer);
+        queueMicrotask(() => stop());
+        resolve(seen);
+      }
+    });
+  });
+}
+
+async function poll<T>(what: string, f: () => Promise<T | null | undefined | false>, timeout_ms = 120_000) {
+  const end = Date.now() + timeout_ms;
+  while (Date.now() < end) {
+    const v = await f();
+    if (v) return v;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`timed out waiting for ${what}`);
+}
+
+/** The result without wall-clock times, which differ between any two runs. */
+function withoutTimes(r: SweepResult) {
+  return JSON.parse(
+    JSON.stringify(r, (k, v) => (k === "elapsed_ms" || k === "wall_ms" || k === "compute_ms" ? undefined : v)),
+  );
+}
+
+async function resultOf(s: JobStatus): Promise<SweepResult> {
+  expect(s.state).toBe("done");
+  expect(s.resultKind).toBe("profile");
+  return (await getProfileRecord(s.resultId as string)).body.result;
+}
+
+let request: SweepRequest;
+let embedded: SweepResult;
+let parallelRequest: SweepRequest;
+let embeddedParallel: SweepResult;
+
+async function runEmbedded(r: SweepRequest): Promise<SweepResult> {
+  const b = new EmbeddedJobBackend(JOB_HANDLERS);
+  const first = await b.submit("profile-sweep", r);
+  const statuses = await untilFinal(b, first.id);
+  const result = await resultOf(statuses.at(-1) as JobStatus);
+  await b.close();
+  return result;
+}
+
+beforeAll(async () => {
+  if (!existsSync(POOL_DEFAULTS.script)) {
+    execFileSync(process.execPath, ["scripts/engine-bundle.mjs"], { stdio: "inherit" });
+  }
+  request = await validateSweep(REQUEST);
+  parallelRequest = await validateSweep(PARALLEL_REQUEST);
+  embedded = await runEmbedded(request);
+  embeddedParallel = await runEmbedded(parallelRequest);
+  expect(embedded.levels.length).toBe(LEVELS);
+  expect(embedded.levels.every((l) => l.status === "converged")).toBe(true);
+});
+
+afterAll(async () => {
+  const { getStore } = await import("@/lib/store");
+  await getStore().close();
+});
+
+describe("a profile sweep on the BullMQ back end", () => {
+  it("gives over two worker processes exactly the embedded pool's result, its tasks shared by both", async () => {
+    const c = freshConfig();
+    const [a, b] = await startWorkers(c, 2);
+    const backend = backendFor(c);
+    const job = await backend.submit("profile-sweep", request);
+    expect(job.state).toBe("queued");
+    const statuses = await untilFinal(backend, job.id);
+    const last = statuses.at(-1) as JobStatus;
+    expect(withoutTimes(await resultOf(last))).toEqual(withoutTimes(embedded));
+    expect(last.done).toBe(LEVELS);
+    expect(last.total).toBe(LEVELS);
+    // progress arrived on the way, never going back
+    const running = statuses.filter((s) => s.state === "running");
+    expect(running.length).toBeGreaterThan(0);
+    for (let i = 1; i < statuses.length; i++) expect(statuses[i].done).toBeGreaterThanOrEqual(statuses[i - 1].done);
+    const tasks = (await tasksQueue(c).getCompleted(0, -1)) as Job[];
+    expect(tasks.length).toBe(LEVELS);
+    expect(new Set(tasks.map((t) => t.processedBy))).toEqual(new Set([a.name, b.name]));
+  });
+
+  it("runs a sweep's chains side by side on two workers and agrees with the embedded pool to solver tolerance", async () => {
+    const c = freshConfig();
+    await startWorkers(c, 2);
+    const backend = backendFor(c);
+    const job = await backend.submit("profile-sweep", parallelRequest);
+    const q = tasksQueue(c);
+    // both workers compute at the same moment at least once
+    await poll("two tasks computed at once", async () => (await q.getActiveCount()) >= 2);
+    const last = (await untilFinal(backend, job.id)).at(-1) as JobStatus;
+    const result = await resultOf(last);
+    expect(result.levels.map((l) => l.altitude_km)).toEqual(embeddedParallel.levels.map((l) => l.altitude_km));
+    result.levels.forEach((l, i) => {
+      const e = embeddedParallel.levels[i];
+      expect(l.status).toBe("converged");
+      // solver tolerance 1e-10 on the residual (lib/solver); budgets agree far tighter than 1e-8
+      expectClose(
+        l.budget?.loss_cm3s as number,
+        e.budget?.loss_cm3s as number,
+        { rel: 1e-8 },
+        `${l.altitude_km} km Ox loss`,
+      );
+      for (const [k, sp] of l.species.entries()) {
+        const want = e.species[k].numberDensity_cm3;
+        expectClose(sp.numberDensity_cm3, want, { rel: 1e-8, abs: 1e-8 }, `${l.altitude_km} km [${sp.id}]`);
+      }
+    });
+  });
+
+  it("loses no level when a worker is killed mid-sweep: its task is retried, the sweep completes, nothing counts twice", async () => {
+    const c = freshConfig();
+    const [victim] = await startWorkers(c, 2);
+    const backend = backendFor(c);
+    const q = tasksQueue(c);
+    const job = await backend.submit("profile-sweep", request);
+    // kill the victim while it computes a task, after a few levels are done
+    const taken = (await poll("a task running on the victim", async () => {
+      const s = await backend.status(job.id);
+      if (!s || s.done < 3) return null;
+      const active = (await q.getActive(0, -1)) as Job[];
+      return active.find((t) => t.processedBy === victim.name) ?? null;
+    })) as Job;
+    await victim.kill();
+    const statuses = await untilFinal(backend, job.id);
+    const last = statuses.at(-1) as JobStatus;
+    const result = await resultOf(last);
+    expect(withoutTimes(result)).toEqual(withoutTimes(embedded));
+    expect(last.done).toBe(LEVELS);
+    expect(last.total).toBe(LEVELS);
+    expect(new Set(result.levels.map((l) => l.altitude_km)).size).toBe(LEVELS);
+    // the task the victim held ran again elsewhere; each task has one entry and one result
+    const retried = (await q.getJob(taken.id as string)) as Job;
+    expect(await retried.getState()).toBe("completed");
+    expect(retried.attemptsStarted + retried.stalledCounter).toBeGreaterThanOrEqual(2);
+    expect(retried.processedBy).not.toBe(victim.name);
+    const tasks = (await q.getCompleted(0, -1)) as Job[];
+    expect(tasks.length).toBe(LEVELS);
+    expect(new Set(tasks.map((t) => t.id)).size).toBe(LEVELS);
+  });
+
+  it("shows a restarted web instance the job's progress and result", async () => {
+    const c = freshConfig();
+    await startWorkers(c, 2);
+    const before = new BullmqJobBackend(c, { kinds: Object.keys(JOB_HANDLERS), poll_ms: 250 });
+    const job = await before.submit("profile-sweep", request);
+    const seen = (await poll("progress", async () => {
+      const s = await before.status(job.id);
+      return s && s.state === "running" && s.done >= 2 ? s : null;
+    })) as JobStatus;
+    await before.close(); // the web instance goes away mid-job
+    const after = backendFor(c);
+    const now = (await after.status(job.id)) as JobStatus;
+    expect(now.id).toBe(job.id);
+    expect(now.createdAt).toBe(job.createdAt);
+    expect(now.done).toBeGreaterThanOrEqual(seen.done);
+    expect(now.total).toBe(LEVELS);
+    const last = (await untilFinal(after, job.id)).at(-1) as JobStatus;
+    expect(withoutTimes(await resultOf(last))).toEqual(withoutTimes(embedded));
+  });
+
+  it("cancels a running job: the status says so at once and stays so, and the rest of its tasks are not computed", async () => {
+    const c = freshConfig();
+    await startWorkers(c, 1);
+    const backend = backendFor(c);
+    const job = await backend.submit("profile-sweep", request);
+    await poll("a running job", async () => (await backend.status(job.id))?.state === "running");
+    const cancelled = (await backend.cancel(job.id)) as JobStatus;
+    expect(cancelled.state).toBe("cancelled");
+    await poll("the worker to give the job up", async () => {
+      const [j] = await new Queue("jobs", { connection: connect(c), prefix: c.prefix }).getJobs(["failed"]);
+      return j?.id === job.id;
+    });
+    const s = (await backend.status(job.id)) as JobStatus;
+    expect(s.state).toBe("cancelled");
+    expect(s.resultId).toBeUndefined();
+    const computed = ((await tasksQueue(c).getCompleted(0, -1)) as Job[]).filter((t) => t.returnvalue !== null);
+    expect(computed.length).toBeLessThan(LEVELS);
+  });
+
+  it("throws if asked for a job kind no worker handles, and knows no unknown job id", async () => {
+    const backend = backendFor(freshConfig());
+    await expect(backend.submit("no-such-kind", {})).rejects.toThrow(/no job handler for kind "no-such-kind"/);
+    expect(await backend.status("AAAAAAAAAAAAAAAA")).toBeNull();
+    expect(await backend.cancel("AAAAAAAAAAAAAAAA")).toBeNull();
+  });
+});
