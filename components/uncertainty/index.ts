@@ -1,5 +1,10 @@
+export { AnalysisUncertaintyRunner } from "./AnalysisUncertaintyRunner";
+export { JobBar } from "./JobBar";
 export { ProfileBands } from "./ProfileBands";
+export { ProfileShareBandsChart } from "./ProfileShareBandsChart";
+export { ProfileUncertaintyRunner } from "./ProfileUncertaintyRunner";
 export { RangeTable } from "./RangeTable";
 export { SensitivityTable } from "./SensitivityTable";
 export { ShareRangeBars } from "./ShareRangeBars";
 export { UncertaintyPanel } from "./UncertaintyPanel";
+export { type UncertaintyJobState, useUncertaintyJob } from "./useUncertaintyJob";
