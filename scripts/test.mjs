@@ -1,8 +1,10 @@
 // `npm test`: the whole gate. Typecheck, lint/format, unit and reference tests
-// (vitest), then route and browser tests (Playwright) against a really started
-// production server. Ends with one plain line totalling every runner.
+// (vitest), the scale-out suite (vitest, test/scale) against a local Redis and
+// PostgreSQL that scripts/services.mjs starts and stops, then route and
+// browser tests (Playwright) against a really started production server.
+// Ends with one plain line totalling every runner.
 import { spawnSync } from "node:child_process";
-import { existsSync, mkdirSync, readFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, rmSync } from "node:fs";
 
 const env = { ...process.env, NEXT_TELEMETRY_DISABLED: "1" };
 const steps = [];
@@ -40,6 +42,21 @@ run("unit", "node_modules/.bin/vitest", [
   "--outputFile=test-results/vitest.json",
 ]);
 run("build", "node", ["scripts/build.mjs"]);
+// services.mjs starts Redis and PostgreSQL on free loopback ports (installing Debian's packages when
+// missing and root), runs the suite with REDIS_URL and DATABASE_URL, and stops both whatever happens
+rmSync("test-results/scale.json", { force: true });
+run("scale", "node", [
+  "scripts/services.mjs",
+  "run",
+  "--",
+  "node_modules/.bin/vitest",
+  "run",
+  "--config",
+  "test/scale/vitest.config.ts",
+  "--reporter=default",
+  "--reporter=json",
+  "--outputFile=test-results/scale.json",
+]);
 if (ensureChromium()) {
   run("browser+routes", "node_modules/.bin/playwright", ["test"]);
 } else {
@@ -50,13 +67,18 @@ if (ensureChromium()) {
 let passed = 0;
 let failedTests = 0;
 let skipped = 0;
-try {
-  const v = JSON.parse(readFileSync("test-results/vitest.json", "utf8"));
-  passed += v.numPassedTests ?? 0;
-  failedTests += v.numFailedTests ?? 0;
-  skipped += (v.numPendingTests ?? 0) + (v.numTodoTests ?? 0);
-} catch {
-  console.error("no vitest report found");
+for (const [file, what] of [
+  ["test-results/vitest.json", "vitest"],
+  ["test-results/scale.json", "scale (vitest)"],
+]) {
+  try {
+    const v = JSON.parse(readFileSync(file, "utf8"));
+    passed += v.numPassedTests ?? 0;
+    failedTests += v.numFailedTests ?? 0;
+    skipped += (v.numPendingTests ?? 0) + (v.numTodoTests ?? 0);
+  } catch {
+    console.error(`no ${what} report found`);
+  }
 }
 try {
   const p = JSON.parse(readFileSync("test-results/playwright.json", "utf8"));
