@@ -84,7 +84,7 @@ function BudgetChart({ budget }: { budget: OxBudget }) {
         </tbody>
       </table>
       <p className="mt-1 text-stone-500">
-        Ox = {budget.definition.join(" + ")}. Loss ÷ production ={" "}
+        {budget.definition.length ? `Ox = ${budget.definition.join(" + ")}. ` : ""}Loss ÷ production ={" "}
         {formatNumber(budget.production_cm3s > 0 ? budget.loss_cm3s / budget.production_cm3s : null)}; loss by the
         rate-limiting-step formula {formatNumber(budget.directLoss_cm3s)}.
       </p>

@@ -28,7 +28,7 @@ export function CyclesPanel({ report, selected, onSelect, onInspectReaction }: P
           </span>
         ) : null
       }
-      className="flex min-h-0 flex-col"
+      className="flex max-h-[520px] min-h-0 flex-col lg:max-h-none lg:flex-1"
     >
       <p className="px-3 pt-1.5 text-[11px] text-stone-500">
         Sorted by odd oxygen destroyed (molecules cm⁻³ s⁻¹). Press a cycle to light its steps in the network.
@@ -54,7 +54,9 @@ export function CyclesPanel({ report, selected, onSelect, onInspectReaction }: P
       {report && (report.otherLossPathways?.length ?? 0) > 0 ? (
         <details className="border-t border-stone-200 px-3 py-1 text-[11px] text-stone-600">
           <summary className="cursor-pointer select-none">
-            {report.otherLossPathways.length} other Ox-loss pathways (chains that start or end in reservoirs)
+            {report.otherLossPathways.length} other Ox-loss pathway{report.otherLossPathways.length === 1 ? "" : "s"},{" "}
+            {formatPercent(report.otherLossPathways.reduce((a, c) => a + c.share, 0))} of the loss (chains that start or
+            end in reservoirs)
           </summary>
           <ul className="mt-1 max-h-32 space-y-0.5 overflow-y-auto">
             {report.otherLossPathways.map((c) => (

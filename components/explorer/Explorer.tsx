@@ -187,7 +187,7 @@ export function Explorer(props: Props) {
   };
 
   return (
-    <div className="grid gap-2 p-2 lg:h-[calc(100vh-38px)] lg:min-h-[700px] lg:grid-cols-[272px_minmax(0,1fr)_340px]">
+    <div className="grid gap-2 p-2 md:grid-cols-[260px_minmax(0,1fr)] lg:h-[calc(100vh-38px)] lg:min-h-[700px] lg:grid-cols-[272px_minmax(0,1fr)_340px]">
       <ConditionsPanel
         mechanisms={mechanisms}
         mechanismId={mechanismId}
@@ -248,7 +248,7 @@ export function Explorer(props: Props) {
             </button>
           </div>
         ) : null}
-        <div className="relative min-h-[400px] flex-1 overflow-hidden rounded-md border border-stone-300 bg-white">
+        <div className="relative min-h-[420px] flex-1 overflow-hidden rounded-md border border-stone-300 bg-white md:min-h-[560px] lg:min-h-[360px]">
           {mechanism && layout ? (
             <NetworkView
               ref={net}
@@ -319,7 +319,7 @@ export function Explorer(props: Props) {
         <ExportBar analysisId={analysis.id} onPng={onPng} onSvg={onSvg} busy={analysis.loading} />
       </div>
 
-      <div className="flex min-h-0 flex-col gap-2">
+      <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">
         <CyclesPanel
           report={result?.cycles ?? null}
           selected={cycle?.id ?? null}
