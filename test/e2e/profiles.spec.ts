@@ -61,4 +61,11 @@ test("an uploaded CSV with a bad cell is refused with the row and column named",
     .fill("# title: my test\naltitude (km),T (K),p (hPa)\n20,216.65,55.29\n25,221.55,25.49\n");
   await expect(page.getByTestId("csv-status")).toContainText("2 levels, 20–25 km");
   await page.screenshot({ path: "test-results/screenshots/profiles-upload.png", fullPage: true });
+  // run the uploaded profile and follow the progress to its permalink
+  await page.getByRole("combobox", { name: /^Mechanism/ }).selectOption("oxygen-chlorine");
+  await page.getByRole("button", { name: "Run the sweep" }).click();
+  await page.waitForURL(/\/profiles\/[A-Za-z0-9_-]{16}$/, { timeout: 120_000 });
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Profile sweep: my test");
+  await expect(page.getByTestId("levels-table").locator("tbody tr")).toHaveCount(6);
+  await expect(page.getByTestId("chart-loss")).toBeVisible();
 });

@@ -43,7 +43,7 @@ export interface DifferenceSeries {
   lines: DifferenceLine[];
 }
 
-const DASHES = ["", "5 3", "2 3", "8 3 2 3", "1 2", "10 4"];
+const DASHES = ["", "5 3", "2 3", "8 3 2 3", "1 2", "10 4", "4 2 1 2"];
 
 export function differenceSeries(
   levels: readonly DifferenceLevel[],
@@ -91,7 +91,7 @@ export function differenceSeries(
       label: key === "total" ? "total" : key === "other" ? `other families (${rest.length})` : familyName(key),
       paths: pathSegments(pts),
       stroke: color,
-      dash: key === "total" ? "" : DASHES[(i - 1) % DASHES.length],
+      dash: key === "total" ? "" : DASHES[1 + ((i - 1) % (DASHES.length - 1))],
       width: key === "total" ? 2.5 : 1.5,
       labelAt: best && best.v !== 0 ? { x: best.x, y: best.y } : null,
     };
