@@ -1,8 +1,11 @@
 /**
- * Cycle-analysis benchmarks: the reference mechanism at 40 km at several
+ * Cycle-analysis benchmarks: the reference mechanism level by level (10, 15,
+ * 20, 30, 40, 50 km, engine defaults, O3 held), at 40 and 20 km at several
  * f_min, the 51-level 10–60 km profile, and generated mechanisms of growing
  * size so that the growth of the cost with the pathway count is visible.
- * Steady states are solved once, outside the timed part.
+ * Steady states are solved once, outside the timed part (when the case file is
+ * loaded); the notes give the pathway count, the deleted ("unassigned") share
+ * of the Ox loss and the direct-formula mismatch of each level.
  */
 import { analyseCycles, findPathways } from "../../lib/analysis";
 import { runAnalysis } from "../../lib/engine/run-analysis";
@@ -27,6 +30,21 @@ function stateAt(z: number) {
   return s;
 }
 const profile = Array.from({ length: 51 }, (_, i) => 10 + i);
+const levels = [10, 15, 20, 30, 40, 50];
+
+function analyseAt(z: number, fminRelative?: number) {
+  const s = stateAt(z);
+  return analyseCycles(mech, s.state, { heldSpecies: s.held, fminRelative });
+}
+
+/** Pathway count, deleted share and direct-formula mismatch, for the note. */
+function summary(z: number, fminRelative?: number): string {
+  const r = analyseAt(z, fminRelative);
+  const b = r.budget;
+  const deleted = b.loss_cm3s > 0 ? b.unassignedLoss_cm3s / b.loss_cm3s : 0;
+  return `${r.pathwayCount} pathways, deleted ${(100 * deleted).toFixed(1)} % of the Ox loss, direct mismatch ${(100 * b.directMismatch).toFixed(1)} %`;
+}
+for (const z of profile) stateAt(z);
 
 /**
  * An invented mechanism of n radicals X0…X(n−1) on a ring with odd oxygen:
@@ -133,23 +151,30 @@ function generated(n: number): {
 const big = [8, 16, 32].map((n) => ({ n, ...generated(n) }));
 
 export const cases: BenchCase[] = [
+  ...levels.map((z) => ({
+    name: `analysis: reference ${z} km, engine defaults`,
+    run: () => analyseAt(z),
+    note: summary(z),
+  })),
   ...[1e-3, 1e-4, 1e-5].map((f) => ({
     name: `analysis: reference 40 km, fminRelative ${f}`,
-    run: () => {
-      const s = stateAt(40);
-      return analyseCycles(mech, s.state, { heldSpecies: s.held, fminRelative: f });
-    },
-    note: "pathway count in the returned report",
+    run: () => analyseAt(40, f),
+    note: summary(40, f),
   })),
-  ...[1e-3, 1e-4].map((f) => ({
+  ...[1e-3, 1e-4, 1e-5].map((f) => ({
     name: `analysis: reference 20 km, fminRelative ${f}`,
-    run: () => {
-      const s = stateAt(20);
-      return analyseCycles(mech, s.state, { heldSpecies: s.held, fminRelative: f });
-    },
+    run: () => analyseAt(20, f),
+    note: summary(20, f),
   })),
   {
+    name: "analysis: reference 10 km, fminRelative 1e-5",
+    iterations: 5,
+    run: () => analyseAt(10, 1e-5),
+    note: summary(10, 1e-5),
+  },
+  {
     name: "analysis: reference 51-level profile 10–60 km, fminRelative 1e-4",
+    note: `${profile.reduce((n, z) => n + analyseAt(z).pathwayCount, 0)} pathways over the 51 levels`,
     iterations: 3,
     run: () =>
       profile.map((z) => {

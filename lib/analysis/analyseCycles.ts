@@ -60,7 +60,9 @@ export function analyseCycles(
   state: Pick<SteadyState, "numberDensity_cm3" | "rate_cm3s">,
   options: CycleOptions = {},
 ): CycleReport {
-  const opt = { ...CYCLE_DEFAULTS, ...options };
+  // an option given as undefined takes its default
+  const given = Object.fromEntries(Object.entries(options).filter(([, v]) => v !== undefined));
+  const opt: Required<CycleOptions> = { ...CYCLE_DEFAULTS, ...given };
   checkOptions(opt);
   const warnings = validateState(mech, state);
   const rates = state.rate_cm3s.map((r) => Math.max(r, 0));

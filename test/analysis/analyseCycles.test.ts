@@ -123,6 +123,13 @@ describe("analyseCycles on hand-solved systems", () => {
     expect(() => analyseCycles(noOx, s)).toThrow(/odd-oxygen/);
   });
 
+  it("takes the default for an option given as undefined (as a form or route may pass it)", () => {
+    const s = chlorine();
+    const r = analyseCycles(s.mech, s, { heldSpecies: ["O", "O3"], fminRelative: undefined, oxDefinition: undefined });
+    expect(r.oxDefinition).toBe("standard");
+    expectClose(r.fmin_cm3s, 1e-4 * r.budget.directLoss_cm3s, { rel: 1e-12 }, "default fminRelative 1e-4");
+  });
+
   it("warns about held species that are not in the mechanism instead of failing", () => {
     const s = chlorine();
     const r = analyseCycles(s.mech, s, { heldSpecies: ["O3", "Xe"] });
