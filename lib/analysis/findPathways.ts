@@ -362,8 +362,8 @@ export function findPathways(
       else remove((k.rate * (T - D)) / T, k);
       remove((k.rate * dD) / T, k);
     });
-    producers.forEach((k, ik) => removeLinear(shareK[ik], k, b));
-    consumers.forEach((l, il) => removeLinear(shareL[il], l, b));
+    for (let ik = 0; ik < producers.length; ik++) removeLinear(shareK[ik], producers[ik], b);
+    for (let il = 0; il < consumers.length; il++) removeLinear(shareL[il], consumers[il], b);
     for (const l of consumers) {
       if (T - P > BALANCE_TOLERANCE * T) add(next, { ...l, rate: (l.rate * (T - P)) / T });
       else remove((l.rate * (T - P)) / T, l);
