@@ -105,7 +105,7 @@ export class EmbeddedJobBackend implements JobBackend {
     while (this.running < this.o.concurrency && this.queue.length > 0) {
       const id = this.queue.shift() as string;
       const e = this.jobs.get(id);
-      if (!e || e.status.state !== "queued") continue;
+      if (e?.status.state !== "queued") continue;
       this.running++;
       void this.execute(e).finally(() => {
         this.running--;
