@@ -456,6 +456,11 @@ export const openApiDocument = {
         parameters: [jobId],
         responses: { 200: { description: "job status" }, ...errors(404) },
       },
+      delete: {
+        summary: "Cancel an uncertainty job (nothing is stored)",
+        parameters: [jobId],
+        responses: { 200: { description: "job status" }, ...errors(404) },
+      },
     },
     "/api/uncertainty/profiles/{id}": {
       get: {

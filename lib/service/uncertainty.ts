@@ -15,7 +15,7 @@
 import "server-only";
 import { z } from "zod";
 import { compileSource } from "../engine/mechanism-source";
-import { enginePool } from "../engine/pool";
+import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { analysisRequestSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
@@ -72,6 +72,25 @@ export interface UncertaintyProfileBody {
   elapsed_ms: number;
 }
 
+/**
+ * Runs `work` over the items with at most one more in flight than the pool
+ * has workers, in item order, checking for cancellation before each; the
+ * results keep the items' order.
+ */
+async function inLanes<T, R>(items: readonly T[], signal: AbortSignal, work: (item: T) => Promise<R>): Promise<R[]> {
+  const out = new Array<R>(items.length);
+  let next = 0;
+  const lane = async () => {
+    while (next < items.length) {
+      if (signal.aborted) throw signal.reason;
+      const i = next++;
+      out[i] = await work(items[i]);
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(items.length, POOL_DEFAULTS.size + 1) }, lane));
+  return out;
+}
+
 /** Central analysis, then the Monte Carlo batches in parallel; stores an analysis record. */
 async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
   const t0 = performance.now();
@@ -107,15 +126,12 @@ async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
       { samples, seed: request.options?.uncertaintySeed },
     );
     let done = 0;
-    const batches: SampleBatchResult[] = await Promise.all(
-      plan.batches.map(async (batch) => {
-        if (ctx.signal.aborted) throw ctx.signal.reason;
-        const r = (await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch })).result;
-        done += batch.count;
-        ctx.progress(1 + done, samples + 1, `Monte Carlo samples (${done} of ${samples})`);
-        return r;
-      }),
-    );
+    const batches: SampleBatchResult[] = await inLanes(plan.batches, ctx.signal, async (batch) => {
+      const r = (await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch })).result;
+      done += batch.count;
+      ctx.progress(1 + done, samples + 1, `Monte Carlo samples (${done} of ${samples})`);
+      return r;
+    });
     const monteCarlo: MonteCarloResult = finishMonteCarlo(plan, batches, performance.now() - t0);
     out.uncertainty = { ...result.uncertainty, monteCarlo, warnings };
   }
@@ -141,12 +157,13 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
   const seedValue = input.seed ?? 1;
   let done = 0;
   ctx.progress(0, levels.length, "levels");
-  const results: UncertaintyProfileLevel[] = await Promise.all(
-    levels.map(async (level, i): Promise<UncertaintyProfileLevel> => {
+  const results: UncertaintyProfileLevel[] = await inLanes(
+    levels.map((level, i) => ({ level, i })),
+    ctx.signal,
+    async ({ level, i }): Promise<UncertaintyProfileLevel> => {
       const base = { altitude_km: level.altitude_km, monteCarlo: null, sensitivity: null };
       if (level.status !== "converged")
         return { ...base, status: level.status, message: `the sweep level did not converge: ${level.message}` };
-      if (ctx.signal.aborted) throw ctx.signal.reason;
       const request: AnalysisRequest = {
         ...level.request,
         options: {
@@ -172,7 +189,7 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
         done++;
         return { ...base, status: "failed", message: e instanceof Error ? e.message : String(e) };
       }
-    }),
+    },
   );
   const body: UncertaintyProfileBody = {
     profileId: input.profileId,
@@ -231,6 +248,13 @@ const JOB_ID = /^[A-Za-z0-9_-]{16}$/;
 
 export async function getUncertaintyJob(id: string): Promise<UncertaintyJobView> {
   const s = JOB_ID.test(id) ? await backend().status(id) : null;
+  if (!s) throw notFound("uncertainty job", id);
+  return view(s);
+}
+
+/** Cancels a queued or running uncertainty job (no record is stored); a finished job is returned unchanged. */
+export async function cancelUncertaintyJob(id: string): Promise<UncertaintyJobView> {
+  const s = JOB_ID.test(id) ? await backend().cancel(id) : null;
   if (!s) throw notFound("uncertainty job", id);
   return view(s);
 }

@@ -15,7 +15,13 @@ vi.hoisted(() => {
 vi.mock("server-only", () => ({}));
 vi.mock("@/lib/engine/pool", async () => {
   const { runJob } = await import("@/lib/engine/jobs");
-  const pool = { run: async (job: Parameters<typeof runJob>[0]) => runJob(job) };
+  // yield to the event loop before each job, as a real worker round trip does
+  const pool = {
+    run: async (job: Parameters<typeof runJob>[0]) => {
+      await new Promise((r) => setImmediate(r));
+      return runJob(job);
+    },
+  };
   return { enginePool: () => pool, POOL_DEFAULTS: { size: 2, timeout_ms: 30_000, script: "" } };
 });
 
@@ -24,7 +30,12 @@ import { runAnalysis } from "@/lib/engine/run-analysis";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { getAnalysisRecord } from "@/lib/service/analyses";
-import { getUncertaintyJob, getUncertaintyProfile, startUncertaintyJob } from "@/lib/service/uncertainty";
+import {
+  cancelUncertaintyJob,
+  getUncertaintyJob,
+  getUncertaintyProfile,
+  startUncertaintyJob,
+} from "@/lib/service/uncertainty";
 import { getStore, newRecordId } from "@/lib/store";
 import { monteCarlo } from "@/lib/uncertainty";
 
@@ -95,6 +106,16 @@ describe("uncertainty jobs", () => {
     expect(rec.body.levels[0].monteCarlo?.samples).toBe(6);
     const clox = rec.body.bands.find((b) => b.family === "ClOx");
     expect(clox?.points.map((p) => p.p05 === null)).toEqual([false, false, true]);
+  });
+
+  it("stop between batches when cancelled and store nothing", async () => {
+    const job = await startUncertaintyJob({ analysis: { ...analysis, options: { uncertaintySamples: 5000 } } });
+    await new Promise((r) => setTimeout(r, 50));
+    await cancelUncertaintyJob(job.id);
+    const s = await finished(job.id);
+    expect(s.state).toBe("cancelled");
+    expect(s.resultId).toBeUndefined();
+    expect(s.done).toBeLessThan(5001);
   });
 
   it("throws if the body is invalid or names what does not exist, before anything is queued", async () => {
