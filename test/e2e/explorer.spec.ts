@@ -71,6 +71,9 @@ test("moving the altitude slider recomputes, changes the numbers and the address
   const places = async () =>
     (await nodes(page)).filter((n) => !n.id.startsWith("f:")).map(({ id, x, y }) => ({ id, x, y }));
   const placesBefore = await places();
+  const boxes = async () =>
+    Promise.all(["network", "budget", "legend"].map(async (id) => page.getByTestId(id).boundingBox()));
+  const boxesBefore = await boxes();
   const slider = page.getByLabel("Altitude");
   await slider.focus();
   for (let i = 0; i < 20; i++) await page.keyboard.press("ArrowRight");
@@ -81,6 +84,9 @@ test("moving the altitude slider recomputes, changes the numbers and the address
   expect(after.budget).not.toBe(before.budget);
   expect((await edges(page)).map((e) => e.width)).not.toEqual(widthsBefore);
   expect(await places()).toEqual(placesBefore);
+  // new numbers, same page geometry: nothing jumped
+  expect(await boxes()).toEqual(boxesBefore);
+  expect(await page.evaluate(() => window.scrollY)).toBe(0);
   await expect(page).toHaveURL(/[?&]z=40(&|$)/);
   await shot(page, "explorer-after-slider");
 });
