@@ -207,7 +207,7 @@ export function ConditionsPanel(p: Props) {
                 </div>
               ) : null}
               {p.resolved && c.mode !== "diurnal" ? (
-                <p className="text-[11px] text-stone-500">
+                <p className="min-h-[2.6em] text-[11px] text-stone-500">
                   Solar zenith angle {sig(p.resolved.zenith_deg, 3)}°
                   {p.resolved.zenith_deg >= 90 ? " (sun below the horizon)" : ""}; ozone column above{" "}
                   {sig(p.resolved.o3ColumnAbove_DU, 3)} DU.
