@@ -4,6 +4,7 @@ export { ProfileBands } from "./ProfileBands";
 export { ProfileShareBandsChart } from "./ProfileShareBandsChart";
 export { ProfileUncertaintyRunner } from "./ProfileUncertaintyRunner";
 export { RangeTable } from "./RangeTable";
+export { SensitivityAltitudeTable } from "./SensitivityAltitudeTable";
 export { SensitivityTable } from "./SensitivityTable";
 export { ShareRangeBars } from "./ShareRangeBars";
 export { UncertaintyPanel } from "./UncertaintyPanel";
