@@ -92,6 +92,7 @@ export function findPathways(
   const deletedNeg = new Float64Array(nS);
   const deletedTracked: Record<string, { produced_cm3s: number; destroyed_cm3s: number }> = {};
   for (const [name] of tracked) deletedTracked[name] = { produced_cm3s: 0, destroyed_cm3s: 0 };
+  const trackedSums = tracked.map(([name]) => deletedTracked[name]);
   let nullRate = 0;
 
   const deletedFlux = new Float64Array(mech.reactions.length);
@@ -305,26 +306,39 @@ export function findPathways(
         }
       }
       const wl = consumerSums[il];
-      tracked.forEach(([name], t) => {
+      for (let t = 0; t < trackedSums.length; t++) {
         const dx = rate * (a * kSums[t] + c * wl[t]);
-        if (dx > 0) deletedTracked[name].produced_cm3s += dx;
-        else deletedTracked[name].destroyed_cm3s -= dx;
-      });
+        if (dx > 0) trackedSums[t].produced_cm3s += dx;
+        else trackedSums[t].destroyed_cm3s -= dx;
+      }
     };
+    const fdOf = consumers.map((l, il) => l.rate * (dq[il][0] / dq[il][1]));
     producers.forEach((k, ik) => {
       const fp = k.rate * (pq[ik][0] / pq[ik][1]);
       const kSums = sums(k);
       const kMax = maxOf(k);
       const kFuture = future(k);
-      consumers.forEach((l, il) => {
-        const fd = l.rate * (dq[il][0] / dq[il][1]);
-        const { a, c, L } = matchingMultipliers(pq[ik], dq[il]);
+      const [pn, pd] = pq[ik];
+      for (let il = 0; il < consumers.length; il++) {
+        const l = consumers[il];
+        const fd = fdOf[il];
+        // smallest a, c with a·p = c·d = L (matchingMultipliers, inlined: this loop runs for every pair)
+        const [dn, dd] = dq[il];
+        let a = 1;
+        let c = 1;
+        let L = pn;
+        if (pd !== 1 || dd !== 1 || pn !== dn) {
+          const m = matchingMultipliers(pq[ik], dq[il]);
+          a = m.a;
+          c = m.c;
+          L = m.L;
+        }
         let rate = (fp * fd) / (T * L);
         // rate × (largest multiplicity) does not change when the vector is made coprime, and bounds the rate of
         // every elementary part: below f_min the joined pathway is deleted before it is built.
         if (rate * (a * kMax + c * consumerMax[il]) < fmin) {
           removeJoin(rate, a, ik, kFuture, kSums, c, il);
-          return;
+          continue;
         }
         // merged multiplicities a·x_k + c·x_l, made coprime
         const rx: number[] = [];
@@ -356,7 +370,7 @@ export function findPathways(
         const old = created.get(key);
         if (old) old.rate += rate;
         else created.set(key, { rx, mx, net, rate, key, elementary: false, parents: [k, l], overlap });
-      });
+      }
       // unconnected shares: storage of b, and the share that fed deleted consumers
       if (T - D > BALANCE_TOLERANCE * T) add(next, { ...k, rate: (k.rate * (T - D)) / T });
       else remove((k.rate * (T - D)) / T, k);
