@@ -59,6 +59,38 @@ export function taskId(jobId: string, task: unknown): string {
   return `${jobId}-${createHash("sha256").update(JSON.stringify(task)).digest("hex").slice(0, 32)}`;
 }
 
+/**
+ * A job's task runner on the "tasks" queue: each task is queued under its
+ * content id and awaited through the queue's events. Used by the jobs'
+ * orchestration, and by anything else that fans JSON tasks out to workers.
+ */
+export function queueTaskRunner(
+  config: BullmqConfig,
+  tasksQueue: Queue,
+  taskEvents: QueueEvents,
+  jobId: string,
+  signal?: AbortSignal,
+): TaskRunner {
+  return {
+    parallel: config.parallel,
+    async run(task) {
+      if (signal?.aborted) throw signal.reason;
+      const entry = await tasksQueue.add("task", { jobId, task } satisfies TaskData, {
+        jobId: taskId(jobId, task),
+        attempts: config.taskAttempts,
+        backoff: { type: "exponential", delay: config.backoff_ms },
+        removeOnComplete: { age: config.keep_s },
+        removeOnFail: { age: config.keep_s },
+      });
+      try {
+        return await entry.waitUntilFinished(taskEvents);
+      } catch (e) {
+        throw new EngineError("engine-failure", `a task of job ${jobId} failed: ${(e as Error).message}`);
+      }
+    },
+  };
+}
+
 const errorJson = (e: EngineError) =>
   JSON.stringify({ code: e.code, message: e.message, ...(e.path ? { path: e.path } : {}) });
 
@@ -80,26 +112,8 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
     maxStalledCount: config.maxStalledCount,
   };
 
-  function runnerFor(jobId: string, signal: AbortSignal): TaskRunner {
-    return {
-      parallel: config.parallel,
-      async run(task) {
-        if (signal.aborted) throw signal.reason;
-        const entry = await tasksQueue.add("task", { jobId, task } satisfies TaskData, {
-          jobId: taskId(jobId, task),
-          attempts: config.taskAttempts,
-          backoff: { type: "exponential", delay: config.backoff_ms },
-          removeOnComplete: { age: config.keep_s },
-          removeOnFail: { age: config.keep_s },
-        });
-        try {
-          return await entry.waitUntilFinished(taskEvents);
-        } catch (e) {
-          throw new EngineError("engine-failure", `a task of job ${jobId} failed: ${(e as Error).message}`);
-        }
-      },
-    };
-  }
+  const runnerFor = (jobId: string, signal: AbortSignal) =>
+    queueTaskRunner(config, tasksQueue, taskEvents, jobId, signal);
 
   const tasksWorker = new Worker(
     TASKS_QUEUE,

@@ -1,0 +1,250 @@
+/**
+ * Scale-out benchmark: the embedded engine pool against the BullMQ task
+ * queue with 1, 2 and 4 worker processes (`npm run worker`, one engine
+ * thread each) on this machine.
+ *
+ * Workload, a stand-in for a Monte Carlo run (lib/uncertainty is not there
+ * yet): 1,000 samples over the 51-level profile of the reference mechanism
+ * (U.S. Standard Atmosphere 1976, 10–60 km every 1 km, instantaneous, O3
+ * held). Sample k is level k mod 51 with every photolysis frequency scaled
+ * by a log-normal factor (σ = 0.2 in ln J, invented for the benchmark),
+ * warm-started from that level's nominal steady state, as a Monte Carlo
+ * sample starts from the nominal solution. Each sample is one task (a
+ * "profile-levels" engine job of one level): sample-sized tasks, the
+ * queue's worst case for overhead.
+ *
+ * Reported: wall time and samples per second (median of the repeats), and
+ * the overhead per task of the queue against the pool: the median round
+ * trip of one task at a time minus the pool's (same tasks).
+ *
+ * Run by bench/scale.mjs (`npm run bench:scale`), which starts Redis and
+ * PostgreSQL when none is reachable and the worker processes.
+ */
+import { type ChildProcess, spawn } from "node:child_process";
+import { Queue, QueueEvents } from "bullmq";
+import { EnginePool, POOL_DEFAULTS } from "../lib/engine/pool";
+import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "../lib/jobs/bullmqConfig";
+import { queueTaskRunner } from "../lib/jobs/bullmqWorker";
+import type { TaskRunner } from "../lib/jobs/types";
+import { loadBuiltinMechanism } from "../lib/mechanism";
+import { planSweep } from "../lib/profiles/planSweep";
+import { type LevelBatchResult, runLevelBatch } from "../lib/profiles/runLevelBatch";
+import { standardProfile } from "../lib/profiles/standardProfile";
+
+export const BENCH_DEFAULTS = {
+  /** Monte Carlo samples; default 1000 */
+  samples: Number(process.env.BENCH_SAMPLES ?? 1000),
+  /** repeats of each configuration (the median is reported); default 3 */
+  repeats: Number(process.env.BENCH_REPEATS ?? 3),
+  /** tasks timed one at a time for the per-task overhead; default 60 */
+  latencyTasks: 60,
+  /** queue worker processes to try */
+  workers: [1, 2, 4],
+  /** σ of ln(J scale) */
+  sigmaLnJ: 0.2,
+  /** tasks kept in flight on the queue (the pool takes them all at once and queues them itself); default 16 */
+  inFlight: 16,
+};
+
+const MECH = { id: "reference", title: "reference" };
+
+type EngineTask = { kind: "profile-levels"; mechanism: typeof MECH; batch: unknown };
+
+/** Deterministic standard normal draws (mulberry32 + Box–Muller). */
+function normals(n: number, seed = 12_345): number[] {
+  let a = seed >>> 0;
+  const u = () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
+  };
+  return Array.from({ length: n }, () => Math.sqrt(-2 * Math.log(u() || 1e-12)) * Math.cos(2 * Math.PI * u()));
+}
+
+/** The samples as engine tasks, from the nominal sweep's warm-start states. */
+function sampleTasks(n: number, sigma: number): EngineTask[] {
+  const mech = loadBuiltinMechanism("reference").mechanism;
+  const plan = planSweep(
+    { mechanismId: "reference", profile: { kind: "standard" }, grid: { from_km: 10, to_km: 60, step_km: 1 } },
+    standardProfile(),
+    mech,
+  );
+  // nominal states, one chain from the top down
+  const top = [...plan.tasks].reverse();
+  const nominal = runLevelBatch(mech, MECH, { tasks: top });
+  const levels = top.map((t, i) => ({ task: t, state: nominal.states[i], M: nominal.M_cm3[i] }));
+  const z = normals(n);
+  return z.map((zk, k) => {
+    const l = levels[k % levels.length];
+    return {
+      kind: "profile-levels",
+      mechanism: MECH,
+      batch: {
+        chain: false,
+        tasks: [
+          {
+            request: { ...l.task.request, condition: { ...l.task.request.condition, jScale: Math.exp(sigma * zk) } },
+            ...(l.state ? { initialState: l.state, initialM_cm3: l.M ?? undefined } : {}),
+          },
+        ],
+      },
+    };
+  });
+}
+
+/** Runs every task, at most `inFlight` at a time; wall time in ms. */
+async function runAll(run: (t: EngineTask) => Promise<unknown>, tasks: EngineTask[], inFlight: number) {
+  const t0 = performance.now();
+  let next = 0;
+  let converged = 0;
+  await Promise.all(
+    Array.from({ length: Math.min(inFlight, tasks.length) }, async () => {
+      while (next < tasks.length) {
+        const out = (await run(tasks[next++])) as { result: LevelBatchResult };
+        if (out.result.levels[0].status === "converged") converged++;
+      }
+    }),
+  );
+  return { wall_ms: performance.now() - t0, converged };
+}
+
+/** Round trip of each task alone, ms. */
+async function latencies(run: (t: EngineTask) => Promise<unknown>, tasks: EngineTask[]) {
+  const out: number[] = [];
+  for (const t of tasks) {
+    const s = performance.now();
+    await run(t);
+    out.push(performance.now() - s);
+  }
+  return out;
+}
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+};
+
+function startWorkerProcess(env: Record<string, string>): Promise<ChildProcess> {
+  return new Promise((resolve, reject) => {
+    const p = spawn(process.execPath, ["scripts/worker.mjs"], {
+      env: { ...process.env, ...env },
+      stdio: ["ignore", "pipe", "inherit"],
+    });
+    let out = "";
+    p.stdout?.on("data", (d) => {
+      out += d;
+      if (/queue worker \S+:/.test(out)) resolve(p);
+    });
+    p.once("exit", (code) => reject(new Error(`worker exited with ${code}: ${out}`)));
+  });
+}
+
+const stopProcess = (p: ChildProcess) =>
+  new Promise<void>((resolve) => {
+    if (p.exitCode !== null || p.signalCode !== null) return resolve();
+    p.once("exit", () => resolve());
+    p.kill("SIGTERM");
+  });
+
+export interface ScaleRow {
+  backend: string;
+  consumers: number;
+  samples: number;
+  median_wall_ms: number;
+  samplesPerSecond: number;
+  converged: number;
+  runs_ms: number[];
+}
+
+export async function main() {
+  const o = BENCH_DEFAULTS;
+  console.log(`preparing ${o.samples} samples over 51 levels (nominal sweep)…`);
+  const tasks = sampleTasks(o.samples, o.sigmaLnJ);
+  const latencyTasks = tasks.slice(0, o.latencyTasks);
+  const rows: ScaleRow[] = [];
+  const report = (r: ScaleRow) => {
+    rows.push(r);
+    console.log(
+      `${r.backend.padEnd(14)} ${String(r.consumers).padStart(2)} consumer(s)  median ${(r.median_wall_ms / 1000).toFixed(2).padStart(7)} s  ${r.samplesPerSecond.toFixed(1).padStart(7)} samples/s  converged ${r.converged}/${r.samples}  runs ${r.runs_ms.map((x) => (x / 1000).toFixed(2)).join(", ")} s`,
+    );
+  };
+
+  // the embedded back end's pool: one thread per core
+  const pool = new EnginePool({ ...POOL_DEFAULTS, timeout_ms: 120_000 });
+  const poolRun = (t: EngineTask) => pool.run(t as never);
+  await runAll(poolRun, tasks.slice(0, 20), o.inFlight); // warm-up: threads compile the mechanism
+  const poolLatency = await latencies(poolRun, latencyTasks);
+  const poolRuns: { wall_ms: number; converged: number }[] = [];
+  for (let r = 0; r < o.repeats; r++) poolRuns.push(await runAll(poolRun, tasks, tasks.length));
+  const poolWall = median(poolRuns.map((x) => x.wall_ms));
+  report({
+    backend: "embedded pool",
+    consumers: POOL_DEFAULTS.size,
+    samples: tasks.length,
+    median_wall_ms: poolWall,
+    samplesPerSecond: tasks.length / (poolWall / 1000),
+    converged: poolRuns[0].converged,
+    runs_ms: poolRuns.map((x) => x.wall_ms),
+  });
+  await pool.close();
+
+  const base = bullmqConfigFromEnv();
+  let queueLatency: number[] = [];
+  for (const n of o.workers) {
+    const config: BullmqConfig = { ...base, prefix: `ozbench${process.pid}w${n}` };
+    const procs = await Promise.all(
+      Array.from({ length: n }, () =>
+        startWorkerProcess({ OZONE_QUEUE_PREFIX: config.prefix, OZONE_WORKER_TASKS: "1", OZONE_WORKER_JOBS: "1" }),
+      ),
+    );
+    const q = new Queue(TASKS_QUEUE, { connection: connect(config), prefix: config.prefix });
+    const ev = new QueueEvents(TASKS_QUEUE, { connection: connect(config), prefix: config.prefix });
+    await ev.waitUntilReady();
+    ev.setMaxListeners(4 * o.inFlight + 16);
+    q.setMaxListeners(4 * o.inFlight + 16);
+    try {
+      // every run has its own job id: task results are content-addressed per job and would be reused
+      const runner = (id: string): TaskRunner => queueTaskRunner(config, q, ev, id);
+      const warm = runner("warm");
+      await runAll((t) => warm.run(t), tasks.slice(0, 20 * n), o.inFlight);
+      if (n === 1) {
+        const lat = runner("latency");
+        queueLatency = await latencies((t) => lat.run(t), latencyTasks);
+      }
+      const runs: { wall_ms: number; converged: number }[] = [];
+      for (let r = 0; r < o.repeats; r++) {
+        const run = runner(`run${r}`);
+        runs.push(await runAll((t) => run.run(t), tasks, o.inFlight));
+      }
+      const wall = median(runs.map((x) => x.wall_ms));
+      report({
+        backend: "BullMQ queue",
+        consumers: n,
+        samples: tasks.length,
+        median_wall_ms: wall,
+        samplesPerSecond: tasks.length / (wall / 1000),
+        converged: runs[0].converged,
+        runs_ms: runs.map((x) => x.wall_ms),
+      });
+    } finally {
+      await ev.close();
+      await q.obliterate({ force: true }).catch(() => {});
+      await q.close();
+      await Promise.all(procs.map(stopProcess));
+    }
+  }
+
+  const overhead = {
+    poolRoundTrip_median_ms: median(poolLatency),
+    queueRoundTrip_median_ms: median(queueLatency),
+    queueOverheadPerTask_ms: median(queueLatency) - median(poolLatency),
+    tasks: latencyTasks.length,
+  };
+  console.log(
+    `one task at a time (${overhead.tasks} tasks): pool ${overhead.poolRoundTrip_median_ms.toFixed(1)} ms, queue ${overhead.queueRoundTrip_median_ms.toFixed(1)} ms median round trip → queue overhead ${overhead.queueOverheadPerTask_ms.toFixed(1)} ms per task`,
+  );
+  return { rows, overhead, settings: { ...o } };
+}
