@@ -25,8 +25,8 @@ async function openExplorer(page: Page, query: string) {
 /** The numbers a reader takes away: the budget rows and the cycle rows. */
 async function numbers(page: Page) {
   return {
-    budget: await page.getByTestId("budget").innerText(),
-    cycles: await page.getByTestId("cycles").innerText(),
+    budget: await page.getByTestId("budget").textContent(),
+    cycles: await page.getByTestId("cycles").textContent(),
   };
 }
 
