@@ -210,6 +210,7 @@ export function Explorer(props: Props) {
           showHeld={view.showHeld}
           onShowHeld={(showHeld) => setViewPart({ showHeld })}
           onFit={() => net.current?.fit()}
+          onZoom={(f) => net.current?.zoomBy(f)}
           loading={analysis.loading}
           mechanism={mechanism}
           selected={selected}

@@ -6,8 +6,9 @@
  * numbers change) and reports clicks.
  */
 import type { Core, ElementDefinition, StylesheetJson } from "cytoscape";
-import { forwardRef, useEffect, useImperativeHandle, useRef } from "react";
+import { forwardRef, useEffect, useImperativeHandle, useRef, useState } from "react";
 import type { Highlight } from "@/lib/viz/cycleHighlight";
+import { formatNumber } from "@/lib/viz/formatNumber";
 import type { StyleRule } from "@/lib/viz/networkStyle";
 import type { GraphElement, Point } from "@/lib/viz/types";
 
@@ -17,6 +18,8 @@ export interface NetworkHandle {
   /** current node positions by id, px */
   positions(): Record<string, Point>;
   fit(): void;
+  /** multiplies the zoom around the centre of the view */
+  zoomBy(factor: number): void;
 }
 
 interface Props {
@@ -44,6 +47,7 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 ) {
   const box = useRef<HTMLDivElement>(null);
   const cyRef = useRef<Core | null>(null);
+  const [tip, setTip] = useState<{ x: number; y: number; title: string; detail: string } | null>(null);
   const latest = useRef({ elements, highlight, selected, onSelect });
   latest.current = { elements, highlight, selected, onSelect };
 
@@ -62,6 +66,11 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
     },
     fit() {
       cyRef.current?.fit(undefined, 24);
+    },
+    zoomBy(factor: number) {
+      const cy = cyRef.current;
+      if (!cy) return;
+      cy.zoom({ level: cy.zoom() * factor, renderedPosition: { x: cy.width() / 2, y: cy.height() / 2 } });
     },
   }));
 
@@ -87,6 +96,22 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
       cy.on("tap", (ev) => {
         if (ev.target === cy) latest.current.onSelect(null);
       });
+      // a short read-out under the pointer: the equation and rate of a reaction, the amount of a species
+      cy.on("mouseover", "node.species, node.reaction", (ev) => {
+        const d = ev.target.data();
+        const p = ev.renderedPosition ?? ev.target.renderedPosition();
+        setTip({
+          x: p.x,
+          y: p.y,
+          title: d.kind === "reaction" ? d.equation : d.label,
+          detail:
+            d.kind === "reaction"
+              ? `${d.reactionId} · rate ${formatNumber(d.rate_cm3s)} cm⁻³ s⁻¹`
+              : `${formatNumber(d.numberDensity_cm3)} cm⁻³`,
+        });
+      });
+      cy.on("mouseout", "node", () => setTip(null));
+      cy.on("viewport", () => setTip(null));
       cyRef.current = cy;
       window.__ozoneNetwork = {
         edges: () =>
@@ -132,6 +157,16 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 
   return (
     <div className="absolute inset-0">
+      {tip ? (
+        <div
+          role="tooltip"
+          className="pointer-events-none absolute z-10 max-w-[280px] -translate-x-1/2 translate-y-3 rounded border border-stone-300 bg-white/95 px-2 py-1 text-[11px] shadow"
+          style={{ left: tip.x, top: tip.y }}
+        >
+          <div className="font-semibold text-stone-900">{tip.title}</div>
+          <div className="tabular-nums text-stone-600">{tip.detail}</div>
+        </div>
+      ) : null}
       <div
         ref={box}
         data-testid="network"

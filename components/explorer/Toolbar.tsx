@@ -7,6 +7,7 @@ interface Props {
   showHeld: boolean;
   onShowHeld(v: boolean): void;
   onFit(): void;
+  onZoom(factor: number): void;
   loading: boolean;
   status: string | null;
   mechanism: MechanismView | null;
@@ -23,6 +24,7 @@ export function Toolbar({
   showHeld,
   onShowHeld,
   onFit,
+  onZoom,
   loading,
   status,
   mechanism,
@@ -72,6 +74,24 @@ export function Toolbar({
       >
         Fit to view
       </button>
+      <span className="flex overflow-hidden rounded border border-stone-300">
+        <button
+          type="button"
+          onClick={() => onZoom(1.25)}
+          aria-label="Zoom in"
+          className="bg-white px-2 py-0.5 text-[12px] hover:bg-stone-100 focus:outline-2 focus:outline-stone-800"
+        >
+          +
+        </button>
+        <button
+          type="button"
+          onClick={() => onZoom(0.8)}
+          aria-label="Zoom out"
+          className="border-l border-stone-300 bg-white px-2 py-0.5 text-[12px] hover:bg-stone-100 focus:outline-2 focus:outline-stone-800"
+        >
+          −
+        </button>
+      </span>
       <div className="flex w-full min-w-0 items-center gap-3">
         <label className="flex items-center gap-1 text-[12px] text-stone-700">
           <span aria-hidden>Inspect</span>

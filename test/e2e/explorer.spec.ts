@@ -136,10 +136,14 @@ test("a species and a reaction can be inspected", async ({ page }) => {
   await shot(page, "explorer-inspector");
 });
 
-test("the permalink opens in a fresh page with the same numbers", async ({ page, browser }) => {
+test("the permalink copies and opens in a fresh page with the same numbers", async ({ page, browser }) => {
   await openExplorer(page, "m=reference&z=42&lat=30&date=2026-06-21&t=10");
   const link = await page.getByTestId("permalink").inputValue();
   expect(link).toMatch(/\/a\/[\w-]+$/);
+  await page.context().grantPermissions(["clipboard-read", "clipboard-write"]);
+  await page.getByRole("button", { name: "Copy" }).click();
+  await expect(page.getByRole("button", { name: "Copied ✓" })).toBeVisible();
+  expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(link);
   const original = await numbers(page);
   const fresh = await browser.newContext({ viewport: { width: 1280, height: 800 } });
   const other = await fresh.newPage();
