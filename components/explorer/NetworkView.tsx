@@ -37,6 +37,8 @@ declare global {
     __ozoneNetwork?: {
       edges(): { id: string; color: string; width: number; classes: string[] }[];
       nodes(): { id: string; classes: string[]; x: number; y: number }[];
+      /** position of a node on screen relative to the canvas, px */
+      rendered(id: string): { x: number; y: number } | null;
     };
   }
 }
@@ -121,6 +123,10 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
             width: e.data("width"),
             classes: e.classes(),
           })) ?? []) as { id: string; color: string; width: number; classes: string[] }[],
+        rendered: (id: string) => {
+          const n = cyRef.current?.getElementById(id);
+          return n && n.nonempty() ? { ...n.renderedPosition() } : null;
+        },
         nodes: () =>
           cyRef.current
             ?.nodes()

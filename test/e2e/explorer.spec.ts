@@ -125,6 +125,18 @@ test("selecting a cycle lights its steps in the graph and dims the rest", async 
   expect((await nodes(page)).some((x) => x.classes.includes("dim"))).toBe(false);
 });
 
+test("pointing at a reaction shows its equation and rate", async ({ page }) => {
+  await openExplorer(page, "m=oxygen&z=30");
+  const box = (await page.getByTestId("network").boundingBox())!;
+  const at = (await page.evaluate(() => window.__ozoneNetwork?.rendered("r:Ox2") ?? null))!;
+  expect(at).not.toBeNull();
+  await page.mouse.move(box.x + at.x, box.y + at.y);
+  const tip = page.getByRole("tooltip");
+  await expect(tip).toContainText("O + O3 -> 2 O2");
+  await expect(tip).toContainText("cm⁻³ s⁻¹");
+  await shot(page, "explorer-hover");
+});
+
 test("a species and a reaction can be inspected", async ({ page }) => {
   await openExplorer(page, "m=reference&z=40&sel=s%3AClO");
   const insp = page.getByTestId("inspector");
