@@ -87,7 +87,8 @@ function aptInstall(pkg) {
 function redisBinary() {
   let bin = which("redis-server");
   if (!bin && aptInstall("redis-server")) bin = which("redis-server");
-  if (!bin) throw new Error("redis-server is missing: install Debian's redis-server package (apt-get install redis-server)");
+  if (!bin)
+    throw new Error("redis-server is missing: install Debian's redis-server package (apt-get install redis-server)");
   return bin;
 }
 
@@ -130,11 +131,11 @@ async function waitFor(check, timeout_ms, what) {
   throw new Error(`${what} did not start within ${timeout_ms / 1000} s`);
 }
 
-/** Starts a Redis on a free loopback port; resolves to { url, stop }. */
-export async function startRedis() {
+/** Starts a Redis on a free loopback port (or the given one); resolves to { url, port, stop }. */
+export async function startRedis(wantedPort) {
   const bin = redisBinary();
   const dir = mkdtempSync(path.join(tmpdir(), "ozone-redis-"));
-  const port = await freePort();
+  const port = wantedPort ?? (await freePort());
   const child = spawn(
     bin,
     ["--port", String(port), "--bind", "127.0.0.1", "--dir", dir, "--save", "", "--appendonly", "no"],
@@ -148,6 +149,7 @@ export async function startRedis() {
   log(`redis-server pid ${child.pid} on 127.0.0.1:${port}`);
   return {
     url: `redis://127.0.0.1:${port}`,
+    port,
     async stop() {
       if (!exited) {
         child.kill("SIGTERM");

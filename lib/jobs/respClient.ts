@@ -7,9 +7,11 @@
  * connection. Replies have the shapes BullMQ's ioredis adapter passes on
  * (bulk strings as UTF-8 strings, arrays as arrays, HGETALL as an object).
  *
- * Not supported: Redis Cluster, TLS, automatic reconnection (a lost
- * connection ends the client; the process using it should exit and be
- * restarted, see scripts/worker.mjs).
+ * A connection lost after it was ready is re-opened with backoff (commands
+ * in flight fail with ConnectionClosedError, as BullMQ expects of ioredis;
+ * commands sent meanwhile wait for the new connection); after
+ * `reconnectFor_ms` without success the client ends. Not supported: Redis
+ * Cluster, TLS.
  */
 import { createHash } from "node:crypto";
 import { EventEmitter } from "node:events";
@@ -20,6 +22,10 @@ import { ConnectionClosedError, type IRedisClient, type IRedisTransaction } from
 export const RESP_DEFAULTS = {
   /** ms to wait for the TCP connection; default 10 s */
   connectTimeout_ms: 10_000,
+  /** ms to keep trying to re-open a lost connection before the client ends; default 60 s */
+  reconnectFor_ms: 60_000,
+  /** first delay between reconnection attempts, ms, doubled up to 2 s; default 100 */
+  reconnectDelay_ms: 100,
 };
 
 export interface RespOptions {
@@ -30,6 +36,8 @@ export interface RespOptions {
   username?: string;
   connectionName?: string;
   connectTimeout_ms: number;
+  reconnectFor_ms?: number;
+  reconnectDelay_ms?: number;
   /** BullMQ reads this: must be null on blocking connections */
   maxRetriesPerRequest: null;
   [key: string]: unknown;
@@ -147,6 +155,10 @@ export class RespClient extends EventEmitter implements IRedisClient {
   private readonly pending: Pending[] = [];
   private readonly scripts = new Map<string, Script>();
   private connecting: Promise<void> | null = null;
+  /** set by disconnect/quit: a close is then the end, not a loss */
+  private closing = false;
+  /** commands sent while reconnecting, written once the connection is back */
+  private offline: { commands: Arg[][]; pending: Pending[] }[] = [];
 
   constructor(options: RespOptions | string) {
     super();
@@ -156,10 +168,17 @@ export class RespClient extends EventEmitter implements IRedisClient {
   connect(): Promise<void> {
     if (this.connecting) return this.connecting;
     this.status = "connecting";
-    this.connecting = new Promise<void>((resolve, reject) => {
+    this.connecting = this.open();
+    return this.connecting;
+  }
+
+  /** Opens the socket and runs the handshake (AUTH, SELECT, CLIENT SETNAME). */
+  private open(): Promise<void> {
+    return new Promise<void>((resolve, reject) => {
       const socket = net.connect({ host: this.options.host, port: this.options.port });
       this.socket = socket;
       socket.setNoDelay(true);
+      let opened = false;
       const timer = setTimeout(
         () => socket.destroy(new Error(`redis: no connection to ${this.options.host}:${this.options.port}`)),
         this.options.connectTimeout_ms,
@@ -167,36 +186,78 @@ export class RespClient extends EventEmitter implements IRedisClient {
       socket.once("connect", async () => {
         clearTimeout(timer);
         try {
+          const handshake: Arg[][] = [];
           if (this.options.password) {
-            await this.call(
-              ...(this.options.username
+            handshake.push(
+              this.options.username
                 ? ["AUTH", this.options.username, this.options.password]
-                : ["AUTH", this.options.password]),
+                : ["AUTH", this.options.password],
             );
           }
-          if (this.options.db) await this.call("SELECT", this.options.db);
-          if (this.options.connectionName) await this.call("CLIENT", "SETNAME", this.options.connectionName);
+          if (this.options.db) handshake.push(["SELECT", this.options.db]);
+          if (this.options.connectionName) handshake.push(["CLIENT", "SETNAME", this.options.connectionName]);
+          await Promise.all(this.write(handshake));
+          opened = true;
           this.status = "ready";
           this.emit("connect");
           this.emit("ready");
+          this.flushOffline();
           resolve();
         } catch (e) {
           reject(e);
-          this.disconnect();
+          socket.destroy();
         }
       });
       socket.on("data", (chunk) => this.onData(chunk));
       socket.on("error", (e) => {
         clearTimeout(timer);
-        if (this.status === "connecting") reject(e);
         if (this.listenerCount("error") > 0) this.emit("error", e);
+        if (!opened) {
+          reject(e);
+          // the first connection failed: the client ends (a lost connection is re-opened instead)
+          if (this.status === "connecting") this.ended();
+        }
       });
       socket.on("close", () => {
         clearTimeout(timer);
-        this.ended();
+        if (this.socket !== socket) return;
+        this.socket = null;
+        this.buffer = Buffer.alloc(0);
+        for (const p of this.pending.splice(0)) p.reject(new ConnectionClosedError());
+        if (!opened && this.status !== "reconnecting") {
+          reject(new ConnectionClosedError());
+          this.ended();
+        } else if (this.closing) this.ended();
+        else if (opened) this.reconnect();
+        else reject(new ConnectionClosedError());
       });
     });
-    return this.connecting;
+  }
+
+  /** Re-opens a lost connection with backoff; ends the client after reconnectFor_ms. */
+  private reconnect(): void {
+    this.status = "reconnecting";
+    this.emit("close");
+    this.emit("reconnecting");
+    const giveUpAt = Date.now() + (this.options.reconnectFor_ms ?? RESP_DEFAULTS.reconnectFor_ms);
+    let delay = this.options.reconnectDelay_ms ?? RESP_DEFAULTS.reconnectDelay_ms;
+    const attempt = () => {
+      if (this.closing) return this.ended();
+      this.open().catch(() => {
+        if (this.closing || Date.now() > giveUpAt) return this.ended();
+        delay = Math.min(2 * delay, 2000);
+        setTimeout(attempt, delay).unref();
+      });
+    };
+    setTimeout(attempt, delay).unref();
+  }
+
+  private flushOffline(): void {
+    for (const { commands, pending } of this.offline.splice(0)) {
+      this.write(commands).forEach((p, i) => {
+        p.then(pending[i].resolve, pending[i].reject);
+      });
+    }
   }
 
   private onData(chunk: Buffer): void {
@@ -219,6 +280,7 @@ export class RespClient extends EventEmitter implements IRedisClient {
     this.status = "end";
     this.socket = null;
     for (const p of this.pending.splice(0)) p.reject(new ConnectionClosedError());
+    for (const o of this.offline.splice(0)) for (const p of o.pending) p.reject(new ConnectionClosedError());
     this.emit("close");
     this.emit("end");
   }
@@ -228,24 +290,36 @@ export class RespClient extends EventEmitter implements IRedisClient {
     return this.send([flat(args)])[0];
   }
 
-  /** Writes several commands at once; one promise per command, in order. */
+  /** Writes several commands at once; one promise per command, in order (held while reconnecting). */
   send(commands: Arg[][]): Promise<Reply>[] {
-    if (!this.socket || this.status === "end" || this.status === "wait") {
-      return commands.map(() => Promise.reject(new ConnectionClosedError()));
+    if (this.status === "reconnecting") {
+      const pending: Pending[] = [];
+      const promises = commands.map(() => new Promise<Reply>((resolve, reject) => pending.push({ resolve, reject })));
+      this.offline.push({ commands, pending });
+      return promises;
     }
+    if (this.status !== "ready") return commands.map(() => Promise.reject(new ConnectionClosedError()));
+    return this.write(commands);
+  }
+
+  private write(commands: Arg[][]): Promise<Reply>[] {
+    const socket = this.socket;
+    if (!socket) return commands.map(() => Promise.reject(new ConnectionClosedError()));
     const promises = commands.map(
       () => new Promise<Reply>((resolve, reject) => this.pending.push({ resolve, reject })),
     );
-    this.socket.write(Buffer.concat(commands.map(encode)));
+    socket.write(Buffer.concat(commands.map(encode)));
     return promises;
   }
 
   disconnect(): void {
+    this.closing = true;
     this.socket?.destroy();
     this.ended();
   }
 
   async quit(): Promise<string> {
+    this.closing = true;
     if (this.status !== "ready") {
       this.disconnect();
       return "OK";
