@@ -145,7 +145,7 @@ export function isElementary(
 interface Split {
   n: number;
   d: number;
-  /** null-space basis, d rows of n (free-variable form) */
+  /** null-space basis, d rows of n (free-variable form); every buffer is longer than needed, only n (or d) entries count */
   basis: Float64Array;
   /** restricted system, up to n × d */
   r: Float64Array;
@@ -166,8 +166,28 @@ function nullBasis(
   const { m, n } = fill(columns, nets, isRow, work);
   const rank = rref(work.a, m, n, work.pivots);
   const d = n - rank;
-  const basis = new Float64Array(d * n);
-  const isPivot = new Uint8Array(Math.max(n, d));
+  let sp = work.split;
+  if (sp.u.length < n || sp.basis.length < d * n || sp.rPivots.length < d) {
+    const N = 2 * Math.max(n, 16);
+    sp = {
+      n: 0,
+      d: 0,
+      basis: new Float64Array(N * N),
+      r: new Float64Array(N * N),
+      rPivots: new Int32Array(N),
+      isPivot: new Uint8Array(N),
+      inside: new Uint8Array(N),
+      coords: new Float64Array(N * N),
+      cand: new Float64Array(N),
+      u: new Float64Array(N),
+    };
+    work.split = sp;
+  }
+  sp.n = n;
+  sp.d = d;
+  const { basis, isPivot } = sp;
+  basis.fill(0, 0, d * n);
+  isPivot.fill(0, 0, n);
   for (let r = 0; r < rank; r++) isPivot[work.pivots[r]] = 1;
   let k = 0;
   for (let f = 0; f < n; f++) {
@@ -176,36 +196,7 @@ function nullBasis(
     for (let r = 0; r < rank; r++) basis[k * n + work.pivots[r]] = -work.a[r * n + f];
     k++;
   }
-  let raw = work.split;
-  if (raw.u.length < n || raw.r.length < n * d || raw.coords.length < d * d || raw.rPivots.length < d) {
-    const N = 2 * Math.max(n, 16);
-    raw = {
-      n: 0,
-      d: 0,
-      basis: raw.basis,
-      r: new Float64Array(N * N),
-      rPivots: new Int32Array(N),
-      isPivot: raw.isPivot,
-      inside: new Uint8Array(N),
-      coords: new Float64Array(N * N),
-      cand: new Float64Array(N),
-      u: new Float64Array(N),
-    };
-    work.split = raw;
-  }
-  // exact-length views of the reused buffers
-  return {
-    n,
-    d,
-    basis,
-    r: raw.r.subarray(0, n * d),
-    rPivots: raw.rPivots.subarray(0, d),
-    isPivot,
-    inside: raw.inside.subarray(0, n),
-    coords: raw.coords.subarray(0, d * d),
-    cand: raw.cand.subarray(0, n),
-    u: raw.u.subarray(0, n),
-  };
+  return sp;
 }
 
 /**
@@ -238,7 +229,7 @@ function restrictedCoordinates(sp: Split): number {
 /** sp.cand = Σ_k coords[row k]·basis_k */
 function combine(sp: Split, row: number): Float64Array {
   const { n, d, basis, coords, cand } = sp;
-  cand.fill(0);
+  cand.fill(0, 0, n);
   for (let k = 0; k < d; k++) {
     const ck = coords[row * d + k];
     if (ck === 0) continue;
@@ -247,9 +238,9 @@ function combine(sp: Split, row: number): Float64Array {
   return cand;
 }
 
-function proportional(u: Float64Array, w: Float64Array): boolean {
+function proportional(u: Float64Array, w: Float64Array, n: number): boolean {
   let ratio = Number.NaN;
-  for (let i = 0; i < u.length; i++) {
+  for (let i = 0; i < n; i++) {
     const zu = Math.abs(u[i]) <= DEFAULTS.tolerance;
     const zw = Math.abs(w[i]) <= DEFAULTS.tolerance;
     if (zu && zw) continue;
@@ -262,9 +253,9 @@ function proportional(u: Float64Array, w: Float64Array): boolean {
 }
 
 /** One elementary vector inside the support of the balanced vector `v` (≥ 0, in the span of the basis), in sp.u. */
-function elementaryInside(v: Float64Array, sp: Split): Float64Array | null {
+function elementaryInside(v: number[], sp: Split): Float64Array | null {
   const { n, u, inside } = sp;
-  u.set(v);
+  for (let i = 0; i < n; i++) u[i] = v[i];
   for (let guard = 0; guard <= n; guard++) {
     let scale = 0;
     for (let i = 0; i < n; i++) scale = Math.max(scale, u[i]);
@@ -277,7 +268,7 @@ function elementaryInside(v: Float64Array, sp: Split): Float64Array | null {
     let w: Float64Array | undefined;
     for (let row = 0; row < count && !w; row++) {
       const cand = combine(sp, row);
-      if (!proportional(u, cand)) w = cand;
+      if (!proportional(u, cand, n)) w = cand;
     }
     if (!w) return null;
     let anyPositive = false;
@@ -330,11 +321,11 @@ function decomposePlanar(flux: number[], sp: Split): { multiplicity: number[]; r
     lo = Math.max(lo, up - Math.PI);
   }
   const out: { multiplicity: number[]; rate: number }[] = [];
-  const rays: Float64Array[] = [];
+  const rays: number[][] = [];
   for (const th of [hi, lo]) {
     const e0 = Math.cos(th) * p0 - Math.sin(th) * p1;
     const e1 = Math.cos(th) * p1 + Math.sin(th) * p0;
-    const x = new Float64Array(n);
+    const x: number[] = new Array(n);
     let scale = 0;
     for (let i = 0; i < n; i++) {
       x[i] = e0 * basis[i] + e1 * basis[n + i];
@@ -389,7 +380,7 @@ export function decomposeElementary(
     if (two) return two;
   }
   const out: { multiplicity: number[]; rate: number }[] = [];
-  const v = Float64Array.from(flux);
+  const v = flux.slice();
   let scale = 0;
   for (const x of flux) scale = Math.max(scale, x);
   for (let guard = 0; guard <= flux.length; guard++) {
@@ -398,7 +389,7 @@ export function decomposeElementary(
     if (!left) return out;
     const e = elementaryInside(v, sp);
     if (!e) return null;
-    const ints = integerProportional(e);
+    const ints = integerProportional(e, sp.n);
     if (!ints) return null;
     let beta = Number.POSITIVE_INFINITY;
     for (let i = 0; i < ints.length; i++) if (ints[i] > 0) beta = Math.min(beta, v[i] / ints[i]);

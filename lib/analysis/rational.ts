@@ -80,19 +80,36 @@ export function normaliseIntegers(v: number[]): { v: number[]; g: number } {
   return { v: v.map((x) => x / g), g };
 }
 
-/** Real vector with rational ratios to the smallest integer vector proportional to it, or null. */
-export function integerProportional(v: ArrayLike<number>): number[] | null {
+/** Real vector (its first n entries) with rational ratios to the smallest integer vector proportional to it, or null. */
+export function integerProportional(v: ArrayLike<number>, n: number = v.length): number[] | null {
   let min = Number.POSITIVE_INFINITY;
-  for (let i = 0; i < v.length; i++) if (v[i] > 0 && v[i] < min) min = v[i];
+  for (let i = 0; i < n; i++) if (v[i] > 0 && v[i] < min) min = v[i];
   if (!Number.isFinite(min)) return null;
-  const fr: [number, number][] = [];
+  const num: number[] = new Array(n);
+  const den: number[] = new Array(n);
   let l = 1;
-  for (let i = 0; i < v.length; i++) {
-    const q = toRational(v[i] / min);
+  for (let i = 0; i < n; i++) {
+    const x = v[i] / min;
+    const r = Math.round(x);
+    // most ratios are whole numbers: skip the continued fraction for them
+    if (Math.abs(x - r) <= DEFAULTS.tolerance * Math.max(1, x)) {
+      num[i] = r;
+      den[i] = 1;
+      continue;
+    }
+    const q = toRational(x);
     if (!q) return null;
-    fr.push(q);
+    num[i] = q[0];
+    den[i] = q[1];
     l = (l * q[1]) / gcd(l, q[1]);
     if (l > 1e6) return null;
   }
-  return normaliseIntegers(fr.map(([n, d]) => Math.round((n * l) / d))).v;
+  const out: number[] = new Array(n);
+  let g = 0;
+  for (let i = 0; i < n; i++) {
+    out[i] = Math.round((num[i] * l) / den[i]);
+    g = gcd(g, out[i]);
+  }
+  if (g > 1) for (let i = 0; i < n; i++) out[i] /= g;
+  return out;
 }
