@@ -30,8 +30,8 @@ function BudgetChart({ budget }: { budget: OxBudget }) {
   const s = budgetSeries(budget, { width_px: BAR_W, rowHeight_px: ROW_H, maxFamilies: MAX_FAMILIES });
   return (
     <div data-testid="budget" className="px-3 py-2 text-[11px]">
-      {/* the table keeps its largest height so that new numbers never move what is below or above */}
-      <div style={{ minHeight: MAX_ROWS * ROW_H + 16 }}>
+      {/* the chart keeps its largest height so that new numbers never move what is below or above */}
+      <div style={{ minHeight: MAX_ROWS * ROW_H + 16 + 34 }}>
         <table className="w-full border-collapse">
           <caption className="sr-only">Odd-oxygen production, loss and loss by family, molecules cm⁻³ s⁻¹</caption>
           <thead className="sr-only">
@@ -89,12 +89,12 @@ function BudgetChart({ budget }: { budget: OxBudget }) {
             </tr>
           </tbody>
         </table>
+        <p className="mt-1 min-h-[2.6em] text-stone-500">
+          {budget.definition.length ? `Ox = ${budget.definition.join(" + ")}. ` : ""}Loss ÷ production ={" "}
+          {formatNumber(budget.production_cm3s > 0 ? budget.loss_cm3s / budget.production_cm3s : null)}; loss by the
+          rate-limiting-step formula {formatNumber(budget.directLoss_cm3s)}.
+        </p>
       </div>
-      <p className="mt-1 min-h-[2.6em] text-stone-500">
-        {budget.definition.length ? `Ox = ${budget.definition.join(" + ")}. ` : ""}Loss ÷ production ={" "}
-        {formatNumber(budget.production_cm3s > 0 ? budget.loss_cm3s / budget.production_cm3s : null)}; loss by the
-        rate-limiting-step formula {formatNumber(budget.directLoss_cm3s)}.
-      </p>
     </div>
   );
 }

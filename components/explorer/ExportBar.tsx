@@ -40,7 +40,7 @@ export function ExportBar({ analysisId, onPng, onSvg, busy }: Props) {
       </span>
       <span className="flex items-center gap-1">
         <span className="text-stone-500">Tables</span>
-        {base && !busy ? (
+        {base ? (
           <>
             <a className={linkCls} href={`${base}/rates.csv`} download>
               rates.csv
@@ -67,12 +67,13 @@ export function ExportBar({ analysisId, onPng, onSvg, busy }: Props) {
           id="permalink"
           data-testid="permalink"
           readOnly
-          value={busy ? "" : permalink}
+          value={permalink}
           placeholder={busy ? "computing…" : "—"}
+          title={busy ? "the stored analysis on screen; a new one is being computed" : undefined}
           onFocus={(e) => e.currentTarget.select()}
           className="min-w-[120px] flex-1 rounded border border-stone-300 bg-stone-50 px-1.5 py-0.5 font-mono text-[11px] text-stone-700"
         />
-        <button type="button" className={linkCls} onClick={() => void copy()} disabled={!permalink || busy}>
+        <button type="button" className={linkCls} onClick={() => void copy()} disabled={!permalink}>
           {copied === "ok" ? "Copied ✓" : copied === "failed" ? "Press Ctrl+C" : "Copy"}
         </button>
       </span>
