@@ -188,6 +188,7 @@ export function Explorer(props: Props) {
 
   return (
     <div className="grid gap-2 p-2 md:grid-cols-[260px_minmax(0,1fr)] lg:h-[calc(100vh-38px)] lg:min-h-[700px] lg:grid-cols-[272px_minmax(0,1fr)_340px]">
+      <h1 className="sr-only">Catalytic ozone-loss cycle explorer</h1>
       <ConditionsPanel
         mechanisms={mechanisms}
         mechanismId={mechanismId}
