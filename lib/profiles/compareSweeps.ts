@@ -2,7 +2,9 @@
  * Two sweeps side by side: at every altitude both have, the Ox loss rate and
  * its split by family for A and B, the difference B − A, and the cycles
  * whose change explains most of it (largest |Δ| first; a cycle missing on
- * one side counts as 0 there, cycles matched by their step-list id).
+ * one side counts as 0 there; cycles are matched by their steps written as
+ * equations, so that the same cycle matches under two mechanisms whose
+ * reaction ids differ).
  * Rates in molecules cm⁻³ s⁻¹.
  */
 import { InputError } from "../errors";
@@ -46,11 +48,14 @@ function side(l: SweepLevel): ComparisonSideLevel {
 }
 
 export function explainDifference(a: SweepLevel, b: SweepLevel, total_cm3s: number, top: number): CycleChange[] {
-  const byId = new Map<string, CycleChange>();
-  const entry = (c: SweepLevel["cycles"][number]) =>
-    byId.get(c.id) ??
-    (byId
-      .set(c.id, {
+  const byKey = new Map<string, CycleChange>();
+  // stored sweeps from before stepsKey existed match by id
+  const keyOf = (c: SweepLevel["cycles"][number]) => c.stepsKey || c.id;
+  const entry = (c: SweepLevel["cycles"][number]): CycleChange => {
+    const k = keyOf(c);
+    let e = byKey.get(k);
+    if (!e) {
+      e = {
         cycleId: c.id,
         family: c.family,
         netEquation: c.netEquation,
@@ -58,11 +63,14 @@ export function explainDifference(a: SweepLevel, b: SweepLevel, total_cm3s: numb
         b_cm3s: 0,
         delta_cm3s: 0,
         shareOfDifference: null,
-      })
-      .get(c.id) as CycleChange);
+      };
+      byKey.set(k, e);
+    }
+    return e;
+  };
   for (const c of a.cycles) entry(c).a_cm3s += c.oxLoss_cm3s;
   for (const c of b.cycles) entry(c).b_cm3s += c.oxLoss_cm3s;
-  const all = [...byId.values()].map((c) => {
+  const all = [...byKey.values()].map((c) => {
     const delta = c.b_cm3s - c.a_cm3s;
     return { ...c, delta_cm3s: delta, shareOfDifference: total_cm3s !== 0 ? delta / total_cm3s : null };
   });

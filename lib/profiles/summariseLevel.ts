@@ -36,6 +36,7 @@ export function summariseLevel(request: AnalysisRequest, result: AnalysisResult,
     cycles: ok
       ? result.cycles.cycles.map((y) => ({
           id: y.id,
+          stepsKey: stepsKey(y.steps),
           family: y.family,
           netEquation: y.netEquation,
           rate_cm3s: y.rate_cm3s,
@@ -56,6 +57,14 @@ export function summariseLevel(request: AnalysisRequest, result: AnalysisResult,
     warmStarted,
     elapsed_ms: result.elapsed_ms,
   };
+}
+
+/** The steps of a cycle as sorted equations with their multiplicities. */
+export function stepsKey(steps: readonly { equation: string; multiplicity: number }[]): string {
+  return steps
+    .map((s) => (s.multiplicity > 1 ? `${s.multiplicity}×(${s.equation})` : s.equation))
+    .sort()
+    .join(" ; ");
 }
 
 /** A level whose condition or solve threw: its reason, nothing else. */

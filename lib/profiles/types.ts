@@ -115,6 +115,8 @@ export interface LevelBudget {
 /** A cycle at one level, reduced. */
 export interface LevelCycle {
   id: string;
+  /** the steps as equations with multiplicities, sorted ("2×(ClO + O -> Cl + O2) ; …"): matches a cycle across mechanisms whose reaction ids differ */
+  stepsKey: string;
   family: string;
   netEquation: string;
   /** molecules cm⁻³ s⁻¹ */

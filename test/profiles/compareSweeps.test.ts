@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
-import { compareSweeps } from "@/lib/profiles/compareSweeps";
+import { compareSweeps, explainDifference } from "@/lib/profiles/compareSweeps";
 import { comparisonCsv, sweepLevelsCsv } from "@/lib/profiles/csvTables";
 import { planSweep } from "@/lib/profiles/planSweep";
 import { runLevelBatch } from "@/lib/profiles/runLevelBatch";
@@ -95,5 +95,18 @@ describe("compareSweeps", () => {
     expect(c.levels[2].b.loss_cm3s).toBeNull();
     expect(c.warnings.join(" ")).toContain("35 km");
     expect(sweepLevelsCsv(b).split("\r\n")[3]).toContain("max-iterations,did not converge");
+  });
+});
+
+describe("explainDifference", () => {
+  it("matches the same cycle under two mechanisms whose reaction ids differ, by its steps", async () => {
+    const a = await sweep();
+    const b = structuredClone(a);
+    const level = b.levels[2];
+    level.cycles = level.cycles.map((c) => ({ ...c, id: `other-${c.id}`, oxLoss_cm3s: 2 * c.oxLoss_cm3s }));
+    const changes = explainDifference(a.levels[2], level, 1, 50);
+    expect(changes.length).toBe(a.levels[2].cycles.filter((c) => c.oxLoss_cm3s !== 0).length);
+    for (const c of changes) expectClose(c.b_cm3s, 2 * c.a_cm3s, { rel: 1e-12 }, c.netEquation);
+    expect(a.levels[2].cycles[0].stepsKey).toContain("->");
   });
 });
