@@ -223,7 +223,8 @@ export function findPathways(
   for (const { i: b } of order) {
     const producers: Work[] = [];
     const consumers: Work[] = [];
-    const next = new Map<string, Work>();
+    // pathways that neither make nor use b stay where they are; the map becomes the next one in place
+    const next = current;
     let Pcur = 0;
     let Dcur = 0;
     for (const w of current.values()) {
@@ -231,10 +232,12 @@ export function findPathways(
       if (v > 0) {
         producers.push(w);
         Pcur += w.rate * v;
+        current.delete(w.key);
       } else if (v < 0) {
         consumers.push(w);
         Dcur -= w.rate * v;
-      } else next.set(w.key, w);
+        current.delete(w.key);
+      }
     }
     processed[b] = 1;
     const dP = deletedPos[b];
