@@ -7,7 +7,9 @@ import type { ComparisonResult, SweepResult } from "./types";
 
 function cell(v: unknown): string {
   if (v === null || v === undefined) return "";
-  const s = typeof v === "number" ? (Number.isInteger(v) ? String(v) : v.toPrecision(8)) : String(v);
+  let s = typeof v === "number" ? (Number.isInteger(v) ? String(v) : v.toPrecision(8)) : String(v);
+  // a text cell that a spreadsheet would run as a formula (user labels) is written as text
+  if (typeof v === "string" && /^[=+\-@\t\r]/.test(s)) s = `'${s}`;
   return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 

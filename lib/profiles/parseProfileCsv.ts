@@ -68,7 +68,8 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions = {})
     id: "upload",
     title: meta.title || (options.fileName ?? "Uploaded profile"),
     source: "upload",
-    demo: false,
+    // a file that says it is invented demo data (as the demo profiles' own CSV does) stays labelled so
+    demo: meta.demo !== undefined,
     note: meta.note ?? "",
     levels,
     columns,
