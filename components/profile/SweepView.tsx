@@ -134,6 +134,13 @@ export function SweepView({
         <h2 id="h-levels" className="text-[14px] font-semibold">
           Levels
         </h2>
+        {result.columnSource !== "climatology" ? (
+          <p className="text-[12px] text-stone-600">
+            The explorer links open a level with the default climatology's overhead O3 column; this sweep took it from{" "}
+            {result.columnSource === "solved" ? "the O3 solved at the levels above" : "the profile's O3"}, so the
+            numbers there can differ slightly.
+          </p>
+        ) : null}
         <div className="overflow-x-auto">
           <table className="mt-1 w-full border-collapse text-[12px]" data-testid="levels-table">
             <thead>
