@@ -36,6 +36,9 @@ export const conditionSchema = z
       .optional(),
     jScale: finite.refine((v) => v >= 0 && v <= 100, "expected a factor between 0 and 100").optional(),
     ozone: z.enum(["held", "solved"]).optional(),
+    o3ColumnAbove_DU: finite
+      .refine((v) => v >= 0 && v <= 2000, "expected an overhead ozone column between 0 and 2000 DU")
+      .optional(),
   })
   .strict();
 

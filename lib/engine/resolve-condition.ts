@@ -56,11 +56,20 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
     }
   }
 
+  let J_s = restrictJ(mech, base.J_s);
+  let o3ColumnAbove_DU = base.o3ColumnAbove_DU;
+  if (input.o3ColumnAbove_DU !== undefined) {
+    o3ColumnAbove_DU = input.o3ColumnAbove_DU;
+    J_s = jAt(mech, { ...base, o3ColumnAbove_DU }, input, base.zenith_deg);
+    sources.o3Column = "given";
+  }
+
   const keep = new Set([...Object.keys(held_cm3), ...Object.keys(poolTotals_cm3), "T_K", "p_hPa", "zenith_deg"]);
   for (const k of ["o3Column", "J"]) keep.add(k);
   return {
     ...base,
-    J_s: restrictJ(mech, base.J_s),
+    o3ColumnAbove_DU,
+    J_s,
     held_cm3,
     poolTotals_cm3,
     sources: Object.fromEntries(Object.entries(sources).filter(([k]) => keep.has(k))),

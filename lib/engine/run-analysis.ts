@@ -11,7 +11,7 @@ import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
 import { analysisUncertainty } from "../uncertainty/analysisUncertainty";
 import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
-import type { AnalysisOptions, AnalysisRequest, AnalysisResult } from "./types";
+import type { AnalysisOptions, AnalysisRequest, AnalysisResult, DiurnalSummary } from "./types";
 import { ENGINE_VERSION } from "./version";
 
 export const ANALYSIS_DEFAULTS: Required<AnalysisOptions> = {
@@ -52,8 +52,23 @@ function emptyReport(warning: string, oxDefinition: CycleReport["oxDefinition"])
 }
 
 export interface RunOptions {
-  /** warm start: number densities by mechanism index from a neighbouring solve */
-  initialState?: number[];
+  /**
+   * warm start by mechanism index, cm⁻³: a neighbouring level's steady state
+   * (instantaneous) or its state at the report time (24-hour); default none
+   */
+  initialState?: readonly number[];
+  /**
+   * air number density of the level `initialState` comes from, cm⁻³: the state
+   * is scaled by [M] here / [M] there, since mixing ratios vary less between
+   * neighbouring levels than densities; default no scaling
+   */
+  initialM_cm3?: number;
+}
+
+/** An analysis, and the state a neighbouring level can warm-start from (null when the solve failed). */
+export interface AnalysisRun {
+  result: AnalysisResult;
+  nextState: number[] | null;
 }
 
 export function runAnalysis(
@@ -62,32 +77,61 @@ export function runAnalysis(
   request: AnalysisRequest,
   run: RunOptions = {},
 ): AnalysisResult {
+  return analyse(mech, mechanismRef, request, run).result;
+}
+
+/** The one composition of an analysis; profile levels use it too. */
+export function analyse(
+  mech: CompiledMechanism,
+  mechanismRef: { id: string; title: string },
+  request: AnalysisRequest,
+  run: RunOptions = {},
+): AnalysisRun {
   const t0 = performance.now();
   const options = { ...ANALYSIS_DEFAULTS, ...request.options };
   const condition = resolveCondition(mech, request.condition);
+  const initialState =
+    run.initialState && run.initialM_cm3 && run.initialM_cm3 > 0
+      ? run.initialState.map((v) => v * (condition.M_cm3 / (run.initialM_cm3 as number)))
+      : run.initialState?.slice();
   let steadyState: SteadyState;
+  let nextState: number[] | null;
+  let diurnalSummary: DiurnalSummary | undefined;
   if (condition.mode === "diurnal") {
-    const diurnal = solveDiurnal(mech, {
-      conditionsAt: (t_h: number) =>
-        solveConditionsOf(
-          condition,
-          jAt(
-            mech,
+    const diurnal = solveDiurnal(
+      mech,
+      {
+        conditionsAt: (t_h: number) =>
+          solveConditionsOf(
             condition,
-            request.condition,
-            solarZenithAngle({
-              latitude_deg: condition.latitude_deg,
-              dayOfYear: condition.dayOfYear,
-              localSolarTime_h: t_h,
-              year: yearOf(condition.date),
-            }),
+            jAt(
+              mech,
+              condition,
+              request.condition,
+              solarZenithAngle({
+                latitude_deg: condition.latitude_deg,
+                dayOfYear: condition.dayOfYear,
+                localSolarTime_h: t_h,
+                year: yearOf(condition.date),
+              }),
+            ),
           ),
-        ),
-      reportAt_h: condition.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h,
-    });
+        reportAt_h: condition.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h,
+      },
+      { initialState },
+    );
     steadyState = diurnal.average;
+    nextState = diurnal.status === "converged" ? [...diurnal.atReportTime.numberDensity_cm3] : null;
+    diurnalSummary = {
+      reportAt_h: diurnal.reportAt_h,
+      atLocalTime_cm3: [...diurnal.atReportTime.numberDensity_cm3],
+      atLocalTimeRates_cm3s: [...diurnal.atReportTime.rate_cm3s],
+      daysIntegrated: diurnal.daysIntegrated,
+      periodicityError: diurnal.periodicityError,
+    };
   } else {
-    steadyState = solveSteadyState(mech, solveConditionsOf(condition), { initialState: run.initialState });
+    steadyState = solveSteadyState(mech, solveConditionsOf(condition), { initialState });
+    nextState = steadyState.status === "converged" ? [...steadyState.numberDensity_cm3] : null;
   }
   const heldSpecies = Object.keys(condition.held_cm3);
   const cycleOptions = { fminRelative: options.fminRelative, oxDefinition: options.oxDefinition, heldSpecies };
@@ -112,14 +156,17 @@ export function runAnalysis(
     );
     return uncertainty ? { uncertainty } : {};
   };
-  return {
+  const result: AnalysisResult = {
     engineVersion: ENGINE_VERSION,
     mechanism: mechanismRef,
     condition,
     options,
     steadyState,
     cycles,
-    elapsed_ms: performance.now() - t0,
+    ...(diurnalSummary ? { diurnal: diurnalSummary } : {}),
+    elapsed_ms: 0,
     ...uncertaintyOf(),
   };
+  result.elapsed_ms = performance.now() - t0;
+  return { result, nextState };
 }

@@ -36,6 +36,8 @@ export interface ConditionInput {
   jScale?: number;
   /** hold O3 at the climatology ("held", default) or solve for it ("solved") */
   ozone?: "held" | "solved";
+  /** ozone column above the level, Dobson units (0–2000); default from the climatology. Sets the light, not the local O3. */
+  o3ColumnAbove_DU?: number;
 }
 
 export interface AnalysisOptions {
@@ -84,6 +86,19 @@ export interface ResolvedCondition {
   sources?: Record<string, string>;
 }
 
+/** The 24-hour solution besides its means (which are `steadyState`). */
+export interface DiurnalSummary {
+  /** local solar time of `atLocalTime`, h */
+  reportAt_h: number;
+  /** the instantaneous state of the periodic solution at reportAt_h: number densities by mechanism index, cm⁻³ */
+  atLocalTime_cm3: number[];
+  /** reaction rates at reportAt_h by mechanism index, molecules cm⁻³ s⁻¹ */
+  atLocalTimeRates_cm3s: number[];
+  daysIntegrated: number;
+  /** max relative day-to-day change of the last day */
+  periodicityError: number;
+}
+
 export interface AnalysisResult {
   engineVersion: string;
   mechanism: { id: string; title: string };
@@ -92,6 +107,8 @@ export interface AnalysisResult {
   options: Required<Pick<AnalysisOptions, "fminRelative" | "oxDefinition">> & AnalysisOptions;
   steadyState: SteadyState;
   cycles: CycleReport;
+  /** present in the 24-hour mode */
+  diurnal?: DiurnalSummary;
   /** wall time of the computation, ms */
   elapsed_ms: number;
   /** sensitivities and Monte Carlo ranges, when the options ask for them (lib/uncertainty) */

@@ -57,6 +57,22 @@ describe("resolving a condition", () => {
     expect(Math.abs(noon.zenith_deg - 45)).toBeLessThan(1);
   });
 
+  it("recomputes the light under an overhead ozone column given in Dobson units", () => {
+    const base = resolveCondition(reference, { altitude_km: 25, zenith_deg: 30 });
+    const thin = resolveCondition(reference, {
+      altitude_km: 25,
+      zenith_deg: 30,
+      o3ColumnAbove_DU: base.o3ColumnAbove_DU / 2,
+    });
+    expect(thin.o3ColumnAbove_DU).toBe(base.o3ColumnAbove_DU / 2);
+    expect(thin.sources?.o3Column).toBe("given");
+    // Less ozone overhead lets more UV through (Beer–Lambert; common practice): O(1D) production rises, NO2 photolysis (visible) barely moves.
+    expect(thin.J_s.O3_O1D).toBeGreaterThan(1.2 * base.J_s.O3_O1D);
+    expectClose(thin.J_s.NO2, base.J_s.NO2, { rel: 0.05 });
+    // The local O3 amount is not what the column changes.
+    expect(thin.held_cm3.O3).toBe(base.held_cm3.O3);
+  });
+
   it("throws if an override names an unknown species, pool or photolysis channel", () => {
     expect(() => resolveCondition(reference, { altitude_km: 30, held: { Xx: 1e-9 } })).toThrow(InputError);
     expect(() => resolveCondition(reference, { altitude_km: 30, poolTotals: { Iy: 1e-12 } })).toThrow(
@@ -101,6 +117,16 @@ describe("one analysis", () => {
     expect(r.steadyState.message.length).toBeGreaterThan(5);
     expect(r.cycles.cycles).toEqual([]);
     expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
+  });
+
+  it("reports the 24-hour means and the state at the chosen local time", () => {
+    const r = analyse({ altitude_km: 40, latitude_deg: 45, date: "2026-06-21", localSolarTime_h: 0, mode: "diurnal" });
+    expect(r.steadyState.status).toBe("converged");
+    expect(r.diurnal?.reportAt_h).toBe(0);
+    const iO = reference.speciesIndex.O;
+    // At local midnight atomic oxygen has gone (no photolysis; common practice), while the 24-hour mean is positive.
+    expect(r.diurnal!.atLocalTime_cm3[iO]).toBeLessThan(1e-3 * r.steadyState.numberDensity_cm3[iO]);
+    expect(r.cycles.cycles.length).toBeGreaterThan(0);
   });
 
   it("is deterministic: the same request gives the same numbers", () => {
