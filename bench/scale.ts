@@ -14,13 +14,17 @@
  * queue's worst case for overhead.
  *
  * Reported: wall time and samples per second (median of the repeats), and
- * the overhead per task of the queue against the pool: the median round
- * trip of one task at a time minus the pool's (same tasks).
+ * the overhead per task of the queue against the pool: tasks sent one at a
+ * time, alternately to the pool and to the queue (one worker), so that both
+ * see the same load of the shared machine; the overhead is the median of
+ * the paired differences of their round trips, for the sample tasks and for
+ * empty tasks (no level: transport only).
  *
  * Run by bench/scale.mjs (`npm run bench:scale`), which starts Redis and
  * PostgreSQL when none is reachable and the worker processes.
  */
 import { type ChildProcess, spawn } from "node:child_process";
+import os from "node:os";
 import { Queue, QueueEvents } from "bullmq";
 import { EnginePool, POOL_DEFAULTS } from "../lib/engine/pool";
 import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "../lib/jobs/bullmqConfig";
@@ -110,13 +114,19 @@ async function runAll(run: (t: EngineTask) => Promise<unknown>, tasks: EngineTas
   return { wall_ms: performance.now() - t0, converged };
 }
 
-/** Round trip of each task alone, ms. */
-async function latencies(run: (t: EngineTask) => Promise<unknown>, tasks: EngineTask[]) {
-  const out: number[] = [];
+/** Round trips of each task alone on a and then on b, ms: [a, b] per task. */
+async function pairedLatencies(
+  a: (t: EngineTask) => Promise<unknown>,
+  b: (t: EngineTask) => Promise<unknown>,
+  tasks: EngineTask[],
+): Promise<[number, number][]> {
+  const out: [number, number][] = [];
   for (const t of tasks) {
     const s = performance.now();
-    await run(t);
-    out.push(performance.now() - s);
+    await a(t);
+    const m = performance.now();
+    await b(t);
+    out.push([m - s, performance.now() - m]);
   }
   return out;
 }
@@ -176,7 +186,6 @@ export async function main() {
   const pool = new EnginePool({ ...POOL_DEFAULTS, timeout_ms: 120_000 });
   const poolRun = (t: EngineTask) => pool.run(t as never);
   await runAll(poolRun, tasks.slice(0, 20), o.inFlight); // warm-up: threads compile the mechanism
-  const poolLatency = await latencies(poolRun, latencyTasks);
   const poolRuns: { wall_ms: number; converged: number }[] = [];
   for (let r = 0; r < o.repeats; r++) poolRuns.push(await runAll(poolRun, tasks, tasks.length));
   const poolWall = median(poolRuns.map((x) => x.wall_ms));
@@ -189,10 +198,8 @@ export async function main() {
     converged: poolRuns[0].converged,
     runs_ms: poolRuns.map((x) => x.wall_ms),
   });
-  await pool.close();
-
   const base = bullmqConfigFromEnv();
-  let queueLatency: number[] = [];
+  let paired: { sample: [number, number][]; empty: [number, number][] } = { sample: [], empty: [] };
   for (const n of o.workers) {
     const config: BullmqConfig = { ...base, prefix: `ozbench${process.pid}w${n}` };
     const procs = await Promise.all(
@@ -212,7 +219,15 @@ export async function main() {
       await runAll((t) => warm.run(t), tasks.slice(0, 20 * n), o.inFlight);
       if (n === 1) {
         const lat = runner("latency");
-        queueLatency = await latencies((t) => lat.run(t), latencyTasks);
+        const empty: EngineTask[] = latencyTasks.map((_, i) => ({
+          kind: "profile-levels",
+          mechanism: MECH,
+          batch: { tasks: [], chain: false, initialM_cm3: i },
+        }));
+        paired = {
+          sample: await pairedLatencies(poolRun, (t) => lat.run(t), latencyTasks),
+          empty: await pairedLatencies(poolRun, (t) => lat.run(t), empty),
+        };
       }
       const runs: { wall_ms: number; converged: number }[] = [];
       for (let r = 0; r < o.repeats; r++) {
@@ -237,14 +252,18 @@ export async function main() {
     }
   }
 
-  const overhead = {
-    poolRoundTrip_median_ms: median(poolLatency),
-    queueRoundTrip_median_ms: median(queueLatency),
-    queueOverheadPerTask_ms: median(queueLatency) - median(poolLatency),
-    tasks: latencyTasks.length,
-  };
-  console.log(
-    `one task at a time (${overhead.tasks} tasks): pool ${overhead.poolRoundTrip_median_ms.toFixed(1)} ms, queue ${overhead.queueRoundTrip_median_ms.toFixed(1)} ms median round trip → queue overhead ${overhead.queueOverheadPerTask_ms.toFixed(1)} ms per task`,
-  );
-  return { rows, overhead, settings: { ...o } };
+  await pool.close();
+  const summary = (pairs: [number, number][]) => ({
+    poolRoundTrip_median_ms: median(pairs.map((p) => p[0])),
+    queueRoundTrip_median_ms: median(pairs.map((p) => p[1])),
+    queueOverheadPerTask_median_ms: median(pairs.map((p) => p[1] - p[0])),
+    tasks: pairs.length,
+  });
+  const overhead = { sampleTasks: summary(paired.sample), emptyTasks: summary(paired.empty) };
+  for (const [what, v] of Object.entries(overhead)) {
+    console.log(
+      `one ${what === "sampleTasks" ? "sample task" : "empty task"} at a time (${v.tasks}, alternating): pool ${v.poolRoundTrip_median_ms.toFixed(1)} ms, queue ${v.queueRoundTrip_median_ms.toFixed(1)} ms median round trip; queue overhead ${v.queueOverheadPerTask_median_ms.toFixed(1)} ms per task (median of paired differences)`,
+    );
+  }
+  return { rows, overhead, settings: { ...o }, loadAverage: os.loadavg() };
 }

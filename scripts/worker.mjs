@@ -5,7 +5,7 @@
 // batches, sample blocks) from Redis and computes tasks in its own engine
 // worker threads (OZONE_WORKER_TASKS, default: the cores). Stops cleanly on
 // SIGTERM/SIGINT: entries it had not finished are taken back by the others.
-import { existsSync, renameSync, rmSync } from "node:fs";
+import { existsSync, readdirSync, renameSync, rmSync } from "node:fs";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import { build } from "esbuild";
@@ -43,7 +43,18 @@ if (!existsSync(engineBundle)) {
   renameSync(tmp, engineBundle);
 }
 
+// each worker bundles to its own file; files of workers that are gone (killed) are removed
+for (const f of readdirSync(path.join(root, ".engine"))) {
+  const m = /^queue-worker\.(\d+)\.mjs$/.exec(f);
+  if (!m) continue;
+  try {
+    process.kill(Number(m[1]), 0);
+  } catch {
+    rmSync(path.join(root, ".engine", f), { force: true });
+  }
+}
 const out = path.join(root, ".engine", `queue-worker.${process.pid}.mjs`);
+process.on("exit", () => rmSync(out, { force: true }));
 await build({
   stdin: {
     contents: `
@@ -54,7 +65,15 @@ await build({
       export async function main() {
         const config = bullmqConfigFromEnv();
         const pool = new EnginePool({ ...POOL_DEFAULTS, size: config.workerTasks });
-        const worker = await startQueueWorker(config, { handlers: JOB_HANDLERS, runTask: (t) => pool.run(t) });
+        const worker = await startQueueWorker(config, {
+          handlers: JOB_HANDLERS,
+          runTask: (t) => pool.run(t),
+          // Redis gone for good: exit, so that a supervisor starts a fresh worker
+          onLost: () => {
+            console.error("queue worker: the connection to Redis is lost; exiting");
+            process.exit(1);
+          },
+        });
         return { worker, config, close: async () => { await worker.close(); await pool.close(); } };
       }
     `,

@@ -114,10 +114,12 @@ export class BullmqJobBackend implements JobBackend {
   }
 
   async status(id: string): Promise<JobStatus | null> {
-    const job = await this.queue.getJob(id);
+    let job = await this.queue.getJob(id);
     if (!job) return null;
     const client = await this.redis();
     const [state, cancelledAt] = await Promise.all([job.getState(), client.get(cancelKey(this.config, id))]);
+    // finished between the two reads: read the job again for its result or failure
+    if ((state === "completed" || state === "failed") && !job.finishedOn) job = (await this.queue.getJob(id)) ?? job;
     return toJobStatus(job, state, cancelledAt);
   }
 

@@ -21,6 +21,7 @@ import { createHash } from "node:crypto";
 import { hostname } from "node:os";
 import { type Job, Queue, QueueEvents, UnrecoverableError, Worker } from "bullmq";
 import { EngineError } from "../errors";
+import { parseJobError } from "./bullmqBackend";
 import {
   type BullmqConfig,
   cancelKey,
@@ -46,6 +47,8 @@ export type QueueWorkerOptions = Partial<typeof WORKER_DEFAULTS> & {
   runTask: (task: unknown) => Promise<unknown>;
   /** this worker's name in Redis (shown as the processor of its entries); default host-pid */
   name?: string;
+  /** called when the connection to Redis is lost for good (it is re-opened for a minute first) */
+  onLost?: () => void;
 };
 
 export interface QueueWorker {
@@ -85,7 +88,10 @@ export function queueTaskRunner(
       try {
         return await entry.waitUntilFinished(taskEvents);
       } catch (e) {
-        throw new EngineError("engine-failure", `a task of job ${jobId} failed: ${(e as Error).message}`);
+        // the task's own error as the embedded pool would have thrown it (e.g. "timeout"), after its retries
+        const err = parseJobError((e as Error).message);
+        if (err.code === "internal") throw new EngineError("engine-failure", `a task of job ${jobId} failed`);
+        throw new EngineError(err.code, err.message, err.path ? { path: err.path } : undefined);
       }
     },
   };
@@ -103,6 +109,10 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
   await taskEvents.waitUntilReady();
   const redis = connect(config);
   await redis.connect();
+  let closing = false;
+  redis.on("end", () => {
+    if (!closing) o.onLost?.();
+  });
   const isCancelled = async (jobId: string) => (await redis.get(cancelKey(config, jobId))) !== null;
   const workerOptions = {
     ...common,
@@ -120,7 +130,14 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
     async (job: Job<TaskData>) => {
       // a cancelled job's remaining tasks are not computed
       if (await isCancelled(job.data.jobId)) return null;
-      return o.runTask(job.data.task);
+      try {
+        return await o.runTask(job.data.task);
+      } catch (e) {
+        if (!(e instanceof EngineError)) throw e;
+        // a crashed engine thread is worth another try; a time limit or a bad input would fail again
+        if (e.code === "engine-failure") throw new Error(errorJson(e));
+        throw new UnrecoverableError(errorJson(e));
+      }
     },
     { ...workerOptions, connection: connect(config), concurrency: config.workerTasks },
   );
@@ -140,8 +157,12 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
       const poll = setInterval(async () => {
         if (!controller.signal.aborted && (await isCancelled(id).catch(() => false))) controller.abort(cancelled);
       }, o.cancelPoll_ms);
+      // a job taken over from a worker that died starts its handler again; its finished tasks come back from
+      // their stored results at once, and the progress shown does not fall back meanwhile
+      const before = (job.progress && typeof job.progress === "object" ? job.progress : {}) as Partial<JobProgress>;
       let lastWrite = 0;
       let pending: JobProgress | null = null;
+      let flushTimer: NodeJS.Timeout | null = null;
       let flushing: Promise<void> = Promise.resolve();
       const write = (p: JobProgress) => {
         flushing = flushing.then(() => job.updateProgress(p as unknown as object)).catch(() => {});
@@ -150,13 +171,25 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
         jobId: id,
         signal: controller.signal,
         progress(done, total, stage) {
-          const p: JobProgress = { done, total, stage: stage ?? "running", updatedAt: new Date().toISOString() };
+          const shown = before.total === total ? Math.max(done, before.done ?? 0) : done;
+          const p: JobProgress = { done: shown, total, stage: stage ?? "running", updatedAt: new Date().toISOString() };
           const now = Date.now();
           if (now - lastWrite >= o.progressEvery_ms) {
             lastWrite = now;
             pending = null;
             write(p);
-          } else pending = p;
+          } else {
+            pending = p;
+            // written a little later unless a newer one comes first
+            flushTimer ??= setTimeout(() => {
+              flushTimer = null;
+              if (pending) {
+                lastWrite = Date.now();
+                write(pending);
+                pending = null;
+              }
+            }, o.progressEvery_ms);
+          }
         },
         tasks: runnerFor(id, controller.signal),
       };
@@ -174,6 +207,7 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
         throw e instanceof Error ? e : new Error(String(e));
       } finally {
         clearInterval(poll);
+        if (flushTimer) clearTimeout(flushTimer);
       }
     },
     { ...workerOptions, connection: connect(config), concurrency: config.workerJobs },
@@ -187,6 +221,7 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
   return {
     name,
     async close() {
+      closing = true;
       await Promise.all([jobsWorker.close(), tasksWorker.close()]);
       await taskEvents.close();
       await tasksQueue.close();
