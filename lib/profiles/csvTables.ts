@@ -3,19 +3,8 @@
  * quoting, one row per altitude (or per altitude and cycle). Failed levels
  * keep their row with the status and reason and empty numbers.
  */
+import { csvTable } from "../csv";
 import type { ComparisonResult, SweepResult } from "./types";
-
-function cell(v: unknown): string {
-  if (v === null || v === undefined) return "";
-  let s = typeof v === "number" ? (Number.isInteger(v) ? String(v) : v.toPrecision(8)) : String(v);
-  // a text cell that a spreadsheet would run as a formula (user labels) is written as text
-  if (typeof v === "string" && /^[=+\-@\t\r]/.test(s)) s = `'${s}`;
-  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
-export function csvTable(header: string[], rows: unknown[][]): string {
-  return `${[header, ...rows].map((r) => r.map(cell).join(",")).join("\r\n")}\r\n`;
-}
 
 /** One row per level: condition, status, Ox production and loss, loss and fraction by family. */
 export function sweepLevelsCsv(r: SweepResult): string {

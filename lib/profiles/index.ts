@@ -1,7 +1,7 @@
 export { analyseLevel, type LevelRun, type LevelRunOptions } from "./analyseLevel";
 export { builtinProfiles, resolveProfileSpec } from "./builtinProfiles";
 export { COMPARE_DEFAULTS, type CompareOptions, compareSweeps, explainDifference } from "./compareSweeps";
-export { comparisonCsv, csvTable, sweepCyclesCsv, sweepLevelsCsv } from "./csvTables";
+export { comparisonCsv, sweepCyclesCsv, sweepLevelsCsv } from "./csvTables";
 export { fromDemoProfile } from "./fromDemoProfile";
 export { interpolateProfile } from "./interpolateProfile";
 export { GRID_DEFAULTS, levelGrid } from "./levelGrid";

@@ -1,16 +1,9 @@
 /** CSV exports of an analysis, with units in the headers (RFC 4180 quoting). */
+import { csvTable as toCsv } from "../csv";
 import type { AnalysisResult } from "../engine/types";
 import { monteCarloCsv, sensitivityCsv } from "../uncertainty";
 
-function cell(v: unknown): string {
-  if (v === null || v === undefined) return "";
-  const s = typeof v === "number" ? (Number.isInteger(v) ? String(v) : v.toPrecision(8)) : String(v);
-  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-}
-
-export function toCsv(header: string[], rows: unknown[][]): string {
-  return `${[header, ...rows].map((r) => r.map(cell).join(",")).join("\r\n")}\r\n`;
-}
+export { toCsv };
 
 export function ratesCsv(r: AnalysisResult): string {
   const ox = new Map(r.cycles.perReaction.map((p) => [p.reactionId, p]));

@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import { InputError } from "@/lib/errors";
-import { csvTable } from "@/lib/profiles/csvTables";
 import { parseProfileCsv } from "@/lib/profiles/parseProfileCsv";
 import { profileToCsv } from "@/lib/profiles/profileToCsv";
 import { standardProfile } from "@/lib/profiles/standardProfile";
@@ -163,29 +162,5 @@ describe("profileToCsv", () => {
     // geometric (19.937 km' geopotential) p = 5474.89 Pa · exp(34.1632 K/km' · 0.0627 km' / 216.65 K) = 55.29 hPa
     expectClose(q.levels[20].T_K as number, 216.65, { abs: 0.01 });
     expectClose(q.levels[20].p_hPa as number, 55.293, { rel: 2e-4 });
-  });
-});
-
-describe("csvTable", () => {
-  it("quotes commas and quotes, and writes text that looks like a formula as text", () => {
-    expect(
-      csvTable(
-        ["a", "b"],
-        [
-          ["x,y", 'say "hi"'],
-          ["=SUM(A1)", -1.5],
-        ],
-      ),
-    ).toBe('a,b\r\n"x,y","say ""hi"""\r\n\'=SUM(A1),-1.5000000\r\n');
-  });
-});
-
-describe("parseProfileCsv of a demo profile's own CSV", () => {
-  it("keeps the invented-data label", () => {
-    const p = parseProfileCsv(
-      "# title: x\n# demo: invented data for demonstration, not a measurement\naltitude (km),T (K),p (hPa)\n20,216.65,55.29\n",
-    );
-    expect(p.demo).toBe(true);
-    expect(parseProfileCsv("altitude (km),T (K),p (hPa)\n20,216.65,55.29\n").demo).toBe(false);
   });
 });

@@ -1,0 +1,1 @@
+export { csvCell, csvRow, csvTable } from "./writeCsv";
