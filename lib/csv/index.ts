@@ -1,1 +1,2 @@
+export { readCsv } from "./readCsv";
 export { csvCell, csvRow, csvTable } from "./writeCsv";
