@@ -24,6 +24,8 @@ const STATUS_BY_CODE: Record<string, number> = {
   "not-found": 404,
   "unknown-mechanism": 404,
   timeout: 422,
+  busy: 503,
+  cancelled: 409,
   "engine-failure": 500,
 };
 
