@@ -14,7 +14,7 @@
  */
 import "server-only";
 import { z } from "zod";
-import { compileSource } from "../engine/mechanism-source";
+import { compileSource, type MechanismSource } from "../engine/mechanism-source";
 import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { analysisRequestSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
@@ -91,14 +91,40 @@ async function inLanes<T, R>(items: readonly T[], signal: AbortSignal, work: (it
   return out;
 }
 
-/** Central analysis, then the Monte Carlo batches in parallel; stores an analysis record. */
-async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
+export const UNCERTAINTY_JOB_DEFAULTS = {
+  /** time limit of one pool job of these kinds, ms (a sensitivity run at 10 km on the reference mechanism takes about a minute) */
+  timeout_ms: 600_000,
+  /** samples in the first batch of a level, which measures the cost of a sample */
+  probeBatch: 4,
+  /** later batches are sized to take about this long, ms */
+  batchTarget_ms: 1500,
+  /** most samples in one batch */
+  maxBatch: 50,
+};
+
+/** Counts units of work for the progress report of one job. */
+interface Progress {
+  step(done: number, stage: string): void;
+}
+
+/**
+ * One analysis with its uncertainty: the central solve (with the
+ * sensitivities when asked) as one pool job, then the samples in batches,
+ * the first small and the rest sized from its cost, so that no job runs
+ * long whatever the level costs (a sample at 10 km costs ~40× one at 40 km).
+ */
+async function analysisWithUncertainty(
+  src: MechanismSource,
+  request: AnalysisRequest,
+  signal: AbortSignal,
+  progress: Progress,
+): Promise<AnalysisResult> {
   const t0 = performance.now();
-  const src = await mechanismSource(request.mechanismId);
   const samples = request.options?.uncertaintySamples ?? 0;
-  ctx.progress(0, samples + 1, "central steady state");
   const centralRequest = { ...request, options: { ...request.options, uncertaintySamples: 0 } };
-  const { result } = await enginePool().run({ kind: "analysis", mechanism: src, request: centralRequest });
+  const limit = UNCERTAINTY_JOB_DEFAULTS.timeout_ms;
+  const { result } = await enginePool().run({ kind: "analysis", mechanism: src, request: centralRequest }, limit);
+  progress.step(1, "central steady state");
   const out: AnalysisResult = { ...result, options: { ...result.options, ...request.options } };
   const warnings = [...(result.uncertainty?.warnings ?? [])];
   if (samples > 0 && result.condition.mode === "diurnal")
@@ -123,19 +149,55 @@ async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
         oxDefinition: result.options.oxDefinition,
         heldSpecies: Object.keys(result.condition.held_cm3),
       },
-      { samples, seed: request.options?.uncertaintySeed },
+      { samples, seed: request.options?.uncertaintySeed, batchSize: samples },
     );
-    let done = 0;
-    const batches: SampleBatchResult[] = await inLanes(plan.batches, ctx.signal, async (batch) => {
-      const r = (await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch })).result;
-      done += batch.count;
-      ctx.progress(1 + done, samples + 1, `Monte Carlo samples (${done} of ${samples})`);
-      return r;
-    });
-    const monteCarlo: MonteCarloResult = finishMonteCarlo(plan, batches, performance.now() - t0);
+    const template = plan.batches[0];
+    const { probeBatch, batchTarget_ms, maxBatch } = UNCERTAINTY_JOB_DEFAULTS;
+    let cursor = 0;
+    let spent_ms = 0;
+    let measured = 0;
+    const results: SampleBatchResult[] = [];
+    const runOne = async () => {
+      if (signal.aborted) throw signal.reason;
+      const size =
+        measured === 0
+          ? probeBatch
+          : Math.max(1, Math.min(maxBatch, Math.floor(batchTarget_ms / (spent_ms / measured))));
+      const batch = { ...template, start: cursor, count: Math.min(size, samples - cursor) };
+      cursor += batch.count;
+      const b0 = performance.now();
+      results.push((await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch }, limit)).result);
+      spent_ms += performance.now() - b0;
+      measured += batch.count;
+      progress.step(batch.count, "Monte Carlo samples");
+    };
+    // the probe batch alone, then one lane more than the pool has workers
+    await runOne();
+    await Promise.all(
+      Array.from({ length: POOL_DEFAULTS.size + 1 }, async () => {
+        while (cursor < samples) await runOne();
+      }),
+    );
+    const monteCarlo: MonteCarloResult = finishMonteCarlo(plan, results, performance.now() - t0);
     out.uncertainty = { ...result.uncertainty, monteCarlo, warnings };
   }
   if (!out.uncertainty && warnings.length > 0) out.uncertainty = { warnings };
+  return out;
+}
+
+/** One analysis: stores an analysis record with `result.uncertainty`. */
+async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
+  const src = await mechanismSource(request.mechanismId);
+  const samples = request.options?.uncertaintySamples ?? 0;
+  let done = 0;
+  const total = samples + 1;
+  ctx.progress(0, total, "central steady state");
+  const out = await analysisWithUncertainty(src, request, ctx.signal, {
+    step: (n, stage) => {
+      done += n;
+      ctx.progress(done, total, done > 1 ? `${stage} (${done - 1} of ${samples})` : stage);
+    },
+  });
   const id = newRecordId();
   await getStore().putAnalysis({
     id,
@@ -148,15 +210,24 @@ async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
   return { resultId: id, resultKind: "analysis" };
 }
 
-/** Every converged level of a stored sweep, one pool job each; stores an uncertainty-profile record. */
+/** Every converged level of a stored sweep, as analysisWithUncertainty; stores an uncertainty-profile record. */
 async function profileJob(input: Extract<UncertaintyJobInput, { profileId: string }>, ctx: JobContext) {
   const t0 = performance.now();
   const profile = await getProfileRecord(input.profileId, "profileId");
   const levels = profile.body.result.levels;
   const src = await mechanismSource(profile.body.request.mechanismId);
   const seedValue = input.seed ?? 1;
+  const converged = levels.filter((l) => l.status === "converged").length;
+  const total = converged * (input.samples + 1);
   let done = 0;
-  ctx.progress(0, levels.length, "levels");
+  let levelsDone = 0;
+  ctx.progress(0, total, "levels");
+  const progress: Progress = {
+    step: (n) => {
+      done += n;
+      ctx.progress(done, total, `levels (${levelsDone} of ${converged} done)`);
+    },
+  };
   const results: UncertaintyProfileLevel[] = await inLanes(
     levels.map((level, i) => ({ level, i })),
     ctx.signal,
@@ -175,9 +246,8 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
         },
       };
       try {
-        const { result } = await enginePool().run({ kind: "analysis", mechanism: src, request });
-        done++;
-        ctx.progress(done, levels.length, `levels (${done} of ${levels.length})`);
+        const result = await analysisWithUncertainty(src, request, ctx.signal, progress);
+        levelsDone++;
         return {
           ...base,
           status: result.steadyState.status === "converged" ? "ok" : result.steadyState.status,
@@ -186,7 +256,8 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
           sensitivity: result.uncertainty?.sensitivity ?? null,
         };
       } catch (e) {
-        done++;
+        if (ctx.signal.aborted) throw e;
+        levelsDone++;
         return { ...base, status: "failed", message: e instanceof Error ? e.message : String(e) };
       }
     },

@@ -100,6 +100,9 @@ describe("uncertainty jobs", () => {
     });
     const s = await finished((await startUncertaintyJob({ profileId, samples: 6, seed: 2 })).id);
     expect(s.state).toBe("done");
+    // progress counts the central solve and the samples of each converged level
+    expect(s.total).toBe(2 * (6 + 1));
+    expect(s.done).toBe(s.total);
     const rec = await getUncertaintyProfile(s.resultId as string);
     expect(rec.body.levels.map((l) => l.status)).toEqual(["ok", "ok", "max-iterations"]);
     expect(rec.body.levels[2].monteCarlo).toBeNull();
