@@ -3,15 +3,20 @@
  * queue with 1, 2 and 4 worker processes (`npm run worker`, one engine
  * thread each) on this machine.
  *
- * Workload, a stand-in for a Monte Carlo run (lib/uncertainty is not there
- * yet): 1,000 samples over the 51-level profile of the reference mechanism
- * (U.S. Standard Atmosphere 1976, 10–60 km every 1 km, instantaneous, O3
- * held). Sample k is level k mod 51 with every photolysis frequency scaled
- * by a log-normal factor (σ = 0.2 in ln J, invented for the benchmark),
- * warm-started from that level's nominal steady state, as a Monte Carlo
- * sample starts from the nominal solution. Each sample is one task (a
- * "profile-levels" engine job of one level): sample-sized tasks, the
- * queue's worst case for overhead.
+ * Workloads (BENCH_WORKLOAD), both over the 51-level profile of the
+ * reference mechanism (U.S. Standard Atmosphere 1976, 10–60 km every 1 km,
+ * instantaneous, O3 held):
+ *
+ * - "mc" (default): a Monte Carlo run of lib/uncertainty, 1,020 samples
+ *   (20 per level, seed 1): per level the central analysis, then
+ *   planMonteCarlo's sample batches ("uncertainty-samples" engine jobs:
+ *   rate constants drawn from their stated uncertainties, steady state from
+ *   the central state, cycle analysis, outputs), BENCH_BATCH samples per
+ *   task (default 1: sample-sized tasks, the queue's worst case).
+ * - "levels": a stand-in needing no lib/uncertainty: 1,000 level solves,
+ *   sample k at level k mod 51 with every J scaled by a log-normal factor
+ *   (σ = 0.2 in ln J, invented for the benchmark), warm-started from the
+ *   level's nominal state; one "profile-levels" task per sample.
  *
  * Reported: wall time and samples per second (median of the repeats), and
  * the overhead per task of the queue against the pool: tasks sent one at a
@@ -27,17 +32,23 @@ import { type ChildProcess, spawn } from "node:child_process";
 import os from "node:os";
 import { Queue, QueueEvents } from "bullmq";
 import { EnginePool, POOL_DEFAULTS } from "../lib/engine/pool";
+import type { AnalysisResult } from "../lib/engine/types";
 import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "../lib/jobs/bullmqConfig";
 import { queueTaskRunner } from "../lib/jobs/bullmqWorker";
 import type { TaskRunner } from "../lib/jobs/types";
 import { loadBuiltinMechanism } from "../lib/mechanism";
 import { planSweep } from "../lib/profiles/planSweep";
-import { type LevelBatchResult, runLevelBatch } from "../lib/profiles/runLevelBatch";
+import { runLevelBatch } from "../lib/profiles/runLevelBatch";
 import { standardProfile } from "../lib/profiles/standardProfile";
+import { planMonteCarlo } from "../lib/uncertainty/monteCarlo";
 
 export const BENCH_DEFAULTS = {
-  /** Monte Carlo samples; default 1000 */
-  samples: Number(process.env.BENCH_SAMPLES ?? 1000),
+  /** "mc" (lib/uncertainty sample batches) or "levels" (J-scaled level solves); default "mc" */
+  workload: (process.env.BENCH_WORKLOAD ?? "mc") as "mc" | "levels",
+  /** samples ("mc": per level, × 51); default 1000 levels, 20 per level for "mc" */
+  samples: Number(process.env.BENCH_SAMPLES ?? (process.env.BENCH_WORKLOAD === "levels" ? 1000 : 20)),
+  /** samples per task for "mc"; default 1 */
+  batch: Number(process.env.BENCH_BATCH ?? 1),
   /** repeats of each configuration (the median is reported); default 3 */
   repeats: Number(process.env.BENCH_REPEATS ?? 3),
   /** tasks timed one at a time for the per-task overhead; default 60 */
@@ -52,7 +63,57 @@ export const BENCH_DEFAULTS = {
 
 const MECH = { id: "reference", title: "reference" };
 
-type EngineTask = { kind: "profile-levels"; mechanism: typeof MECH; batch: unknown };
+type EngineTask = { kind: "profile-levels" | "uncertainty-samples"; mechanism: typeof MECH; batch: unknown };
+
+/** Monte Carlo sample batches over the profile: the central analysis of each level in the pool, then planMonteCarlo. */
+async function monteCarloTasks(pool: EnginePool, perLevel: number, batchSize: number): Promise<EngineTask[]> {
+  const mech = loadBuiltinMechanism("reference").mechanism;
+  const plan = planSweep(
+    { mechanismId: "reference", profile: { kind: "standard" }, grid: { from_km: 10, to_km: 60, step_km: 1 } },
+    standardProfile(),
+    mech,
+  );
+  const centrals = await Promise.all(
+    plan.tasks.map((t) => pool.run({ kind: "analysis", mechanism: MECH, request: t.request } as never)),
+  );
+  const out: EngineTask[] = [];
+  for (const c of centrals as { result: AnalysisResult }[]) {
+    const r = c.result;
+    if (r.steadyState.status !== "converged") continue;
+    const mc = planMonteCarlo(
+      mech,
+      {
+        T_K: r.condition.T_K,
+        M_cm3: r.condition.M_cm3,
+        J_s: r.condition.J_s,
+        held_cm3: r.condition.held_cm3,
+        poolTotals_cm3: r.condition.poolTotals_cm3,
+      },
+      r.steadyState,
+      r.cycles,
+      {
+        fminRelative: r.options.fminRelative,
+        oxDefinition: r.options.oxDefinition,
+        heldSpecies: Object.keys(r.condition.held_cm3),
+      },
+      { samples: perLevel, seed: 1, batchSize },
+    );
+    for (const b of mc.batches) out.push({ kind: "uncertainty-samples", mechanism: MECH, batch: b });
+  }
+  return out;
+}
+
+/** Samples a task's result counts as done: the level, or the samples that did not fail. */
+function goodSamples(out: unknown): number {
+  const r = (out as { result: { levels?: { status: string }[]; values?: unknown[] } }).result;
+  if (r.levels) return r.levels.filter((l) => l.status === "converged").length;
+  return (r.values ?? []).filter((v) => v !== null).length;
+}
+
+const samplesIn = (t: EngineTask) =>
+  t.kind === "uncertainty-samples"
+    ? (t.batch as { count: number }).count
+    : (t.batch as { tasks: unknown[] }).tasks.length;
 
 /** Deterministic standard normal draws (mulberry32 + Box–Muller). */
 function normals(n: number, seed = 12_345): number[] {
@@ -106,8 +167,9 @@ async function runAll(run: (t: EngineTask) => Promise<unknown>, tasks: EngineTas
   await Promise.all(
     Array.from({ length: Math.min(inFlight, tasks.length) }, async () => {
       while (next < tasks.length) {
-        const out = (await run(tasks[next++])) as { result: LevelBatchResult };
-        if (out.result.levels[0].status === "converged") converged++;
+        // read after the await: `converged += await …` would add to a stale value
+        const good = goodSamples(await run(tasks[next++]));
+        converged += good;
       }
     }),
   );
@@ -163,6 +225,7 @@ export interface ScaleRow {
   backend: string;
   consumers: number;
   samples: number;
+  tasks: number;
   median_wall_ms: number;
   samplesPerSecond: number;
   converged: number;
@@ -171,30 +234,36 @@ export interface ScaleRow {
 
 export async function main() {
   const o = BENCH_DEFAULTS;
-  console.log(`preparing ${o.samples} samples over 51 levels (nominal sweep)…`);
-  const tasks = sampleTasks(o.samples, o.sigmaLnJ);
-  const latencyTasks = tasks.slice(0, o.latencyTasks);
+  // the embedded back end's pool: one thread per core
+  const pool = new EnginePool({ ...POOL_DEFAULTS, timeout_ms: 600_000 });
+  const poolRun = (t: EngineTask) => pool.run(t as never);
+  console.log(`preparing the "${o.workload}" workload over 51 levels…`);
+  const tasks =
+    o.workload === "mc" ? await monteCarloTasks(pool, o.samples, o.batch) : sampleTasks(o.samples, o.sigmaLnJ);
+  const nSamples = tasks.reduce((s, t) => s + samplesIn(t), 0);
+  console.log(`${nSamples} samples in ${tasks.length} tasks`);
+  // spread over the levels, so that the first tasks (warm-up, latency) are not all at one altitude
+  const spread = tasks.map((_, i) => tasks[(i * 7919) % tasks.length]);
+  const latencyTasks = spread.slice(0, o.latencyTasks);
   const rows: ScaleRow[] = [];
   const report = (r: ScaleRow) => {
     rows.push(r);
     console.log(
-      `${r.backend.padEnd(14)} ${String(r.consumers).padStart(2)} consumer(s)  median ${(r.median_wall_ms / 1000).toFixed(2).padStart(7)} s  ${r.samplesPerSecond.toFixed(1).padStart(7)} samples/s  converged ${r.converged}/${r.samples}  runs ${r.runs_ms.map((x) => (x / 1000).toFixed(2)).join(", ")} s`,
+      `${r.backend.padEnd(14)} ${String(r.consumers).padStart(2)} consumer(s)  median ${(r.median_wall_ms / 1000).toFixed(2).padStart(7)} s  ${r.samplesPerSecond.toFixed(1).padStart(7)} samples/s  good ${r.converged}/${r.samples}  runs ${r.runs_ms.map((x) => (x / 1000).toFixed(2)).join(", ")} s`,
     );
   };
 
-  // the embedded back end's pool: one thread per core
-  const pool = new EnginePool({ ...POOL_DEFAULTS, timeout_ms: 120_000 });
-  const poolRun = (t: EngineTask) => pool.run(t as never);
-  await runAll(poolRun, tasks.slice(0, 20), o.inFlight); // warm-up: threads compile the mechanism
+  await runAll(poolRun, spread.slice(0, 20), o.inFlight); // warm-up: threads compile the mechanism
   const poolRuns: { wall_ms: number; converged: number }[] = [];
   for (let r = 0; r < o.repeats; r++) poolRuns.push(await runAll(poolRun, tasks, tasks.length));
   const poolWall = median(poolRuns.map((x) => x.wall_ms));
   report({
     backend: "embedded pool",
     consumers: POOL_DEFAULTS.size,
-    samples: tasks.length,
+    samples: nSamples,
+    tasks: tasks.length,
     median_wall_ms: poolWall,
-    samplesPerSecond: tasks.length / (poolWall / 1000),
+    samplesPerSecond: nSamples / (poolWall / 1000),
     converged: poolRuns[0].converged,
     runs_ms: poolRuns.map((x) => x.wall_ms),
   });
@@ -216,7 +285,7 @@ export async function main() {
       // every run has its own job id: task results are content-addressed per job and would be reused
       const runner = (id: string): TaskRunner => queueTaskRunner(config, q, ev, id);
       const warm = runner("warm");
-      await runAll((t) => warm.run(t), tasks.slice(0, 20 * n), o.inFlight);
+      await runAll((t) => warm.run(t), spread.slice(0, 20 * n), o.inFlight);
       if (n === 1) {
         const lat = runner("latency");
         const empty: EngineTask[] = latencyTasks.map((_, i) => ({
@@ -238,9 +307,10 @@ export async function main() {
       report({
         backend: "BullMQ queue",
         consumers: n,
-        samples: tasks.length,
+        samples: nSamples,
+        tasks: tasks.length,
         median_wall_ms: wall,
-        samplesPerSecond: tasks.length / (wall / 1000),
+        samplesPerSecond: nSamples / (wall / 1000),
         converged: runs[0].converged,
         runs_ms: runs.map((x) => x.wall_ms),
       });
