@@ -24,6 +24,7 @@ import { Inspector } from "./Inspector";
 import { LegendCard } from "./LegendCard";
 import { type NetworkHandle, NetworkView } from "./NetworkView";
 import { Toolbar } from "./Toolbar";
+import { UncertaintyCard } from "./UncertaintyCard";
 import { useAnalysis } from "./useAnalysis";
 
 export interface StoredAnalysis {
@@ -329,6 +330,7 @@ export function Explorer(props: Props) {
           onInspectReaction={(id) => setViewPart({ select: `r:${id}` })}
         />
         <BudgetPanel budget={result?.cycles.budget ?? null} />
+        <UncertaintyCard request={request} result={result} />
       </div>
     </div>
   );

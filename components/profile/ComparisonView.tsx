@@ -11,6 +11,7 @@ import { familySplitSeries } from "@/lib/profiles/series/familySplitSeries";
 import { lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
 import type { ComparisonResult } from "@/lib/profiles/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
+import { ProfileUncertaintyRunner } from "../uncertainty";
 import { CopyLink } from "./CopyLink";
 import { DifferenceChart } from "./DifferenceChart";
 import { LossChart } from "./LossChart";
@@ -177,6 +178,7 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
             title={`Family split of the Ox loss against altitude, ${labels.a}`}
             testId="chart-split-a"
           />
+          <ProfileUncertaintyRunner profileId={side("a").sweepId} label="A" />
         </section>
         <section aria-labelledby="h-split-b">
           <h2 id="h-split-b" className="text-[14px] font-semibold">
@@ -187,6 +189,7 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
             title={`Family split of the Ox loss against altitude, ${labels.b}`}
             testId="chart-split-b"
           />
+          <ProfileUncertaintyRunner profileId={side("b").sweepId} label="B" />
         </section>
       </div>
 

@@ -10,6 +10,7 @@ import { familySplitSeries } from "@/lib/profiles/series/familySplitSeries";
 import { lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
 import type { SweepResult } from "@/lib/profiles/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
+import { ProfileUncertaintyRunner } from "../uncertainty";
 import { CopyLink } from "./CopyLink";
 import { LossChart } from "./LossChart";
 import { ScaleToggle } from "./ScaleToggle";
@@ -128,6 +129,7 @@ export function SweepView({
             Fraction of the Ox loss by family
           </h2>
           <SplitChart series={split} title="Family split of the Ox loss against altitude" testId="chart-split" />
+          <ProfileUncertaintyRunner profileId={id} />
         </section>
       </div>
       <section aria-labelledby="h-levels">

@@ -10,11 +10,13 @@ import { createJobBackend } from "../jobs/createJobBackend";
 import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
 import { notFound } from "./http";
 import { comparisonJob, comparisonPath, profilePath, sweepJob, validateComparison, validateSweep } from "./profiles";
+import { uncertaintyJob } from "./uncertainty";
 
 /** The handler of every job kind (also run by the queue workers). */
 export const JOB_HANDLERS: Record<string, JobHandler<never>> = {
   "profile-sweep": sweepJob as JobHandler<never>,
   comparison: comparisonJob as JobHandler<never>,
+  uncertainty: uncertaintyJob as JobHandler<never>,
 };
 
 const KEY = Symbol.for("ozone.jobBackend");

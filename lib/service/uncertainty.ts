@@ -19,7 +19,6 @@ import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { analysisRequestSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
-import { EmbeddedJobBackend } from "../jobs/embeddedBackend";
 import type { JobBackend, JobContext, JobStatus } from "../jobs/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import {
@@ -32,6 +31,7 @@ import {
   type SensitivityReport,
 } from "../uncertainty";
 import { notFound } from "./http";
+import { jobBackend } from "./jobs";
 import { mechanismSource } from "./mechanisms";
 import { getProfileRecord } from "./profiles";
 
@@ -281,17 +281,13 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
   return { resultId: id, resultKind: UNCERTAINTY_PROFILE_KIND };
 }
 
-async function uncertaintyJob(input: UncertaintyJobInput, ctx: JobContext) {
+/** The job handler (registered with the shared job back end in lib/service/jobs.ts). */
+export async function uncertaintyJob(input: UncertaintyJobInput, ctx: JobContext) {
   return "analysis" in input ? analysisJob(input.analysis as AnalysisRequest, ctx) : profileJob(input, ctx);
 }
 
-const KEY = Symbol.for("ozone.uncertaintyJobBackend");
-
-function backend(): JobBackend {
-  const g = globalThis as unknown as Record<symbol, JobBackend | undefined>;
-  g[KEY] ??= new EmbeddedJobBackend({ uncertainty: uncertaintyJob as never });
-  return g[KEY];
-}
+// The shared back end (embedded, or BullMQ when REDIS_URL is set), so /api/jobs/{id} covers these jobs too.
+const backend = (): JobBackend => jobBackend();
 
 export interface UncertaintyJobView extends JobStatus {
   statusUrl: string;
