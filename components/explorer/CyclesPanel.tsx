@@ -130,11 +130,14 @@ function CycleRow({
             rate <b className="tabular-nums text-stone-800">{formatNumber(c.rate_cm3s)}</b>
           </span>
           <span>
-            slowest step <b className="text-stone-800">{c.rateLimitingStep}</b>
-          </span>
-          <span>
             chain length{" "}
             <b className="tabular-nums text-stone-800">{c.chainLength === null ? "—" : formatNumber(c.chainLength)}</b>
+          </span>
+          <span>
+            efficiency <b className="tabular-nums text-stone-800">{formatPercent(c.efficiency)}</b>
+          </span>
+          <span className="col-span-2 truncate" title={slowestEquation(c)}>
+            slowest step <b className="text-stone-800">{slowestEquation(c)}</b>
           </span>
         </span>
       </button>
@@ -178,4 +181,10 @@ function CycleRow({
       ) : null}
     </li>
   );
+}
+
+/** The rate-limiting step as an equation a chemist reads, with its id when the equation is not known. */
+function slowestEquation(c: CatalyticCycle): string {
+  const step = c.steps.find((s) => s.reactionId === c.rateLimitingStep);
+  return step ? `${step.equation} (${step.reactionId})` : c.rateLimitingStep;
 }
