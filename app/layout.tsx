@@ -8,6 +8,7 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: "Ozone Loss Cycles",
   description: "Which catalytic cycles destroy stratospheric ozone, how fast, and why.",
+  icons: { icon: "/icon.svg" },
 };
 
 export default function RootLayout({ children }: { children: ReactNode }) {

@@ -188,150 +188,155 @@ export function Explorer(props: Props) {
   };
 
   return (
-    <div className="grid gap-2 p-2 md:grid-cols-[260px_minmax(0,1fr)] lg:h-[calc(100vh-38px)] lg:min-h-[700px] lg:grid-cols-[272px_minmax(0,1fr)_340px]">
-      <h1 className="sr-only">Catalytic ozone-loss cycle explorer</h1>
-      <ConditionsPanel
-        mechanisms={mechanisms}
-        mechanismId={mechanismId}
-        mechanism={mechanism}
-        onMechanism={touch((id: string) => {
-          setMechanismId(id);
-          setView((v) => ({ ...v, cycle: null, select: null }));
-        })}
-        onUploaded={onUploaded}
-        condition={condition}
-        onCondition={touch(setCondition)}
-        resolved={result?.condition ?? null}
-        fieldErrors={fieldErrors}
-      />
-
-      <div className="flex min-h-0 min-w-0 flex-col gap-2">
-        <Toolbar
-          colorMode={view.colorMode}
-          onColorMode={(colorMode) => setViewPart({ colorMode })}
-          showHeld={view.showHeld}
-          onShowHeld={(showHeld) => setViewPart({ showHeld })}
-          onFit={() => net.current?.fit()}
-          onZoom={(f) => net.current?.zoomBy(f)}
-          loading={analysis.loading}
+    <>
+      <div className="grid gap-2 p-2 md:grid-cols-[260px_minmax(0,1fr)] lg:h-[calc(100vh-38px)] lg:min-h-[700px] lg:grid-cols-[272px_minmax(0,1fr)_340px]">
+        <h1 className="sr-only">Catalytic ozone-loss cycle explorer</h1>
+        <ConditionsPanel
+          mechanisms={mechanisms}
+          mechanismId={mechanismId}
           mechanism={mechanism}
-          selected={selected}
-          onInspect={(id) => setViewPart({ select: id })}
-          status={
-            ss
-              ? `${err ? "Showing the last analysis that succeeded: " : ""}${result?.condition.altitude_km} km · T ${formatNumber(result?.condition.T_K, 4)} K · p ${formatNumber(result?.condition.p_hPa, 3)} hPa · ${ss.status === "converged" ? `converged in ${ss.iterations} iterations` : ss.status}`
-              : null
-          }
+          onMechanism={touch((id: string) => {
+            setMechanismId(id);
+            setView((v) => ({ ...v, cycle: null, select: null }));
+          })}
+          onUploaded={onUploaded}
+          condition={condition}
+          onCondition={touch(setCondition)}
+          resolved={result?.condition ?? null}
+          fieldErrors={fieldErrors}
         />
-        {showingStored ? (
-          <div
-            data-testid="stored-banner"
-            className="rounded border border-sky-300 bg-sky-50 px-3 py-1 text-[12px] text-sky-900"
-          >
-            Stored analysis of {new Date(props.stored!.createdAt).toUTCString()}: these are the stored numbers. Change
-            any condition to recompute.
-            {props.stored!.engineVersion !== props.stored!.currentEngineVersion ? (
-              <strong data-testid="engine-version-warning" className="ml-1 font-semibold text-amber-900">
-                Computed with engine {props.stored!.engineVersion}; the current engine is{" "}
-                {props.stored!.currentEngineVersion}, whose numbers may differ.
-              </strong>
-            ) : null}
-          </div>
-        ) : null}
-        {notice ? (
-          <div className="flex items-start justify-between gap-2 rounded border border-stone-300 bg-stone-50 px-3 py-1 text-[12px] text-stone-700">
-            <span>{notice}</span>
-            <button
-              type="button"
-              className="text-stone-500 hover:text-stone-900"
-              onClick={() => setNotice(null)}
-              aria-label="Dismiss"
+
+        <div className="flex min-h-0 min-w-0 flex-col gap-2">
+          <Toolbar
+            colorMode={view.colorMode}
+            onColorMode={(colorMode) => setViewPart({ colorMode })}
+            showHeld={view.showHeld}
+            onShowHeld={(showHeld) => setViewPart({ showHeld })}
+            onFit={() => net.current?.fit()}
+            onZoom={(f) => net.current?.zoomBy(f)}
+            loading={analysis.loading}
+            mechanism={mechanism}
+            selected={selected}
+            onInspect={(id) => setViewPart({ select: id })}
+            status={
+              ss
+                ? `${err ? "Showing the last analysis that succeeded: " : ""}${result?.condition.altitude_km} km · T ${formatNumber(result?.condition.T_K, 4)} K · p ${formatNumber(result?.condition.p_hPa, 3)} hPa · ${ss.status === "converged" ? `converged in ${ss.iterations} iterations` : ss.status}`
+                : null
+            }
+          />
+          {showingStored ? (
+            <div
+              data-testid="stored-banner"
+              className="rounded border border-sky-300 bg-sky-50 px-3 py-1 text-[12px] text-sky-900"
             >
-              ✕
-            </button>
-          </div>
-        ) : null}
-        <div className="relative min-h-[420px] flex-1 overflow-hidden rounded-md border border-stone-300 bg-white md:min-h-[560px] lg:min-h-[360px]">
-          {mechanism && layout ? (
-            <NetworkView
-              ref={net}
-              layoutKey={mechanism.id}
-              elements={elements}
-              stylesheet={STYLE}
-              highlight={highlight}
-              selected={selected}
-              onSelect={(id) => setViewPart({ select: id })}
-            />
-          ) : (
-            <div className="absolute inset-0 grid place-items-center text-sm text-stone-500">
-              {mechError ? "" : "Loading the mechanism…"}
+              Stored analysis of {new Date(props.stored!.createdAt).toUTCString()}: these are the stored numbers. Change
+              any condition to recompute.
+              {props.stored!.engineVersion !== props.stored!.currentEngineVersion ? (
+                <strong data-testid="engine-version-warning" className="ml-1 font-semibold text-amber-900">
+                  Computed with engine {props.stored!.engineVersion}; the current engine is{" "}
+                  {props.stored!.currentEngineVersion}, whose numbers may differ.
+                </strong>
+              ) : null}
             </div>
-          )}
-          <div className="pointer-events-none absolute inset-x-2 top-2 flex flex-col items-start gap-2">
-            {bannerError || mechError ? (
-              <div
-                role="alert"
-                data-testid="server-error"
-                className="pointer-events-auto max-w-[560px] rounded border border-red-300 bg-red-50 px-3 py-1.5 text-[12px] text-red-900 shadow-sm"
+          ) : null}
+          {notice ? (
+            <div className="flex items-start justify-between gap-2 rounded border border-stone-300 bg-stone-50 px-3 py-1 text-[12px] text-stone-700">
+              <span>{notice}</span>
+              <button
+                type="button"
+                className="text-stone-500 hover:text-stone-900"
+                onClick={() => setNotice(null)}
+                aria-label="Dismiss"
               >
-                <b className="font-semibold">
-                  {mechError ? "The mechanism could not be loaded" : "The analysis failed"}:
-                </b>{" "}
-                {(mechError ?? bannerError)!.message}
-              </div>
-            ) : null}
-            {ss && ss.status !== "converged" ? (
-              <div
-                role="alert"
-                data-testid="steady-state-warning"
-                className="pointer-events-auto max-w-[560px] rounded border border-amber-300 bg-amber-50 px-3 py-1.5 text-[12px] text-amber-950 shadow-sm"
-              >
-                <b className="font-semibold">No steady state ({ss.status}).</b> {ss.message} The numbers shown are those
-                of the last iterate and should not be trusted.
-              </div>
-            ) : null}
-            {cycle ? (
-              <div className="pointer-events-auto rounded border border-stone-800 bg-white/95 px-2 py-1 text-[12px] shadow-sm">
-                Showing cycle <b>{cycle.netEquation}</b> ({cycle.family}).{" "}
-                <button type="button" className="underline" onClick={() => setViewPart({ cycle: null })}>
-                  Show all
-                </button>
-              </div>
-            ) : null}
-          </div>
-          {selected && mechanism ? (
-            <div className="pointer-events-none absolute bottom-2 right-2 top-14 flex items-start">
-              <Inspector
+                ✕
+              </button>
+            </div>
+          ) : null}
+          <div className="relative min-h-[420px] flex-1 overflow-hidden rounded-md border border-stone-300 bg-white md:min-h-[560px] lg:min-h-[360px]">
+            {mechanism && layout ? (
+              <NetworkView
+                ref={net}
+                layoutKey={mechanism.id}
+                elements={elements}
+                stylesheet={STYLE}
+                highlight={highlight}
                 selected={selected}
-                mechanism={mechanism}
-                result={result}
                 onSelect={(id) => setViewPart({ select: id })}
               />
+            ) : (
+              <div className="absolute inset-0 grid place-items-center text-sm text-stone-500">
+                {mechError ? "" : "Loading the mechanism…"}
+              </div>
+            )}
+            <div className="pointer-events-none absolute inset-x-2 top-2 flex flex-col items-start gap-2">
+              {bannerError || mechError ? (
+                <div
+                  role="alert"
+                  data-testid="server-error"
+                  className="pointer-events-auto max-w-[560px] rounded border border-red-300 bg-red-50 px-3 py-1.5 text-[12px] text-red-900 shadow-sm"
+                >
+                  <b className="font-semibold">
+                    {mechError ? "The mechanism could not be loaded" : "The analysis failed"}:
+                  </b>{" "}
+                  {(mechError ?? bannerError)!.message}
+                </div>
+              ) : null}
+              {ss && ss.status !== "converged" ? (
+                <div
+                  role="alert"
+                  data-testid="steady-state-warning"
+                  className="pointer-events-auto max-w-[560px] rounded border border-amber-300 bg-amber-50 px-3 py-1.5 text-[12px] text-amber-950 shadow-sm"
+                >
+                  <b className="font-semibold">No steady state ({ss.status}).</b> {ss.message} The numbers shown are
+                  those of the last iterate and should not be trusted.
+                </div>
+              ) : null}
+              {cycle ? (
+                <div className="pointer-events-auto rounded border border-stone-800 bg-white/95 px-2 py-1 text-[12px] shadow-sm">
+                  Showing cycle <b>{cycle.netEquation}</b> ({cycle.family}).{" "}
+                  <button type="button" className="underline" onClick={() => setViewPart({ cycle: null })}>
+                    Show all
+                  </button>
+                </div>
+              ) : null}
             </div>
-          ) : null}
-          {analysis.loading ? (
-            <div
-              data-testid="computing"
-              className="pointer-events-none absolute right-2 top-2 rounded bg-stone-800/85 px-2 py-0.5 text-[11px] text-white"
-            >
-              computing…
-            </div>
-          ) : null}
+            {selected && mechanism ? (
+              <div className="pointer-events-none absolute bottom-2 right-2 top-14 flex items-start">
+                <Inspector
+                  selected={selected}
+                  mechanism={mechanism}
+                  result={result}
+                  onSelect={(id) => setViewPart({ select: id })}
+                />
+              </div>
+            ) : null}
+            {analysis.loading ? (
+              <div
+                data-testid="computing"
+                className="pointer-events-none absolute right-2 top-2 rounded bg-stone-800/85 px-2 py-0.5 text-[11px] text-white"
+              >
+                computing…
+              </div>
+            ) : null}
+          </div>
+          <LegendCard legend={legend} empty={!result} />
+          <ExportBar analysisId={analysis.id} onPng={onPng} onSvg={onSvg} busy={analysis.loading} />
         </div>
-        <LegendCard legend={legend} empty={!result} />
-        <ExportBar analysisId={analysis.id} onPng={onPng} onSvg={onSvg} busy={analysis.loading} />
-      </div>
 
-      <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">
-        <CyclesPanel
-          report={result?.cycles ?? null}
-          selected={cycle?.id ?? null}
-          onSelect={(id) => setViewPart({ cycle: id })}
-          onInspectReaction={(id) => setViewPart({ select: `r:${id}` })}
-        />
-        <BudgetPanel budget={result?.cycles.budget ?? null} />
+        <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">
+          <CyclesPanel
+            report={result?.cycles ?? null}
+            selected={cycle?.id ?? null}
+            onSelect={(id) => setViewPart({ cycle: id })}
+            onInspectReaction={(id) => setViewPart({ select: `r:${id}` })}
+          />
+          <BudgetPanel budget={result?.cycles.budget ?? null} />
+        </div>
+      </div>
+      {/* below the fold, full width: the ranges and sensitivity tables need the room */}
+      <div className="px-2 pb-2">
         <UncertaintyCard request={request} result={result} />
       </div>
-    </div>
+    </>
   );
 }
