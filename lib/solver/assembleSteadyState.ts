@@ -76,7 +76,7 @@ export function assembleSteadyState(inp: AssembleInput): SteadyState {
       pool: c.poolId,
       externalSource_cm3s: finite(source),
       replacedEquation: c.replaced >= 0 ? mech.species[sys.unknownSpecies[c.replaced]].id : "",
-      total_cm3: c.total,
+      total_cm3: c.requestedTotal,
     };
   });
   return {

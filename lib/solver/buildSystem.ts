@@ -18,8 +18,10 @@ export interface PoolConstraint {
   /** unknown indices of the non-held members */
   members: Int32Array;
   weights: Float64Array;
-  /** cm⁻³ */
+  /** what the non-held members must sum to (weighted), cm⁻³ */
   total: number;
+  /** the total the conditions asked for, cm⁻³ (total plus what held members hold) */
+  requestedTotal: number;
   /** unknown index whose balance row this constraint replaces (chosen by the caller; −1 until then) */
   replaced: number;
 }
@@ -177,23 +179,32 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
     if (total === 0) return;
     const m: number[] = [];
     const w: number[] = [];
+    // Members held for this solve keep their amounts: the unknowns share what is left of the total.
+    let heldPart = 0;
     for (const t of pool.weights) {
       const u = unknownOf[t.species];
       if (u >= 0 && t.coef > 0) {
         m.push(u);
         w.push(t.coef);
-      }
+      } else if (t.coef > 0) heldPart += t.coef * fixed[t.species];
     }
     if (m.length === 0) {
       warnings.push(`pool ${pool.id}: every member is held, so its total is not used`);
       return;
     }
+    const rest = total - heldPart;
+    if (!(rest > 0))
+      throw new InputError(
+        `conditions.poolTotals_cm3.${pool.id}`,
+        `the members held for this solve already hold ${heldPart.toExponential(3)} cm⁻³ of the total ${total.toExponential(3)} cm⁻³, leaving nothing for the solved members`,
+      );
     constraints.push({
       poolId: pool.id,
       poolIndex: p,
       members: Int32Array.from(m),
       weights: Float64Array.from(w),
-      total,
+      total: rest,
+      requestedTotal: total,
       replaced: -1,
     });
   });

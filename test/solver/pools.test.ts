@@ -66,14 +66,31 @@ describe("pool totals", () => {
     expectClose(Cl / ClO, (s.reactions[1].k * 1e7) / (s.reactions[0].k * 1e12), { rel: 1e-9 }, "Cl/ClO");
   });
 
-  it("leaves a member held for this solve out of the pool's weights", () => {
+  it("counts a member held for this solve in the total: the solved members share what is left", () => {
     const cond = conditions30km();
     const held_cm3 = { ...cond.held_cm3, ClO: 2e8 };
     const s = solveSteadyState(mech, { ...cond, held_cm3 });
     expect(s.status).toBe("converged");
     const x = s.numberDensity_cm3;
     expect(x[idx.ClO]).toBe(2e8);
-    expectClose(x[idx.Cl] + x[idx.HCl], cond.poolTotals_cm3.Cly, { rel: 1e-10 }, "Cl + HCl");
+    // Identity: the pool total is the total of all its members, held or not.
+    expectClose(x[idx.Cl] + x[idx.ClO] + x[idx.HCl], cond.poolTotals_cm3.Cly, { rel: 1e-10 }, "Cl + ClO + HCl");
+    expect(s.pools[0].total_cm3).toBe(cond.poolTotals_cm3.Cly);
+  });
+
+  it("holding a member at its own steady-state amount changes nothing", () => {
+    const cond = conditions30km();
+    const free = solveSteadyState(mech, cond);
+    const held_cm3 = { ...cond.held_cm3, ClO: free.numberDensity_cm3[idx.ClO] };
+    const s = solveSteadyState(mech, { ...cond, held_cm3 });
+    expectClose(s.numberDensity_cm3[idx.HCl], free.numberDensity_cm3[idx.HCl], { rel: 1e-8 }, "HCl");
+    expectClose(s.numberDensity_cm3[idx.Cl], free.numberDensity_cm3[idx.Cl], { rel: 1e-8 }, "Cl");
+  });
+
+  it("throws if the held members already hold the whole total", () => {
+    const cond = conditions30km();
+    const held_cm3 = { ...cond.held_cm3, ClO: 2 * cond.poolTotals_cm3.Cly };
+    expect(() => solveSteadyState(mech, { ...cond, held_cm3 })).toThrow(/leaving nothing for the solved members/);
   });
 
   it("sets every member to zero when the pool total is zero", () => {
