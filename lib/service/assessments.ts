@@ -142,18 +142,19 @@ export async function createAssessment(body: unknown): Promise<{
     sheets: generated.sheets,
     warnings: generated.warnings,
   };
-  await store.putRecord({
-    kind: STUDENT_KIND,
-    id: studentId,
-    engineVersion: ENGINE_VERSION,
-    body: studentView(assessment),
-    createdAt,
-  });
+  // The instructor record (with the key) first: a student link is never live without its key.
   await store.putRecord({
     kind: ASSESSMENT_KIND,
     id: instructorId,
     engineVersion: ENGINE_VERSION,
     body: assessment,
+    createdAt,
+  });
+  await store.putRecord({
+    kind: STUDENT_KIND,
+    id: studentId,
+    engineVersion: ENGINE_VERSION,
+    body: studentView(assessment),
     createdAt,
   });
   return {
