@@ -164,6 +164,13 @@ export function analyse(
     steadyState,
     cycles,
     ...(diurnalSummary ? { diurnal: diurnalSummary } : {}),
+    ...(condition.mode === "diurnal" && request.condition.zenith_deg !== undefined
+      ? {
+          warnings: [
+            "the zenith angle given is not used in the 24-hour mode: the sun follows the latitude and date through the day",
+          ],
+        }
+      : {}),
     elapsed_ms: 0,
     ...uncertaintyOf(),
   };

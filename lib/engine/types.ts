@@ -109,6 +109,8 @@ export interface AnalysisResult {
   cycles: CycleReport;
   /** present in the 24-hour mode */
   diurnal?: DiurnalSummary;
+  /** inputs that were not used as given, for people */
+  warnings?: string[];
   /** wall time of the computation, ms */
   elapsed_ms: number;
   /** sensitivities and Monte Carlo ranges, when the options ask for them (lib/uncertainty) */

@@ -127,6 +127,9 @@ describe("one analysis", () => {
     // At local midnight atomic oxygen has gone (no photolysis; common practice), while the 24-hour mean is positive.
     expect(r.diurnal!.atLocalTime_cm3[iO]).toBeLessThan(1e-3 * r.steadyState.numberDensity_cm3[iO]);
     expect(r.cycles.cycles.length).toBeGreaterThan(0);
+    expect(r.warnings).toBeUndefined();
+    const fixedSun = analyse({ altitude_km: 40, mode: "diurnal", zenith_deg: 30 });
+    expect(fixedSun.warnings?.[0]).toMatch(/zenith angle given is not used in the 24-hour mode/);
   });
 
   it("is deterministic: the same request gives the same numbers", () => {
