@@ -234,6 +234,7 @@ export function compileMechanism(
       if (!same(fr.reactants, me.products) || !same(fr.products, me.reactants)) {
         sink.warn([...path, "rate", "forward"], "reverse", `reaction "${id}" is not the mirror image of this equation`);
       }
+      reactions[r].forwardReaction = fr.index;
       return fr.rate;
     };
     const law = rateLawFromEntry({ ...rate, forward: fid }, [...path, "rate"], 1, sink, forward);

@@ -51,6 +51,12 @@ export interface CompiledReaction {
   /** hv written in the equation. */
   photolysis: boolean;
   rate: RateLaw;
+  /**
+   * For an equilibrium-reverse rate, the index of its forward reaction: a
+   * change of the forward rate constant carries over to this one at fixed K,
+   * and `uncertainty` is then the uncertainty of K.
+   */
+  forwardReaction?: number;
   uncertainty?: Uncertainty;
   /** Citation, e.g. "JPL 19-5, Table 1-1 (from memory)". */
   source?: string;

@@ -43,7 +43,7 @@ export function runSampleBatch(mech: CompiledMechanism, batch: SampleBatch): Sam
   const out: SampleBatchResult = { start: batch.start, values: [], failures: [] };
   for (let i = batch.start; i < batch.start + batch.count; i++) {
     try {
-      const rateMultipliers = sampleMultipliers(sigma, batch.seed, i);
+      const rateMultipliers = sampleMultipliers(sigma, batch.seed, i, mech);
       const state = solveSteadyState(mech, batch.conditions, { initialState: batch.centralState, rateMultipliers });
       if (state.status !== "converged") {
         out.values.push(null);

@@ -5,6 +5,7 @@
  * recalled: k₀·f and k₀/f bound one standard deviation, i.e. f is the 1σ
  * factor of a log-normal k). Photolysis reactions get the caller's factor
  * (default 1: J not varied). Reactions without an uncertainty keep factor 1.
+ * A reverse rate from an equilibrium constant follows its forward reaction.
  *
  * Units: dimensionless factors by reaction index.
  */
@@ -53,8 +54,21 @@ export function logFactors(mech: CompiledMechanism, T_K: number, options: Sample
   });
 }
 
-/** Factors exp(σ_j z_j) of sample `index`, given σ_j = ln f_j(T) from `logFactors`. */
-export function sampleMultipliers(sigma: Float64Array, seed: number, index: number): Float64Array {
+/**
+ * Factors exp(σ_j z_j) of sample `index`, given σ_j = ln f_j(T) from
+ * `logFactors`. With the mechanism given, a reverse rate computed from an
+ * equilibrium constant (k_rev = k_fwd/K) also takes its forward reaction's
+ * factor, its own σ being that of K (JPL Table 3 gives f and g for K), so
+ * that a drawn k_fwd does not change the equilibrium.
+ */
+export function sampleMultipliers(
+  sigma: Float64Array,
+  seed: number,
+  index: number,
+  mech?: CompiledMechanism,
+): Float64Array {
   const z = normalDraws(seed, index, sigma.length);
-  return Float64Array.from(sigma, (s, j) => (s === 0 ? 1 : Math.exp(s * z[j])));
+  const m = Float64Array.from(sigma, (s, j) => (s === 0 ? 1 : Math.exp(s * z[j])));
+  if (mech) for (const r of mech.reactions) if (r.forwardReaction !== undefined) m[r.index] *= m[r.forwardReaction];
+  return m;
 }

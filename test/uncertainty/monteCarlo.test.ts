@@ -140,3 +140,22 @@ describe("the draws", () => {
     expect(() => quantile([], 0.5)).toThrow(RangeError);
   });
 });
+
+describe("reverse rates from an equilibrium constant", () => {
+  it("follow their forward reaction's draw, with their own factor that of K (k_rev = k_fwd / K)", () => {
+    const ref = loadBuiltinMechanism("reference").mechanism;
+    const reverse = ref.reactions.filter((r) => r.forwardReaction !== undefined);
+    // NO2 + NO3 ⇌ N2O5, HO2 + NO2 ⇌ HO2NO2 and ClO + ClO ⇌ Cl2O2 in the reference set (JPL Table 3 pairs)
+    expect(reverse.length).toBeGreaterThanOrEqual(3);
+    const sigma = logFactors(ref, 220);
+    for (let i = 0; i < 20; i++) {
+      const coupled = sampleMultipliers(sigma, 11, i, ref);
+      const own = sampleMultipliers(sigma, 11, i);
+      for (const r of reverse) {
+        const f = r.forwardReaction as number;
+        expectClose(coupled[r.index], own[r.index] * own[f], { rel: 1e-12 }, r.id);
+        expect(coupled[f]).toBe(own[f]);
+      }
+    }
+  });
+});
