@@ -30,8 +30,8 @@ export const STEADY_STATE_DEFAULTS = {
   residualTolerance: 1e-10,
   /** and max |δ ln x| of the last Newton step (≈ relative error of the number densities) */
   stepTolerance: 1e-9,
-  /** Newton iterations after the cold start */
-  maxIterations: 60,
+  /** Newton iterations after the cold start (the hardest built-in cases, 10–16 km at SZA 85° with O3 solved, need up to about 300) */
+  maxIterations: 300,
   /** pseudo-transient continuation steps */
   maxColdStartSteps: 200,
   /** length of the fallback integration when the pseudo-transient cold start fails, s */
