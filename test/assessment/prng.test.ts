@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { fmix32, mulberry32, variantSeed } from "@/lib/assessment";
 
-// Independent transcriptions of the published C code in BigInt arithmetic (mod 2³²), used only as test oracles.
+// Independent re-implementations of the published C code in BigInt arithmetic (mod 2³²), used only as test oracles.
 // mulberry32: Tommy Ettinger, 2017 (public domain). fmix32: MurmurHash3 finaliser, Austin Appleby (public domain).
 const M32 = (1n << 32n) - 1n;
 function mulberry32Reference(seed: number): () => number {
@@ -25,7 +25,7 @@ function fmix32Reference(h: number): number {
 }
 
 describe("mulberry32", () => {
-  test("agrees with a BigInt transcription of the published C code for 1000 draws from several seeds", () => {
+  test("agrees with a BigInt re-implementation of the published C code for 1000 draws from several seeds", () => {
     for (const seed of [0, 1, 42, 0xdeadbeef, 0xffffffff]) {
       const a = mulberry32(seed);
       const b = mulberry32Reference(seed);
@@ -63,7 +63,7 @@ describe("mulberry32", () => {
 });
 
 describe("variantSeed", () => {
-  test("fmix32 agrees with a BigInt transcription of the MurmurHash3 finaliser", () => {
+  test("fmix32 agrees with a BigInt re-implementation of the MurmurHash3 finaliser", () => {
     for (const h of [0, 1, 2, 12345, 0x80000000, 0xffffffff]) expect(fmix32(h)).toBe(fmix32Reference(h));
   });
 
