@@ -317,7 +317,10 @@ describe("a profile sweep on the BullMQ back end", () => {
     const c = freshConfig();
     await startWorkers(c, 1);
     const backend = backendFor(c);
-    const job = await backend.submit("profile-sweep", request);
+    // 24-hour levels (about a second each): the job is still running when the cancellation arrives,
+    // however fast the machine (instantaneous levels could all finish first).
+    const slow = await validateSweep({ ...REQUEST, condition: { mode: "diurnal" } });
+    const job = await backend.submit("profile-sweep", slow);
     await poll("a running job", async () => (await backend.status(job.id))?.state === "running");
     const cancelled = (await backend.cancel(job.id)) as JobStatus;
     expect(cancelled.state).toBe("cancelled");
