@@ -8,9 +8,18 @@
  */
 import { randomBytes } from "node:crypto";
 import { type Job, Queue, QueueEvents } from "bullmq";
+import type { Redis } from "ioredis";
 import { EngineError } from "../errors";
-import { type BullmqConfig, cancelKey, connect, JOBS_QUEUE, type JobData, type JobProgress } from "./bullmqConfig";
-import type { RespClient } from "./respClient";
+import {
+  type BullmqConfig,
+  cancelKey,
+  connect,
+  connectLazily,
+  JOBS_QUEUE,
+  type JobData,
+  type JobProgress,
+  ready,
+} from "./bullmqConfig";
 import { isFinal, type JobBackend, type JobError, type JobStatus } from "./types";
 
 export const BULLMQ_BACKEND_DEFAULTS = {
@@ -74,7 +83,7 @@ export class BullmqJobBackend implements JobBackend {
   private readonly o: typeof BULLMQ_BACKEND_DEFAULTS & BullmqBackendOptions;
   private readonly watchers = new Set<() => void>();
   /** a plain connection for the cancellation marks */
-  private readonly client: RespClient;
+  private readonly client: Redis;
 
   constructor(
     private readonly config: BullmqConfig,
@@ -82,12 +91,11 @@ export class BullmqJobBackend implements JobBackend {
   ) {
     this.o = { ...BULLMQ_BACKEND_DEFAULTS, ...options };
     this.queue = new Queue(JOBS_QUEUE, { connection: connect(config), prefix: config.prefix });
-    this.client = connect(config);
+    this.client = connectLazily(config);
   }
 
-  private async redis(): Promise<RespClient> {
-    await this.client.connect();
-    return this.client;
+  private redis(): Promise<Redis> {
+    return ready(this.client);
   }
 
   async submit(kind: string, input: unknown): Promise<JobStatus> {
@@ -127,7 +135,7 @@ export class BullmqJobBackend implements JobBackend {
     const s = await this.status(id);
     if (!s || isFinal(s.state)) return s;
     const client = await this.redis();
-    await client.set(cancelKey(this.config, id), new Date().toISOString(), { EX: this.config.keep_s });
+    await client.set(cancelKey(this.config, id), new Date().toISOString(), "EX", this.config.keep_s);
     // a job nobody has started yet is taken off the queue; a running one stops at its next task
     const job = await this.queue.getJob(id);
     if (job && (await job.getState()) === "waiting") await job.remove().catch(() => {});

@@ -6,7 +6,7 @@
  * (a batch of levels, a block of samples).
  */
 import { availableParallelism } from "node:os";
-import { RespClient } from "./respClient";
+import { Redis } from "ioredis";
 
 export const BULLMQ_DEFAULTS = {
   /** key prefix in Redis (OZONE_QUEUE_PREFIX); default "ozone" */
@@ -66,8 +66,22 @@ export const TASKS_QUEUE = "tasks";
 /** Redis key of a job's cancellation mark. */
 export const cancelKey = (c: BullmqConfig, jobId: string) => `${c.prefix}:cancelled:${jobId}`;
 
-/** A new connection for one BullMQ object (each Queue, Worker and QueueEvents holds its own). */
-export const connect = (c: BullmqConfig) => new RespClient(c.url);
+/**
+ * A new ioredis connection for one BullMQ object (each Queue, Worker and
+ * QueueEvents holds its own). BullMQ needs maxRetriesPerRequest: null for its
+ * blocking connections; ioredis reconnects with backoff after a lost connection.
+ */
+export const connect = (c: BullmqConfig): Redis => new Redis(c.url, { maxRetriesPerRequest: null });
+
+/** A connection of our own (cancellation marks), connected on first use. */
+export const connectLazily = (c: BullmqConfig): Redis =>
+  new Redis(c.url, { maxRetriesPerRequest: null, lazyConnect: true });
+
+/** Connects a lazily created client once; later calls return at once. */
+export async function ready(client: Redis): Promise<Redis> {
+  if (client.status === "wait") await client.connect();
+  return client;
+}
 
 /** What the "jobs" queue holds for a job. */
 export interface JobData {

@@ -26,9 +26,11 @@ import {
   type BullmqConfig,
   cancelKey,
   connect,
+  connectLazily,
   JOBS_QUEUE,
   type JobData,
   type JobProgress,
+  ready,
   TASKS_QUEUE,
   type TaskData,
 } from "./bullmqConfig";
@@ -107,8 +109,7 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
   const tasksQueue = new Queue(TASKS_QUEUE, { connection: connect(config), ...common });
   const taskEvents = new QueueEvents(TASKS_QUEUE, { connection: connect(config), ...common });
   await taskEvents.waitUntilReady();
-  const redis = connect(config);
-  await redis.connect();
+  const redis = await ready(connectLazily(config));
   let closing = false;
   redis.on("end", () => {
     if (!closing) o.onLost?.();

@@ -10,6 +10,5 @@ export {
 } from "./bullmqWorker";
 export { createJobBackend } from "./createJobBackend";
 export { EMBEDDED_DEFAULTS, EmbeddedJobBackend, type EmbeddedOptions } from "./embeddedBackend";
-export { parseRedisUrl, RespClient } from "./respClient";
 export type * from "./types";
 export { isFinal } from "./types";
