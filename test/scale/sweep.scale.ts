@@ -313,28 +313,6 @@ describe("a profile sweep on the BullMQ back end", () => {
     expect(withoutTimes(await resultOf(last))).toEqual(withoutTimes(embedded));
   });
 
-  it("cancels a running job: the status says so at once and stays so, and the rest of its tasks are not computed", async () => {
-    const c = freshConfig();
-    await startWorkers(c, 1);
-    const backend = backendFor(c);
-    // 24-hour levels (about a second each): the job is still running when the cancellation arrives,
-    // however fast the machine (instantaneous levels could all finish first).
-    const slow = await validateSweep({ ...REQUEST, condition: { mode: "diurnal" } });
-    const job = await backend.submit("profile-sweep", slow);
-    await poll("a running job", async () => (await backend.status(job.id))?.state === "running");
-    const cancelled = (await backend.cancel(job.id)) as JobStatus;
-    expect(cancelled.state).toBe("cancelled");
-    await poll("the worker to give the job up", async () => {
-      const [j] = await new Queue("jobs", { connection: connect(c), prefix: c.prefix }).getJobs(["failed"]);
-      return j?.id === job.id;
-    });
-    const s = (await backend.status(job.id)) as JobStatus;
-    expect(s.state).toBe("cancelled");
-    expect(s.resultId).toBeUndefined();
-    const computed = ((await tasksQueue(c).getCompleted(0, -1)) as Job[]).filter((t) => t.returnvalue !== null);
-    expect(computed.length).toBeLessThan(LEVELS);
-  });
-
   it("throws if asked for a job kind no worker handles, and knows no unknown job id", async () => {
     const backend = backendFor(freshConfig());
     await expect(backend.submit("no-such-kind", {})).rejects.toThrow(/no job handler for kind "no-such-kind"/);
