@@ -173,6 +173,13 @@ function CycleRow({
               ))}
             </tbody>
           </table>
+          {c.chainLengthRateLimiting !== null ? (
+            <p className="mt-1 text-stone-600">
+              chain length from the rate-limiting step{" "}
+              <b className="tabular-nums text-stone-800">{formatNumber(c.chainLengthRateLimiting)}</b>
+              {c.chainCarrier ? ` (${c.chainCarrier} carrier)` : ""}
+            </p>
+          ) : null}
           <p className="mt-1 text-stone-500">
             {c.oxPerTurnover} Ox per turnover · efficiency {formatPercent(c.efficiency)}
             {c.catalysts.length ? ` · catalysts ${c.catalysts.join(", ")}` : ""}

@@ -86,8 +86,11 @@ export function analyseCycles(
 
   const direct = directOxLoss(mech, state);
   const nets = reactionNet(mech);
-  const grossLoss = nets.reduce((s, net, j) => s + rates[j] * Math.max(0, -weightedSum(net, weights)), 0);
-  const scale = direct.loss_cm3s > 0 ? direct.loss_cm3s : grossLoss;
+  // f_min scale: the gross Ox destruction of the reactions under the extended weights, before the direct formula's
+  // cancellations. It is within a few per cent of L_direct above 20 km and, unlike L_direct, stays large where
+  // production and destruction nearly cancel (the upper troposphere), so f_min does not collapse there.
+  const extended = oxWeights(mech, "extended").weights;
+  const scale = nets.reduce((s, net, j) => s + rates[j] * Math.max(0, -weightedSum(net, extended)), 0);
   const fmin = opt.fminRelative * scale;
 
   const notBranching = mech.species.filter((_sp, i) => held[i] === 1 || weights[i] > 0).map((sp) => sp.id);

@@ -100,6 +100,7 @@ export function describePathway(
   }
   let chainLength: number | null = null;
   let chainCarrier: string | null = null;
+  let carrierLoss = 0;
   if (family !== "Ox")
     for (const f of family.split("-")) {
       const loss = ctx.carrierLoss.get(f);
@@ -108,6 +109,7 @@ export function describePathway(
       if (chainLength === null || n < chainLength) {
         chainLength = n;
         chainCarrier = f;
+        carrierLoss = loss;
       }
     }
 
@@ -128,6 +130,7 @@ export function describePathway(
     efficiency: Math.min(1, efficiency),
     rateLimitingStep: mech.reactions[slowest.reaction].id,
     chainLength,
+    chainLengthRateLimiting: chainLength === null ? null : rates[slowest.reaction] / slowest.multiplicity / carrierLoss,
     entryStep: mech.reactions[entry.reaction].id,
     chainCarrier,
     net: Object.fromEntries(p.net.map((t) => [mech.species[t.species].id, t.coef])),

@@ -11,13 +11,18 @@
  * formation and photolysis) weigh 0, so only the rate-limiting steps remain.
  * Reactions that create Ox (w_j < 0) are primary sources and left out when
  * they consume no hydrogen-containing species (O2 + hv, NO + hv, N + O2).
- * The others (HO2 + NO, CH3O2 + NO, HO2NO2 + hv → OH + NO3, …) undo an
- * earlier Ox-destroying HOx step when their radical was made by one (the
- * HO2 + NO / OH + O3 null cycle) but are true Ox production when it came from
- * CO, CH4 or H2 oxidation; they are counted with weight w_j·φ, φ the mean
- * over their hydrogen-containing reactants of the share of that radical's
- * production whose last Ox-relevant step destroyed Ox (a fixed point over the
- * production rates, backConversionShares). L_direct = Σ_j w_j r_j.
+ * Steps that consume a hydrogen-containing radical can cancel an earlier step
+ * in that radical's history: HO2 + NO → OH + NO2 gives back the Ox that the
+ * OH + O3 which made the HO2 took (the HO2 + NO / OH + O3 null cycle), and an
+ * OH + O3 takes back the Ox that a CH3O2 + NO or HO2 + NO upstream created.
+ * Each radical therefore carries a balance (carriedBalance): the share of its
+ * production still owing an Ox destroyed (deficit) and the share still
+ * holding an Ox created (surplus). A creating step enters the loss with
+ * weight w_j·deficit (w_j < 0: the share that gives back an Ox counted as
+ * destroyed upstream; the rest is production, not loss), a destroying step
+ * with w_j·(1 − surplus) (the surplus share takes back an Ox whose creation
+ * was never counted). Each cancellation is counted once, at whichever of the
+ * two steps comes second. L_direct = Σ_j w_j r_j.
  *
  * Units: molecules cm⁻³ s⁻¹.
  */
@@ -29,16 +34,24 @@ import { weightedSum } from "./sparseVector";
 import type { DirectTerm } from "./types";
 import { validateState } from "./validateState";
 
-/** Fixed-point sweeps for the back-conversion shares (they converge geometrically; 60 is ample). */
+/** Fixed-point sweeps for the carried balance (it converges geometrically; 60 is ample). */
 const SWEEPS = 60;
 
 /**
- * φ_X for every hydrogen-containing solved species X: the share of X's
- * production whose last Ox-relevant step destroyed odd oxygen. A producing
- * step counts 1 if it destroys Ox (w > 0), 0 if it creates Ox (w < 0), and
- * passes on the mean φ of its hydrogen-containing reactants if it is Ox-neutral.
+ * The odd-oxygen balance a hydrogen-containing radical carries from the steps
+ * that made it: deficit[X] is the share of X's production whose last
+ * Ox-relevant step destroyed Ox not yet given back, surplus[X] the share whose
+ * last such step created Ox not yet taken back. A destroying step made from a
+ * surplus, or a creating step made from a deficit, cancels and leaves the
+ * product neutral; Ox-neutral steps pass on the mean balance of their
+ * hydrogen-containing reactants.
  */
-function backConversionShares(mech: CompiledMechanism, raw: Float64Array, rates: number[]): Float64Array {
+interface CarriedBalance {
+  deficit: Float64Array;
+  surplus: Float64Array;
+}
+
+function carriedBalance(mech: CompiledMechanism, raw: Float64Array, rates: number[]): CarriedBalance {
   const nS = mech.species.length;
   const hydrogenous = mech.species.map((sp) => sp.role === "solved" && (sp.atoms.H ?? 0) > 0);
   const hReactants = mech.reactions.map((r) => r.reactants.map((t) => t.species).filter((i) => hydrogenous[i]));
@@ -46,22 +59,40 @@ function backConversionShares(mech: CompiledMechanism, raw: Float64Array, rates:
   mech.reactions.forEach((r, j) => {
     for (const t of r.products) if (hydrogenous[t.species]) P[t.species] += t.coef * rates[j];
   });
-  let phi = new Float64Array(nS);
+  let deficit = new Float64Array(nS);
+  let surplus = new Float64Array(nS);
   for (let sweep = 0; sweep < SWEEPS; sweep++) {
-    const next = new Float64Array(nS);
+    const nextD = new Float64Array(nS);
+    const nextS = new Float64Array(nS);
     mech.reactions.forEach((r, j) => {
       if (!(rates[j] > 0)) return;
-      let psi = 0;
-      if (raw[j] > 0) psi = 1;
-      else if (raw[j] === 0 && hReactants[j].length)
-        psi = hReactants[j].reduce((s, i) => s + phi[i], 0) / hReactants[j].length;
-      if (psi === 0) return;
-      for (const t of r.products) if (hydrogenous[t.species]) next[t.species] += t.coef * rates[j] * psi;
+      const h = hReactants[j];
+      const d = h.length ? h.reduce((s, i) => s + deficit[i], 0) / h.length : 0;
+      const u = h.length ? h.reduce((s, i) => s + surplus[i], 0) / h.length : 0;
+      let toD = d;
+      let toS = u;
+      if (raw[j] > 0) {
+        toD = 1 - u;
+        toS = 0;
+      } else if (raw[j] < 0) {
+        toD = 0;
+        toS = h.length ? 1 - d : 0;
+      }
+      if (toD === 0 && toS === 0) return;
+      for (const t of r.products)
+        if (hydrogenous[t.species]) {
+          nextD[t.species] += t.coef * rates[j] * toD;
+          nextS[t.species] += t.coef * rates[j] * toS;
+        }
     });
-    for (let i = 0; i < nS; i++) next[i] = P[i] > 0 ? Math.min(1, next[i] / P[i]) : 0;
-    phi = next;
+    for (let i = 0; i < nS; i++) {
+      nextD[i] = P[i] > 0 ? Math.min(1, nextD[i] / P[i]) : 0;
+      nextS[i] = P[i] > 0 ? Math.min(1 - nextD[i], nextS[i] / P[i]) : 0;
+    }
+    deficit = nextD;
+    surplus = nextS;
   }
-  return phi;
+  return { deficit, surplus };
 }
 
 /** Weight of every reaction in the direct formula (Ox destroyed per event). */
@@ -75,14 +106,15 @@ export function directOxWeights(mech: CompiledMechanism, state: Pick<SteadyState
       return Math.abs(w) < 1e-12 ? 0 : w;
     }),
   );
-  const phi = backConversionShares(mech, raw, rates);
+  const { deficit, surplus } = carriedBalance(mech, raw, rates);
   return raw.map((w, j) => {
-    if (w >= 0) return w;
+    if (w === 0) return 0;
     const h = mech.reactions[j].reactants.filter(
       (t) => mech.species[t.species].role === "solved" && (mech.species[t.species].atoms.H ?? 0) > 0,
     );
-    if (h.length === 0) return 0;
-    return (w * h.reduce((s, t) => s + phi[t.species], 0)) / h.length;
+    if (h.length === 0) return Math.max(w, 0);
+    const mean = (a: Float64Array) => h.reduce((s, t) => s + a[t.species], 0) / h.length;
+    return w > 0 ? w * (1 - mean(surplus)) : w * mean(deficit);
   });
 }
 

@@ -44,6 +44,11 @@ export interface CatalyticCycle {
   rateLimitingStep: string;
   /** turnovers before the carrier family goes to reservoirs; null when undefined */
   chainLength: number | null;
+  /**
+   * the operational form of the same ratio: the rate of the rate-limiting step (per multiplicity) divided by the
+   * carrier family's loss to reservoirs, as chain lengths are often quoted; ≥ chainLength, null when undefined
+   */
+  chainLengthRateLimiting: number | null;
   /** id of the step whose rate is least devoted to this cycle (the step `efficiency` refers to) */
   entryStep: string;
   /** carrier family whose loss to reservoirs sets `chainLength` (for coupled cycles the one lost fastest relative to the cycle); null for pure oxygen */

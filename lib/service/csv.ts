@@ -64,6 +64,7 @@ export function cyclesCsv(r: AnalysisResult): string {
       "efficiency (fraction)",
       "rate_limiting_step",
       "chain_length (turnovers)",
+      "chain_length_rate_limiting (turnovers)",
     ],
     r.cycles.cycles.map((c) => [
       c.id,
@@ -77,6 +78,7 @@ export function cyclesCsv(r: AnalysisResult): string {
       c.efficiency,
       c.rateLimitingStep,
       c.chainLength,
+      c.chainLengthRateLimiting,
     ]),
   );
 }

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { analyseCycles, directOxLoss, oxBudget } from "@/lib/analysis";
 import { InputError } from "@/lib/errors";
 import { expectClose } from "../helpers/close";
-import { chapman, chlorine, rateOf } from "./helpers";
+import { chapman, chlorine, handMechanism, rateOf } from "./helpers";
 
 describe("analyseCycles on hand-solved systems", () => {
   it("gives the pure-oxygen loss 2k[O][O3] and production 2J[O2] for Chapman chemistry (Chapman 1930)", () => {
@@ -114,6 +114,43 @@ describe("analyseCycles on hand-solved systems", () => {
     });
   });
 
+  it("counts an Ox-destroying step that takes back Ox created upstream only once (carried balance, hand-solved)", () => {
+    // Half of the OH comes from X (no Ox history), half from HO2 + NO, which created an Ox (NO2) that OH + O then
+    // takes back: OH + O counts with weight 1 − 1/2, HO2 + NO with 0 (its HO2 owes nothing). L_direct = 2·½ = 1.
+    const mech = handMechanism(
+      "carried balance (test, invented)",
+      {
+        X: "held",
+        Y: "held",
+        Z: "held",
+        O2: "held",
+        HO2: "solved",
+        OH: "solved",
+        H: "solved",
+        NO: "solved",
+        NO2: "solved",
+        O: "solved",
+      },
+      {
+        R1: "X -> HO2",
+        R2: "X -> OH",
+        R3: "HO2 + NO -> OH + NO2",
+        R4: "OH + O -> H + O2",
+        R5: "H + Y -> Z",
+        R6: "NO2 + hv -> NO + O",
+        R7: "O2 + hv -> 2 O",
+      },
+    );
+    const state = { numberDensity_cm3: mech.species.map(() => 1), rate_cm3s: [1, 1, 1, 2, 2, 1, 0.5] };
+    const d = directOxLoss(mech, state);
+    expectClose(d.loss_cm3s, 1, { rel: 1e-12 }, "direct");
+    expect(d.terms.map((t) => [t.reactionId, t.weight])).toEqual([["R4", 0.5]]);
+    // the pathways agree: X -> HO2 -> OH -> H is Ox-neutral once NO2 + hv is joined, X -> OH -> H destroys one O
+    const r = analyseCycles(mech, state);
+    expectClose(r.budget.loss_cm3s, 1, { rel: 1e-12 }, "pathway loss");
+    expect(Math.abs(r.budget.directMismatch)).toBeLessThan(1e-12);
+  });
+
   it("throws if an option is invalid or the mechanism has no odd oxygen", () => {
     const s = chlorine();
     expect(() => analyseCycles(s.mech, s, { fminRelative: -1 })).toThrow(InputError);
@@ -127,6 +164,7 @@ describe("analyseCycles on hand-solved systems", () => {
     const s = chlorine();
     const r = analyseCycles(s.mech, s, { heldSpecies: ["O", "O3"], fminRelative: undefined, oxDefinition: undefined });
     expect(r.oxDefinition).toBe("standard");
+    // f_min scale: the gross extended-Ox destruction, which equals L_direct in a set without HOx
     expectClose(r.fmin_cm3s, 1e-4 * r.budget.directLoss_cm3s, { rel: 1e-12 }, "default fminRelative 1e-4");
   });
 

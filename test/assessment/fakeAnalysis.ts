@@ -50,6 +50,7 @@ export function fakeResult(req: AnalysisRequest): AnalysisResult {
     efficiency: 0.9,
     rateLimitingStep: rates[a as keyof typeof rates] < rates[b as keyof typeof rates] ? a : b,
     chainLength: family === "ClOx" ? 100 + 10 * z : 1000 / (1 + z / 10),
+    chainLengthRateLimiting: family === "ClOx" ? 110 + 10 * z : 1100 / (1 + z / 10),
     entryStep: a,
     chainCarrier: family,
     net: { O: -1, O3: -1, O2: 2 },
