@@ -10,4 +10,6 @@ export type BenchCase = {
   /** timed repetitions; default: as many as fit in about one second, at least 5 */
   iterations?: number;
   note?: string;
+  /** time the first run too instead of discarding it as a warm-up (for cases that take minutes); default true */
+  warmup?: boolean;
 };

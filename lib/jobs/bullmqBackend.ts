@@ -63,7 +63,8 @@ export function toJobStatus(job: Job, state: string, cancelledAt: string | null)
     const out = job.returnvalue as { resultId: string; resultKind: string };
     return { ...base, state: "done", stage: "done", ...out, updatedAt: iso(job.finishedOn, base.updatedAt) };
   }
-  if (cancelledAt) return { ...base, state: "cancelled", stage: "cancelled", updatedAt: cancelledAt };
+  const cancelled = cancelledAt ?? data.cancelledAt ?? null;
+  if (cancelled) return { ...base, state: "cancelled", stage: "cancelled", updatedAt: cancelled };
   if (state === "failed") {
     return {
       ...base,
@@ -136,9 +137,12 @@ export class BullmqJobBackend implements JobBackend {
     if (!s || isFinal(s.state)) return s;
     const client = await this.redis();
     await client.set(cancelKey(this.config, id), new Date().toISOString(), "EX", this.config.keep_s);
-    // a job nobody has started yet is taken off the queue; a running one stops at its next task
+    // A job nobody has started yet keeps the mark in its own data, which lives as long as the job (the Redis mark
+    // expires): a worker that takes it later ends it at once, and its status stays readable. A running job stops
+    // at its next task, or at once when it is waiting for one.
     const job = await this.queue.getJob(id);
-    if (job && (await job.getState()) === "waiting") await job.remove().catch(() => {});
+    if (job && ["waiting", "delayed", "prioritized", "waiting-children"].includes(await job.getState()))
+      await job.updateData({ ...(job.data as JobData), cancelledAt: new Date().toISOString() }).catch(() => {});
     return (
       (await this.status(id)) ?? { ...s, state: "cancelled", stage: "cancelled", updatedAt: new Date().toISOString() }
     );

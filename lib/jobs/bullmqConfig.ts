@@ -88,6 +88,8 @@ export interface JobData {
   input: unknown;
   /** ISO 8601 */
   createdAt: string;
+  /** ISO 8601; set when the job is cancelled before any worker took it (it stays queued, and is never run) */
+  cancelledAt?: string;
 }
 
 /** What the "tasks" queue holds for a task. */

@@ -64,6 +64,17 @@ export function taskId(jobId: string, task: unknown): string {
   return `${jobId}-${createHash("sha256").update(JSON.stringify(task)).digest("hex").slice(0, 32)}`;
 }
 
+/** The task's result, or the abort reason as soon as the signal fires (the task is then left to the queue). */
+function untilFinishedOrAborted<T>(finished: Promise<T>, signal?: AbortSignal): Promise<T> {
+  if (!signal) return finished;
+  return new Promise<T>((resolve, reject) => {
+    const onAbort = () => reject(signal.reason);
+    if (signal.aborted) return onAbort();
+    signal.addEventListener("abort", onAbort, { once: true });
+    finished.then(resolve, reject).finally(() => signal.removeEventListener("abort", onAbort));
+  });
+}
+
 /**
  * A job's task runner on the "tasks" queue: each task is queued under its
  * content id and awaited through the queue's events. Used by the jobs'
@@ -88,8 +99,10 @@ export function queueTaskRunner(
         removeOnFail: { age: config.keep_s },
       });
       try {
-        return await entry.waitUntilFinished(taskEvents);
+        return await untilFinishedOrAborted(entry.waitUntilFinished(taskEvents), signal);
       } catch (e) {
+        // a cancellation while the task waits or runs: the job stops now, the task itself is skipped or ignored
+        if (signal?.aborted && e === signal.reason) throw e;
         // the task's own error as the embedded pool would have thrown it (e.g. "timeout"), after its retries
         const err = parseJobError((e as Error).message);
         if (err.code === "internal") throw new EngineError("engine-failure", `a task of job ${jobId} failed`);
@@ -195,7 +208,7 @@ export async function startQueueWorker(config: BullmqConfig, options: QueueWorke
         tasks: runnerFor(id, controller.signal),
       };
       try {
-        if (await isCancelled(id)) throw cancelled;
+        if (job.data.cancelledAt || (await isCancelled(id))) throw cancelled;
         const out = await handler(job.data.input, ctx);
         if (pending) write(pending);
         await flushing;

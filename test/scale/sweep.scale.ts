@@ -8,7 +8,7 @@ import { type Job, Queue } from "bullmq";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { POOL_DEFAULTS } from "@/lib/engine/pool";
 import { BullmqJobBackend } from "@/lib/jobs/bullmqBackend";
-import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "@/lib/jobs/bullmqConfig";
+import { type BullmqConfig, bullmqConfigFromEnv, connect, JOBS_QUEUE, TASKS_QUEUE } from "@/lib/jobs/bullmqConfig";
 import { EmbeddedJobBackend } from "@/lib/jobs/embeddedBackend";
 import { isFinal, type JobBackend, type JobStatus } from "@/lib/jobs/types";
 import type { SweepRequest, SweepResult } from "@/lib/profiles/types";
@@ -241,7 +241,7 @@ describe("a profile sweep on the BullMQ back end", () => {
     const c = freshConfig();
     await startWorkers(c, 2);
     const backend = backendFor(c);
-    const jobs = new Queue("jobs", { connection: connect(c), prefix: c.prefix });
+    const jobs = new Queue(JOBS_QUEUE, { connection: connect(c), prefix: c.prefix });
     closers.push(() => jobs.close());
     const q = tasksQueue(c);
     const job = await backend.submit("profile-sweep", request);
@@ -311,6 +311,54 @@ describe("a profile sweep on the BullMQ back end", () => {
     expect(now.total).toBe(LEVELS);
     const last = (await untilFinal(after, job.id)).at(-1) as JobStatus;
     expect(withoutTimes(await resultOf(last))).toEqual(withoutTimes(embedded));
+  });
+
+  it("cancels a job still in the queue: its status stays readable, and the worker that takes it later ends it unrun", async () => {
+    const c = freshConfig();
+    const backend = backendFor(c);
+    const job = await backend.submit("profile-sweep", request); // no worker yet: it waits
+    const cancelled = (await backend.cancel(job.id)) as JobStatus;
+    expect(cancelled.state).toBe("cancelled");
+    await startWorkers(c, 1);
+    await new Promise((r) => setTimeout(r, 3000)); // time enough for the worker to take anything left
+    expect((await backend.status(job.id))?.state).toBe("cancelled");
+    const counts = await tasksQueue(c).getJobCounts("waiting", "active", "completed", "failed");
+    expect(counts).toEqual({ waiting: 0, active: 0, completed: 0, failed: 0 });
+    const jobs = new Queue(JOBS_QUEUE, { connection: connect(c), prefix: c.prefix });
+    closers.push(() => jobs.close());
+    expect(await jobs.getJobCounts("waiting", "active")).toEqual({ waiting: 0, active: 0 });
+  });
+
+  it("stops a running sweep at once when it is cancelled while its task waits, and computes nothing after", async () => {
+    // The tasks queue is paused, so the sweep is held open at its first level whatever the machine's speed.
+    const c = freshConfig();
+    const tasks = tasksQueue(c);
+    await tasks.pause();
+    await startWorkers(c, 1);
+    const backend = backendFor(c);
+    const job = await backend.submit("profile-sweep", request);
+    await poll("the job running, its first task queued", async () => {
+      const s = await backend.status(job.id);
+      return s?.state === "running" && (await tasks.getJobCounts("waiting")).waiting > 0;
+    });
+    const at = Date.now();
+    expect((await backend.cancel(job.id))?.state).toBe("cancelled");
+    const last = (await untilFinal(backend, job.id)).at(-1) as JobStatus;
+    expect(last.state).toBe("cancelled");
+    expect(last.resultId ?? null).toBeNull();
+    // the job itself has ended (not merely been marked) before any task ran
+    const jobs = new Queue(JOBS_QUEUE, { connection: connect(c), prefix: c.prefix });
+    closers.push(() => jobs.close());
+    await poll("the job's handler to end", async () => (await jobs.getJobCounts("active")).active === 0, 10_000);
+    expect(Date.now() - at).toBeLessThan(10_000);
+    await tasks.resume();
+    await poll("the waiting task to be taken", async () => (await tasks.getJobCounts("waiting")).waiting === 0);
+    await new Promise((r) => setTimeout(r, 1000));
+    // the one task that was queued is skipped (null result), and no further level is queued
+    const done = await tasks.getCompleted();
+    expect(done.length).toBeLessThanOrEqual(1);
+    for (const t of done) expect(t.returnvalue).toBeNull();
+    expect((await backend.status(job.id))?.state).toBe("cancelled");
   });
 
   it("throws if asked for a job kind no worker handles, and knows no unknown job id", async () => {
