@@ -8,33 +8,15 @@
  * 51,000 / median s. The per-level cost is reported beside it, because the
  * cycle analysis at 10–15 km costs many times more than above 20 km.
  */
-import path from "node:path";
 import { EnginePool } from "../../lib/engine/pool";
 import type { AnalysisRequest } from "../../lib/engine/types";
+import { bundleEngineWorker } from "../bundleWorker";
 import type { BenchCase } from "../types";
 
 const SRC = { id: "reference", title: "Reference stratosphere" };
 const SAMPLES = 1000;
 const levels = Array.from({ length: 51 }, (_x, i) => 10 + i);
 const pools: EnginePool[] = [];
-
-async function bundleWorker(): Promise<string> {
-  const out = path.resolve(".engine/bench/montecarlo-worker.mjs");
-  // loaded at run time: esbuild cannot be bundled into this case file
-  const specifier = "esbuild";
-  const { build } = (await import(specifier)) as typeof import("esbuild");
-  await build({
-    entryPoints: ["lib/engine/worker-entry.ts"],
-    outfile: out,
-    bundle: true,
-    platform: "node",
-    format: "esm",
-    target: "node20",
-    logLevel: "warning",
-    banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
-  });
-  return out;
-}
 
 const request = (z: number): AnalysisRequest => ({
   mechanismId: "reference",
@@ -67,7 +49,7 @@ function profileCase(pool: EnginePool, label: string): BenchCase {
 }
 
 export async function setup(): Promise<BenchCase[]> {
-  const script = await bundleWorker();
+  const script = await bundleEngineWorker("montecarlo-worker");
   const one = new EnginePool({ size: 1, timeout_ms: 3_600_000, script });
   const two = new EnginePool({ size: 2, timeout_ms: 3_600_000, script });
   pools.push(one, two);

@@ -7,13 +7,13 @@
  * Samples per second = samples / median time. The pool cases bundle the
  * engine worker (with the "uncertainty-samples" job kind) into .engine/bench.
  */
-import path from "node:path";
 import { compileSource } from "../../lib/engine/mechanism-source";
 import { EnginePool } from "../../lib/engine/pool";
 import { solveConditionsOf } from "../../lib/engine/resolve-condition";
 import { runAnalysis } from "../../lib/engine/run-analysis";
 import type { AnalysisRequest } from "../../lib/engine/types";
 import { monteCarlo, planMonteCarlo, runSampleBatch, sensitivities } from "../../lib/uncertainty";
+import { bundleEngineWorker } from "../bundleWorker";
 import type { BenchCase } from "../types";
 
 const SRC = { id: "reference", title: "Reference stratosphere" };
@@ -35,24 +35,6 @@ const levels = Array.from({ length: 51 }, (_x, i) => 10 + i);
 const PER_LEVEL = 20;
 
 const pools: EnginePool[] = [];
-
-async function bundleWorker(): Promise<string> {
-  const out = path.resolve(".engine/bench/uncertainty-worker.mjs");
-  // loaded at run time: esbuild cannot be bundled into this case file
-  const specifier = "esbuild";
-  const { build } = (await import(specifier)) as typeof import("esbuild");
-  await build({
-    entryPoints: ["lib/engine/worker-entry.ts"],
-    outfile: out,
-    bundle: true,
-    platform: "node",
-    format: "esm",
-    target: "node20",
-    logLevel: "warning",
-    banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
-  });
-  return out;
-}
 
 function poolCases(pool: EnginePool, label: string): BenchCase[] {
   return [
@@ -87,7 +69,7 @@ function poolCases(pool: EnginePool, label: string): BenchCase[] {
 }
 
 export async function setup(): Promise<BenchCase[]> {
-  const script = await bundleWorker();
+  const script = await bundleEngineWorker("uncertainty-worker");
   const one = new EnginePool({ size: 1, timeout_ms: 600_000, script });
   const two = new EnginePool({ size: 2, timeout_ms: 600_000, script });
   pools.push(one, two);
