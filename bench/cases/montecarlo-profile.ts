@@ -33,17 +33,21 @@ function profileCase(pool: EnginePool, label: string): BenchCase {
     run: async () => {
       const perLevel: string[] = [];
       let failed = 0;
+      let succeeded = 0;
       await Promise.all(
         levels.map(async (z) => {
           const t0 = performance.now();
           const res = (await pool.run({ kind: "analysis", mechanism: SRC, request: request(z) }, 3_600_000)) as {
-            uncertainty?: { monteCarlo?: { failed?: number } };
+            uncertainty?: { monteCarlo?: { failed: number; succeeded: number } };
           };
-          failed += res.uncertainty?.monteCarlo?.failed ?? 0;
+          const mc = res.uncertainty?.monteCarlo;
+          if (!mc) throw new Error(`level ${z} km: no Monte Carlo result`);
+          failed += mc.failed;
+          succeeded += mc.succeeded;
           perLevel.push(`${z}:${((performance.now() - t0) / 1000).toFixed(1)}`);
         }),
       );
-      console.log(`  ${label}: level:s (queue wait included) ${perLevel.join(" ")}; failed samples ${failed}`);
+      console.log(`  ${label}: level:s (queue wait included) ${perLevel.join(" ")}; samples converged ${succeeded}, failed ${failed}`);
     },
   };
 }

@@ -325,7 +325,8 @@ export function solveDiurnal(
     coldStartSteps: 0,
     warnings,
   });
-  const yR = tReport > 0 ? d.yReport : y0;
+  // the last integrated day's own state (its start at 0 h): after a day that did not converge y0 is already the next guess
+  const yR = d.yReport;
   const kR = new Float64Array(nr);
   kAt(kNodes, tReport, kR);
   kEffAt(tReport, kE);
