@@ -190,7 +190,12 @@ export function analyseCycles(
       `${((100 * unassigned) / loss).toFixed(1)} % of the Ox loss is in deleted pathways: lower fminRelative (now ${opt.fminRelative})`,
     );
   if (Math.abs(mismatch) > MISMATCH_WARNING)
-    warnings.push(`pathway Ox loss differs from the direct formula by ${(100 * mismatch).toFixed(2)} %`);
+    warnings.push(
+      `pathway Ox loss differs from the direct formula by ${(100 * mismatch).toFixed(2)} %` +
+        (direct.loss_cm3s < 0.5 * loss
+          ? " (HOx production and loss nearly cancel in the direct formula here, as below about 18 km: docs/cycle-analysis.md)"
+          : ""),
+    );
 
   const perReaction: ReactionOx[] = mech.reactions.map((r, j) => ({
     reactionId: r.id,
