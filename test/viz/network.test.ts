@@ -35,7 +35,7 @@ describe("parseEquation", () => {
   });
 
   it("throws if there is no arrow", () => {
-    expect(() => parseEquation("O + O3")).toThrow(/expected one arrow/);
+    expect(() => parseEquation("O + O3")).toThrow(/no arrow/);
   });
 });
 
