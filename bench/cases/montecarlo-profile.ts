@@ -47,7 +47,9 @@ function profileCase(pool: EnginePool, label: string): BenchCase {
           perLevel.push(`${z}:${((performance.now() - t0) / 1000).toFixed(1)}`);
         }),
       );
-      console.log(`  ${label}: level:s (queue wait included) ${perLevel.join(" ")}; samples converged ${succeeded}, failed ${failed}`);
+      console.log(
+        `  ${label}: level:s (queue wait included) ${perLevel.join(" ")}; samples converged ${succeeded}, failed ${failed}`,
+      );
     },
   };
 }
