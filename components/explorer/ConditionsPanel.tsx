@@ -4,6 +4,7 @@
  * atmosphere unless overridden), the sun (latitude, date, local time, or a
  * zenith angle), instantaneous or 24-hour, and the amounts held.
  */
+import { backgroundSulfateSurface_um2cm3 } from "@/lib/atmosphere/backgroundAerosol";
 import { standardAtmosphere } from "@/lib/atmosphere/standardAtmosphere";
 import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
 import { formatNumber } from "@/lib/viz/formatNumber";
@@ -136,6 +137,20 @@ export function ConditionsPanel(p: Props) {
             Empty fields use the U.S. Standard Atmosphere 1976 at this altitude
             {std ? `; air density ${formatNumber(std.M_cm3)} cm⁻³` : ""}.
           </p>
+          <NumberField
+            id="aerosol"
+            label="Sulfate aerosol surface"
+            unit="µm² cm⁻³"
+            value={c.aerosolSurface_um2cm3}
+            onChange={(v) => set({ aerosolSurface_um2cm3: v })}
+            placeholder={
+              Number.isFinite(c.altitude_km)
+                ? `${sig(backgroundSulfateSurface_um2cm3(c.altitude_km))} (background)`
+                : "background"
+            }
+            error={p.fieldErrors.aerosolSurface_um2cm3}
+            hint="For the uptake reactions (N2O5, BrONO2 hydrolysis); 10–100 after a large eruption."
+          />
         </fieldset>
 
         <fieldset className="space-y-2">

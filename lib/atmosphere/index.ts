@@ -1,4 +1,9 @@
 export { airNumberDensity_cm3 } from "./airNumberDensity";
+export {
+  BACKGROUND_SULFATE_SOURCE,
+  BACKGROUND_SULFATE_SURFACE,
+  backgroundSulfateSurface_um2cm3,
+} from "./backgroundAerosol";
 export { chapmanGrazing } from "./chapmanGrazing";
 export { climatologyAt, climatologyMixingRatio, climatologySources, climatologySpecies } from "./climatologyAt";
 export {

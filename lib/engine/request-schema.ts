@@ -39,6 +39,12 @@ export const conditionSchema = z
     o3ColumnAbove_DU: finite
       .refine((v) => v >= 0 && v <= 2000, "expected an overhead ozone column between 0 and 2000 DU")
       .optional(),
+    aerosolSurface_um2cm3: finite
+      .refine(
+        (v) => v >= 0 && v <= 10000,
+        "expected an aerosol surface area density between 0 and 10000 µm² cm⁻³ (background ~1, after an eruption ~10–100)",
+      )
+      .optional(),
   })
   .strict();
 

@@ -66,6 +66,8 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
 
   const keep = new Set([...Object.keys(held_cm3), ...Object.keys(poolTotals_cm3), "T_K", "p_hPa", "zenith_deg"]);
   for (const k of ["o3Column", "J"]) keep.add(k);
+  // the aerosol matters only to a mechanism with uptake reactions
+  if (mech.reactions.some((r) => r.rate.law === "uptake")) keep.add("aerosol");
   return {
     ...base,
     o3ColumnAbove_DU,
@@ -140,5 +142,13 @@ export function yearOf(date: string): number {
 }
 
 export function solveConditionsOf(c: ResolvedCondition, J_s: Record<string, number> = c.J_s): SolveConditions {
-  return { T_K: c.T_K, M_cm3: c.M_cm3, J_s, held_cm3: c.held_cm3, poolTotals_cm3: c.poolTotals_cm3 };
+  return {
+    T_K: c.T_K,
+    M_cm3: c.M_cm3,
+    J_s,
+    held_cm3: c.held_cm3,
+    poolTotals_cm3: c.poolTotals_cm3,
+    // µm² cm⁻³ → cm² cm⁻³; a stored condition from before this field has none
+    aerosolSurface_cm2cm3: (c.aerosolSurface_um2cm3 ?? 0) * 1e-8,
+  };
 }

@@ -38,6 +38,8 @@ export interface ConditionInput {
   ozone?: "held" | "solved";
   /** ozone column above the level, Dobson units (0–2000); default from the climatology. Sets the light, not the local O3. */
   o3ColumnAbove_DU?: number;
+  /** aerosol surface area density for the mechanism's uptake reactions, µm² cm⁻³ (0–10000); default: background sulfate at the altitude */
+  aerosolSurface_um2cm3?: number;
 }
 
 export interface AnalysisOptions {
@@ -76,6 +78,8 @@ export interface ResolvedCondition {
   ozone: "held" | "solved";
   /** overhead ozone column, Dobson units */
   o3ColumnAbove_DU: number;
+  /** aerosol surface area density used by uptake reactions, µm² cm⁻³ */
+  aerosolSurface_um2cm3: number;
   /** every photolysis frequency used, s⁻¹ */
   J_s: Record<string, number>;
   /** held amounts used, cm⁻³ */

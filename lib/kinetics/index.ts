@@ -8,3 +8,4 @@ export { lawIncludesM, rateConstant } from "./rateConstant";
 export { falloff, type TermolecularParams, termolecular } from "./termolecular";
 export type { KineticsEnv, RateLaw, Uncertainty } from "./types";
 export { uncertaintyFactor } from "./uncertaintyFactor";
+export { GAS_CONSTANT, meanMolecularSpeed_cms, uptake } from "./uptake";

@@ -11,6 +11,7 @@ import { lindemann } from "./lindemann";
 import { photolysisRate } from "./photolysisRate";
 import { termolecular } from "./termolecular";
 import type { KineticsEnv, RateLaw } from "./types";
+import { uptake } from "./uptake";
 
 /** The rate coefficient of `law` at `env` (termolecular laws include [M]). */
 export function rateConstant(law: RateLaw, env: KineticsEnv): number {
@@ -29,6 +30,8 @@ export function rateConstant(law: RateLaw, env: KineticsEnv): number {
       return photolysisRate(law.channel, env.J_s, law.factor ?? 1);
     case "photolysis-fixed":
       return law.J_s;
+    case "uptake":
+      return uptake(law.gamma, law.molarMass_gmol, env.T_K, env.aerosolSurface_cm2cm3 ?? 0);
     default:
       throw new EngineError("unknown-rate-law", `rateConstant: unknown rate law "${(law as { law?: unknown }).law}"`);
   }

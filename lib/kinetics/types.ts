@@ -32,7 +32,12 @@ export type RateLaw =
   /** J from the photolysis module for the named channel, times `factor` (default 1). */
   | { law: "photolysis"; channel: string; factor?: number }
   /** A fixed photolysis frequency J in s⁻¹. */
-  | { law: "photolysis-fixed"; J_s: number };
+  | { law: "photolysis-fixed"; J_s: number }
+  /**
+   * Uptake on aerosol surfaces, k = γ v̄ A / 4 in s⁻¹ (uptake.ts): γ the uptake probability (0–1], the gas's
+   * molar mass in g mol⁻¹ (for v̄), A the condition's aerosol surface area density.
+   */
+  | { law: "uptake"; gamma: number; molarMass_gmol: number };
 
 /** JPL uncertainty: f(T) = f(298) exp|g (1/T − 1/298)|. */
 export interface Uncertainty {
@@ -49,4 +54,6 @@ export interface KineticsEnv {
   M_cm3: number;
   /** photolysis frequencies by channel, s⁻¹; a missing channel is 0 */
   J_s: Readonly<Record<string, number>>;
+  /** aerosol surface area density, cm² cm⁻³; default 0 (no uptake) */
+  aerosolSurface_cm2cm3?: number;
 }

@@ -9,6 +9,7 @@ import type { RateLaw } from "../kinetics/types";
 import type { DiagnosticSink, DocPath } from "./diagnostics";
 import { externalReactions } from "./externalReactions";
 import { elementWeights, searchConservation } from "./findConservationRelations";
+import { molarMass_gmol } from "./molarMass";
 import { parseEquation } from "./parseEquation";
 import { parseFormula } from "./parseFormula";
 import { weightedSum } from "./poolExpression";
@@ -193,7 +194,20 @@ export function compileMechanism(
     if (e.rate.law === "equilibrium-reverse" && typeof e.rate.forward === "string") {
       pendingReverse.push({ r: reactions.length, path, entry: e });
     } else {
-      const law = rateLawFromEntry(e.rate, [...path, "rate"], order, sink, () => undefined);
+      let gasMolarMass: number | undefined;
+      if (e.rate.law === "uptake") {
+        // first order in the one gas taken up; the condensed-phase partner (water in the aerosol) is not written
+        if (reactants.length !== 1 || reactants[0].coef !== 1 || hasM) {
+          sink.error(
+            [...path, "equation"],
+            "uptake",
+            `an uptake reaction has exactly one reactant, the gas taken up (e.g. "N2O5 -> 2 HNO3", marked unbalanced: water from the aerosol), found ${reactants.length === 1 ? `"${eq.text}"` : `${reactants.length} reactants`}`,
+          );
+          return;
+        }
+        gasMolarMass = molarMass_gmol(species[reactants[0].species].atoms);
+      }
+      const law = rateLawFromEntry(e.rate, [...path, "rate"], order, sink, () => undefined, gasMolarMass);
       if (!law) return;
       r.rate = law;
     }

@@ -1,6 +1,6 @@
 /**
  * Turns a rate as written in a document (JPL symbols: A, E/R, k0, n, kinf, m,
- * Fc) into the `RateLaw` data the kinetics module evaluates, and warns about
+ * Fc; γ of an uptake) into the `RateLaw` data the kinetics module evaluates, and warns about
  * parameter values that suggest a unit mistake. Ranges are common practice for
  * gas-phase atmospheric kinetics (molecule cm⁻³ units, NASA/JPL 19-5 tables).
  */
@@ -67,6 +67,8 @@ export function rateLawFromEntry(
   order: number,
   sink: DiagnosticSink,
   forward: (id: string) => RateLaw | undefined,
+  /** for an uptake law: the molar mass of the gas taken up, g mol⁻¹ */
+  gasMolarMass_gmol?: number,
 ): RateLaw | undefined {
   const expo = (v: number | undefined, key: string) => {
     if (v !== undefined && Math.abs(v) > PLAUSIBLE.exponent) {
@@ -147,6 +149,17 @@ export function rateLawFromEntry(
         if (!fwd) return undefined;
       }
       return { law: "equilibrium-reverse", forward: fwd, Keq_A_cm3: e.K.A, Keq_B_K: e.K.B };
+    }
+    case "uptake": {
+      if (gasMolarMass_gmol === undefined) {
+        sink.error(
+          [...path, "law"],
+          "uptake",
+          "an uptake rate needs one gas reactant of known composition (its molar mass sets the molecular speed)",
+        );
+        return undefined;
+      }
+      return { law: "uptake", gamma: e.gamma, molarMass_gmol: gasMolarMass_gmol };
     }
     case "photolysis": {
       if (e.J !== undefined) {

@@ -27,6 +27,7 @@ export const LAW_PARAMETERS: Record<RateEntry["law"], [string[], string[]]> = {
   lindemann: [["low", "high"], []],
   "equilibrium-reverse": [["forward", "K"], []],
   photolysis: [[], ["channel", "factor", "J"]],
+  uptake: [["gamma"], []],
 };
 const LAWS = Object.keys(LAW_PARAMETERS);
 /** Accepted spellings with the JPL symbols. */
@@ -233,6 +234,13 @@ class Reader {
       case "chemical-activation":
         out = { law, k0: num("k0", true)!, n: num("n"), kinf: num("kinf", true)!, m: num("m"), Fc: num("Fc", true) };
         break;
+      case "uptake": {
+        const gamma = num("gamma", true);
+        if (gamma !== undefined && gamma > 1)
+          this.sink.error([...path, "gamma"], "range", `gamma is an uptake probability in (0, 1], found ${gamma}`);
+        else if (gamma !== undefined) out = { law, gamma };
+        break;
+      }
       case "lindemann": {
         const limit = (k: "low" | "high") => {
           const v = o[k];

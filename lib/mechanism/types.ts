@@ -168,7 +168,8 @@ export type RateEntry =
   | { law: "chemical-activation"; k0: number; n?: number; kinf: number; m?: number; Fc?: number }
   | { law: "lindemann"; low: { A: number; "E/R"?: number }; high: { A: number; "E/R"?: number } }
   | { law: "equilibrium-reverse"; forward: string | RateEntry; K: { A: number; B: number } }
-  | { law: "photolysis"; channel?: string; factor?: number; J?: number };
+  | { law: "photolysis"; channel?: string; factor?: number; J?: number }
+  | { law: "uptake"; gamma: number };
 
 export interface SpeciesEntry {
   id: string;

@@ -10,6 +10,8 @@
 import {
   airColumnAbove_cm2,
   airNumberDensity_cm3,
+  BACKGROUND_SULFATE_SOURCE,
+  backgroundSulfateSurface_um2cm3,
   climatologyAt,
   climatologySources,
   DOBSON_UNIT_cm2,
@@ -112,6 +114,7 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
         : "NOAA solar-position equations (declination, equation of time, hour angle) for latitude, date and local mean solar time",
     o3Column: `default climatology O3 × standard atmosphere: ${climatologySources.O3}`,
     J: "photolysisFrequencies (lib/photolysis): cross sections and solar spectrum approximate, from memory",
+    aerosol: input.aerosolSurface_um2cm3 !== undefined ? "given" : BACKGROUND_SULFATE_SOURCE,
   };
 
   const clim = climatologyAt(z);
@@ -155,6 +158,7 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
     mode: input.mode ?? DEFAULTS.mode,
     ozone: input.ozone ?? DEFAULTS.ozone,
     o3ColumnAbove_DU: o3Above / DOBSON_UNIT_cm2,
+    aerosolSurface_um2cm3: input.aerosolSurface_um2cm3 ?? backgroundSulfateSurface_um2cm3(z),
     J_s,
     held_cm3,
     poolTotals_cm3,

@@ -587,6 +587,19 @@ export const openApiDocument = {
               },
               jScale: { type: "number", minimum: 0, default: 1 },
               ozone: { enum: ["held", "solved"], default: "held" },
+              o3ColumnAbove_DU: {
+                type: "number",
+                minimum: 0,
+                maximum: 2000,
+                description: "overhead ozone column for the light, Dobson units; default from the climatology",
+              },
+              aerosolSurface_um2cm3: {
+                type: "number",
+                minimum: 0,
+                maximum: 10000,
+                description:
+                  "sulfate aerosol surface area density for uptake reactions, um2 cm-3; default: background profile",
+              },
             },
           },
           options: {

@@ -35,7 +35,12 @@ export function rateConstants(
       `has ${rateMultipliers.length} entries, the mechanism has ${nr} reactions`,
     );
   }
-  const env = { T_K: cond.T_K, M_cm3: cond.M_cm3, J_s: cond.J_s ?? {} };
+  const env = {
+    T_K: cond.T_K,
+    M_cm3: cond.M_cm3,
+    J_s: cond.J_s ?? {},
+    aerosolSurface_cm2cm3: cond.aerosolSurface_cm2cm3,
+  };
   for (let j = 0; j < nr; j++) {
     let k = given ? given[j] : effectiveRateConstant(mech.reactions[j], env);
     if (rateMultipliers) k *= rateMultipliers[j];

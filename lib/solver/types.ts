@@ -19,6 +19,8 @@ export interface SolveConditions {
   held_cm3: Readonly<Record<string, number>>;
   /** Totals of the mechanism's pools by pool id (cm⁻³ of the pool's atoms, weighted). */
   poolTotals_cm3: Readonly<Record<string, number>>;
+  /** aerosol surface area density for uptake reactions, cm² cm⁻³; default 0 (none) */
+  aerosolSurface_cm2cm3?: number;
 }
 
 export type SolveStatus =

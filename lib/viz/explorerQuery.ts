@@ -94,6 +94,8 @@ export function parseExplorerQuery(params: Params): ExplorerQuery {
   condition.mode = mode === "diurnal" ? "diurnal" : D.mode;
   const o3 = q.get("o3");
   if (o3 === "solved" || o3 === "held") condition.ozone = o3;
+  const sad = num("sad", 0, 10000);
+  if (sad !== undefined) condition.aerosolSurface_um2cm3 = sad;
   for (const key of q.keys().sort()) {
     const m = /^(total|held)\.(.+)$/.exec(key);
     if (!m) continue;
@@ -126,6 +128,7 @@ export function explorerQueryString(q: Omit<ExplorerQuery, "warnings">): string 
   out.set("t", String(c.localSolarTime_h ?? EXPLORER_DEFAULTS.localSolarTime_h));
   out.set("mode", c.mode ?? EXPLORER_DEFAULTS.mode);
   if (c.ozone) out.set("o3", c.ozone);
+  if (c.aerosolSurface_um2cm3 !== undefined) out.set("sad", String(c.aerosolSurface_um2cm3));
   for (const [k, v] of Object.entries(c.poolTotals ?? {}).sort(([a], [b]) => a.localeCompare(b)))
     out.set(`total.${k}`, String(v));
   for (const [k, v] of Object.entries(c.held ?? {}).sort(([a], [b]) => a.localeCompare(b)))

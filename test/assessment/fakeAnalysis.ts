@@ -79,6 +79,7 @@ export function fakeResult(req: AnalysisRequest): AnalysisResult {
       mode: c.mode ?? "instantaneous",
       ozone: "held",
       o3ColumnAbove_DU: 200,
+      aerosolSurface_um2cm3: 0,
       J_s: {},
       held_cm3: {},
       poolTotals_cm3: { Cly: cly * M },

@@ -73,6 +73,18 @@ describe("resolving a condition", () => {
     expect(thin.held_cm3.O3).toBe(base.held_cm3.O3);
   });
 
+  it("takes the aerosol surface from the background sulfate default unless given, and names its source", () => {
+    const c = resolveCondition(reference, { altitude_km: 20 });
+    expect(c.aerosolSurface_um2cm3).toBeCloseTo(0.7, 12);
+    expect(c.sources?.aerosol).toMatch(/background sulfate/);
+    const given = resolveCondition(reference, { altitude_km: 20, aerosolSurface_um2cm3: 12 });
+    expect(given.aerosolSurface_um2cm3).toBe(12);
+    expect(given.sources?.aerosol).toBe("given");
+    // a mechanism without uptake reactions does not list it
+    const ox = loadBuiltinMechanism("oxygen").mechanism;
+    expect(resolveCondition(ox, { altitude_km: 20 }).sources?.aerosol).toBeUndefined();
+  });
+
   it("throws if an override names an unknown species, pool or photolysis channel", () => {
     expect(() => resolveCondition(reference, { altitude_km: 30, held: { Xx: 1e-9 } })).toThrow(InputError);
     expect(() => resolveCondition(reference, { altitude_km: 30, poolTotals: { Iy: 1e-12 } })).toThrow(
@@ -130,6 +142,22 @@ describe("one analysis", () => {
     expect(r.warnings).toBeUndefined();
     const fixedSun = analyse({ altitude_km: 40, mode: "diurnal", zenith_deg: 30 });
     expect(fixedSun.warnings?.[0]).toMatch(/zenith angle given is not used in the 24-hour mode/);
+  });
+
+  it("moves the 24-hour Ox loss at 20 km from NOx towards HOx and the halogens as sulfate aerosol grows (Fahey et al. 1993, Nature 363, 509; from memory: N2O5 hydrolysis)", () => {
+    const share = (r: ReturnType<typeof analyse>, f: string) =>
+      r.cycles!.budget.byFamily.filter((x) => x.family.split("-").includes(f)).reduce((a, x) => a + x.fraction, 0);
+    const runs = [0, 0.7, 5].map((a) => analyse({ altitude_km: 20, mode: "diurnal", aerosolSurface_um2cm3: a }));
+    for (const r of runs) expect(r.steadyState.status).toBe("converged");
+    const nox = runs.map((r) => share(r, "NOx"));
+    const hox = runs.map((r) => share(r, "HOx"));
+    expect(nox[1]).toBeLessThan(nox[0]);
+    expect(nox[2]).toBeLessThan(nox[1]);
+    expect(hox[2]).toBeGreaterThan(hox[0]);
+    expect(share(runs[2], "ClOx")).toBeGreaterThan(share(runs[0], "ClOx"));
+    // HNO3 takes up the NOx: the reservoir grows while NOy (a conserved pool) stays
+    const hno3 = runs.map((r) => r.steadyState.species.find((s) => s.id === "HNO3")!.numberDensity_cm3);
+    expect(hno3[2]).toBeGreaterThan(hno3[0]);
   });
 
   it("is deterministic: the same request gives the same numbers", () => {

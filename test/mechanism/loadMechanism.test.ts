@@ -3,6 +3,7 @@ import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { MechanismError } from "../../lib/errors";
 import { loadMechanism } from "../../lib/mechanism";
+import { expectClose } from "../helpers/close";
 
 const fixture = (f: string) => fs.readFileSync(path.join(process.cwd(), "test", "fixtures", "mechanisms", f), "utf8");
 
@@ -34,6 +35,37 @@ describe("loadMechanism", () => {
     expect(m.reactions[3].rate).toEqual({ law: "arrhenius", A: 8e-12, EoverR_K: 2060 });
     expect(m.reactions[0].photolysis).toBe(true);
     expect(m.photolysisChannels).toEqual(["O2", "O3_O"]);
+  });
+
+  it("compiles an uptake reaction with the molar mass of its gas from the atoms (IUPAC atomic weights)", () => {
+    const text = minimal
+      .replace(
+        "  - { id: O3, role: solved }",
+        "  - { id: O3, role: solved }\n  - { id: N2O5, role: solved }\n  - { id: HNO3, role: held, mixingRatio: 1e-9 }",
+      )
+      .concat(
+        "  - id: H1\n    equation: N2O5 -> 2 HNO3\n    rate: { law: uptake, gamma: 0.1 }\n    unbalanced: water from the aerosol\n    source: test\n",
+      );
+    const { mechanism: m } = loadMechanism(text);
+    const r = m.reactions.find((x) => x.id === "H1")!;
+    expect(r.rate.law).toBe("uptake");
+    // 2 × 14.007 + 5 × 15.999 = 108.009 g/mol
+    expectClose((r.rate as { molarMass_gmol: number }).molarMass_gmol, 108.009, { rel: 1e-9 });
+  });
+
+  it("rejects an uptake reaction with two reactants or a γ above 1, naming the entry", () => {
+    const base = minimal.replace(
+      "  - { id: O3, role: solved }",
+      "  - { id: O3, role: solved }\n  - { id: N2O5, role: solved }\n  - { id: HNO3, role: held, mixingRatio: 1e-9 }",
+    );
+    const two = problems(
+      `${base}  - id: H1\n    equation: N2O5 + O -> 2 HNO3\n    rate: { law: uptake, gamma: 0.1 }\n    unbalanced: test\n`,
+    );
+    expect(two.some((p) => p.code === "uptake" && /exactly one reactant/.test(p.message))).toBe(true);
+    const big = problems(
+      `${base}  - id: H1\n    equation: N2O5 -> 2 HNO3\n    rate: { law: uptake, gamma: 1.5 }\n    unbalanced: test\n`,
+    );
+    expect(big.some((p) => /uptake probability in \(0, 1\]/.test(p.message))).toBe(true);
   });
 
   it("gives the same canonical text for the YAML and the JSON form of a document", () => {

@@ -85,6 +85,7 @@ export const fixtureResult: AnalysisResult = {
     mode: "instantaneous",
     ozone: "held",
     o3ColumnAbove_DU: 25,
+    aerosolSurface_um2cm3: 0,
     J_s: { O2: 1e-9 },
     held_cm3: { O2: 8.0e16, N2: 3.0e17, CH4: 5.0e11 },
     poolTotals_cm3: { Cly: 5.1e9 },

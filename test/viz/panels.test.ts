@@ -130,6 +130,7 @@ describe("explorer query", () => {
         localSolarTime_h: 9.5,
         mode: "diurnal" as const,
         ozone: "solved" as const,
+        aerosolSurface_um2cm3: 4.5,
         poolTotals: { Cly: 3.3e-9, Bry: 2e-11 },
         held: { H2O: 5e-6 },
       },
