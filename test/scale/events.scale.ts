@@ -4,9 +4,7 @@
 // result's links at the end. The service chooses BullMQ because REDIS_URL is
 // set, as a web instance configured for several machines does.
 import { execFileSync } from "node:child_process";
-import { existsSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { POOL_DEFAULTS } from "@/lib/engine/pool";
 import { BullmqJobBackend } from "@/lib/jobs/bullmqBackend";
 import type { JobView } from "@/lib/service/jobs";
 import { redisUrl, startWorker, type WorkerProcess } from "./services";
@@ -15,9 +13,8 @@ const PREFIX = `ozte${process.pid}`;
 let worker: WorkerProcess | null = null;
 
 beforeAll(async () => {
-  if (!existsSync(POOL_DEFAULTS.script)) {
-    execFileSync(process.execPath, ["scripts/engine-bundle.mjs"], { stdio: "inherit" });
-  }
+  // always from the current source: a bundle left from older code would test that code
+  execFileSync(process.execPath, ["scripts/engine-bundle.mjs"], { stdio: "inherit" });
   redisUrl();
   process.env.OZONE_QUEUE_PREFIX = PREFIX;
   worker = await startWorker({ OZONE_QUEUE_PREFIX: PREFIX, OZONE_WORKER_TASKS: "2", OZONE_QUEUE_LOCK_MS: "2000" });
