@@ -28,10 +28,12 @@
  * Run by bench/scale.mjs (`npm run bench:scale`), which starts Redis and
  * PostgreSQL when none is reachable and the worker processes.
  */
+
 import { type ChildProcess, spawn } from "node:child_process";
 import os from "node:os";
 import { Queue, QueueEvents } from "bullmq";
 import { EnginePool, POOL_DEFAULTS } from "../lib/engine/pool";
+import { solveConditionsOf } from "../lib/engine/resolve-condition";
 import type { AnalysisResult } from "../lib/engine/types";
 import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "../lib/jobs/bullmqConfig";
 import { queueTaskRunner } from "../lib/jobs/bullmqWorker";
@@ -82,13 +84,7 @@ async function monteCarloTasks(pool: EnginePool, perLevel: number, batchSize: nu
     if (r.steadyState.status !== "converged") continue;
     const mc = planMonteCarlo(
       mech,
-      {
-        T_K: r.condition.T_K,
-        M_cm3: r.condition.M_cm3,
-        J_s: r.condition.J_s,
-        held_cm3: r.condition.held_cm3,
-        poolTotals_cm3: r.condition.poolTotals_cm3,
-      },
+      solveConditionsOf(r.condition),
       r.steadyState,
       r.cycles,
       {

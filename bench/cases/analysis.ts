@@ -42,7 +42,7 @@ function summary(z: number, fminRelative?: number): string {
   const r = analyseAt(z, fminRelative);
   const b = r.budget;
   const deleted = b.loss_cm3s > 0 ? b.unassignedLoss_cm3s / b.loss_cm3s : 0;
-  return `${r.pathwayCount} pathways, deleted ${(100 * deleted).toFixed(1)} % of the Ox loss, direct mismatch ${(100 * b.directMismatch).toFixed(1)} %`;
+  return `${r.pathwayCount} pathways, deleted ${(100 * deleted).toFixed(1)} % of the Ox loss, direct mismatch ${b.directMismatch === null ? "(no direct loss)" : `${(100 * b.directMismatch).toFixed(1)} %`}`;
 }
 for (const z of profile) stateAt(z);
 

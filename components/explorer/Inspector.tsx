@@ -179,6 +179,12 @@ function lawRows(rate: RateLaw): [string, string][] {
         ["law", "fixed photolysis frequency"],
         ["J", `${formatNumber(rate.J_s)} s⁻¹`],
       ];
+    case "uptake":
+      return [
+        ["law", "uptake on aerosol, γ v̄ A / 4"],
+        ["γ", String(rate.gamma)],
+        ["molar mass", `${formatNumber(rate.molarMass_gmol)} g mol⁻¹`],
+      ];
     default:
       return [];
   }

@@ -17,7 +17,8 @@
  * OH + O3 takes back the Ox that a CH3O2 + NO or HO2 + NO upstream created.
  * Each radical therefore carries a balance (carriedBalance): the share of its
  * production still owing an Ox destroyed (deficit) and the share still
- * holding an Ox created (surplus). A creating step enters the loss with
+ * holding an Ox created (surplus); an event's balance is shared among its
+ * hydrogen-containing product molecules. A creating step enters the loss with
  * weight w_j·deficit (w_j < 0: the share that gives back an Ox counted as
  * destroyed upstream; the rest is production, not loss), a destroying step
  * with w_j·(1 − surplus) (the surplus share takes back an Ox whose creation
@@ -34,8 +35,9 @@ import { weightedSum } from "./sparseVector";
 import type { DirectTerm } from "./types";
 import { validateState } from "./validateState";
 
-/** Fixed-point sweeps for the carried balance (it converges geometrically; 60 is ample). */
-const SWEEPS = 60;
+/** Fixed-point sweeps for the carried balance: until no share changes by more than TOLERANCE, at most MAX_SWEEPS. */
+const MAX_SWEEPS = 2000;
+const TOLERANCE = 1e-13;
 
 /**
  * The odd-oxygen balance a hydrogen-containing radical carries from the steps
@@ -61,7 +63,12 @@ function carriedBalance(mech: CompiledMechanism, raw: Float64Array, rates: numbe
   });
   let deficit = new Float64Array(nS);
   let surplus = new Float64Array(nS);
-  for (let sweep = 0; sweep < SWEEPS; sweep++) {
+  // hydrogen-containing product molecules of each reaction: an event's balance is shared among them
+  // (O(1D) + H2O -> 2 OH destroys one Ox, so each OH owes half of it)
+  const hProducts = mech.reactions.map((r) =>
+    r.products.reduce((n, t) => (hydrogenous[t.species] ? n + t.coef : n), 0),
+  );
+  for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
     const nextD = new Float64Array(nS);
     const nextS = new Float64Array(nS);
     mech.reactions.forEach((r, j) => {
@@ -78,19 +85,23 @@ function carriedBalance(mech: CompiledMechanism, raw: Float64Array, rates: numbe
         toD = 0;
         toS = h.length ? 1 - d : 0;
       }
-      if (toD === 0 && toS === 0) return;
+      if ((toD === 0 && toS === 0) || hProducts[j] === 0) return;
+      const share = rates[j] / hProducts[j];
       for (const t of r.products)
         if (hydrogenous[t.species]) {
-          nextD[t.species] += t.coef * rates[j] * toD;
-          nextS[t.species] += t.coef * rates[j] * toS;
+          nextD[t.species] += t.coef * share * toD;
+          nextS[t.species] += t.coef * share * toS;
         }
     });
+    let change = 0;
     for (let i = 0; i < nS; i++) {
       nextD[i] = P[i] > 0 ? Math.min(1, nextD[i] / P[i]) : 0;
       nextS[i] = P[i] > 0 ? Math.min(1 - nextD[i], nextS[i] / P[i]) : 0;
+      change = Math.max(change, Math.abs(nextD[i] - deficit[i]), Math.abs(nextS[i] - surplus[i]));
     }
     deficit = nextD;
     surplus = nextS;
+    if (change <= TOLERANCE) break;
   }
   return { deficit, surplus };
 }
@@ -121,7 +132,7 @@ export function directOxWeights(mech: CompiledMechanism, state: Pick<SteadyState
 export function directOxLoss(
   mech: CompiledMechanism,
   state: Pick<SteadyState, "numberDensity_cm3" | "rate_cm3s">,
-): { loss_cm3s: number; terms: DirectTerm[] } {
+): { loss_cm3s: number; terms: DirectTerm[]; weights: Float64Array } {
   validateState(mech, state);
   const w = directOxWeights(mech, state);
   const terms: DirectTerm[] = [];
@@ -134,5 +145,5 @@ export function directOxLoss(
     terms.push({ reactionId: r.id, equation: r.equation, weight: w[j], loss_cm3s: l });
   });
   terms.sort((a, b) => Math.abs(b.loss_cm3s) - Math.abs(a.loss_cm3s));
-  return { loss_cm3s: loss, terms };
+  return { loss_cm3s: loss, terms, weights: w };
 }

@@ -85,8 +85,8 @@ export interface OxBudget {
   netChange_cm3s: number;
   /** the terms of the direct formula, largest first */
   directTerms: DirectTerm[];
-  /** (loss − directLoss)/directLoss */
-  directMismatch: number;
+  /** (loss − directLoss)/directLoss; null where directLoss ≤ 0 while the pathways find a loss (no check possible) */
+  directMismatch: number | null;
 }
 
 /** One term of the direct Ox-loss formula: weight × rate of one reaction. */
@@ -145,7 +145,7 @@ export type OxDefinition = "standard" | "extended";
 
 /** Options of `analyseCycles`. */
 export interface CycleOptions {
-  /** pathway significance threshold f_min as a fraction of the total Ox loss rate (direct formula); default 1e-4 */
+  /** pathway significance threshold f_min as a fraction of the gross Ox destruction Σ r_j·max(0, w_j) under the extended weights (docs/cycle-analysis.md); default 1e-4 */
   fminRelative?: number;
   /** "standard": O + O(1D) + O3; "extended": also NO2, 2 NO3, 3 N2O5, HNO3, HO2NO2, ClO, 2 OClO, 2 Cl2O2, 2 ClONO2, BrO, 2 BrONO2 (docs/cycle-analysis.md); default "standard" */
   oxDefinition?: OxDefinition;

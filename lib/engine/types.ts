@@ -43,7 +43,7 @@ export interface ConditionInput {
 }
 
 export interface AnalysisOptions {
-  /** pathway significance threshold as a fraction of the total Ox loss rate; default 1e-4 */
+  /** pathway significance threshold as a fraction of the gross Ox destruction (docs/cycle-analysis.md); default 1e-4 */
   fminRelative?: number;
   /** odd-oxygen family: "O+O(1D)+O3" (default) or "extended" (adds NO2, NO3, 2·N2O5, ClO, BrO, …) */
   oxDefinition?: "standard" | "extended";

@@ -69,9 +69,10 @@ function untilFinishedOrAborted<T>(finished: Promise<T>, signal?: AbortSignal): 
   if (!signal) return finished;
   return new Promise<T>((resolve, reject) => {
     const onAbort = () => reject(signal.reason);
-    if (signal.aborted) return onAbort();
-    signal.addEventListener("abort", onAbort, { once: true });
+    // handlers first: a task that fails after the abort must not become an unhandled rejection
     finished.then(resolve, reject).finally(() => signal.removeEventListener("abort", onAbort));
+    if (signal.aborted) onAbort();
+    else signal.addEventListener("abort", onAbort, { once: true });
   });
 }
 

@@ -234,11 +234,11 @@ export function compileMechanism(
         );
         return undefined;
       }
-      if (fr.rate.law === "equilibrium-reverse" || fr.photolysis) {
+      if (fr.rate.law === "equilibrium-reverse" || fr.rate.law === "uptake" || fr.photolysis) {
         sink.error(
           [...path, "rate", "forward"],
           "reverse",
-          `the forward reaction "${id}" must have a thermal rate law of its own`,
+          `the forward reaction "${id}" must have a gas-phase thermal rate law of its own`,
         );
         return undefined;
       }

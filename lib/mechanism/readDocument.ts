@@ -273,7 +273,7 @@ class Reader {
           );
         else if (o.forward !== undefined) {
           forward = this.rate(o.forward, [...path, "forward"], true);
-          if (forward?.law === "equilibrium-reverse" || forward?.law === "photolysis") {
+          if (forward?.law === "equilibrium-reverse" || forward?.law === "photolysis" || forward?.law === "uptake") {
             this.sink.error(
               [...path, "forward", "law"],
               "type",

@@ -609,7 +609,7 @@ export const openApiDocument = {
               fminRelative: {
                 type: "number",
                 default: 1e-4,
-                description: "pathway threshold, fraction of total Ox loss",
+                description: "pathway threshold, fraction of the gross Ox destruction (extended weights)",
               },
               oxDefinition: { enum: ["standard", "extended"], default: "standard" },
               uncertaintySamples: {

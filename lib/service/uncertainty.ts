@@ -12,6 +12,7 @@
  * These jobs have their own embedded back end; lib/service/jobs.ts does not
  * know the kind (see docs/uncertainty.md, "Routes").
  */
+import { solveConditionsOf } from "../engine/resolve-condition";
 import "server-only";
 import { z } from "zod";
 import { compileSource, type MechanismSource } from "../engine/mechanism-source";
@@ -135,13 +136,8 @@ async function analysisWithUncertainty(
     const mech = compileSource(src);
     const plan = planMonteCarlo(
       mech,
-      {
-        T_K: result.condition.T_K,
-        M_cm3: result.condition.M_cm3,
-        J_s: result.condition.J_s,
-        held_cm3: result.condition.held_cm3,
-        poolTotals_cm3: result.condition.poolTotals_cm3,
-      },
+      // every field the engine solved with (also the aerosol surface of uptake reactions)
+      solveConditionsOf(result.condition),
       result.steadyState,
       result.cycles,
       {

@@ -148,7 +148,38 @@ describe("analyseCycles on hand-solved systems", () => {
     // the pathways agree: X -> HO2 -> OH -> H is Ox-neutral once NO2 + hv is joined, X -> OH -> H destroys one O
     const r = analyseCycles(mech, state);
     expectClose(r.budget.loss_cm3s, 1, { rel: 1e-12 }, "pathway loss");
-    expect(Math.abs(r.budget.directMismatch)).toBeLessThan(1e-12);
+    expect(Math.abs(r.budget.directMismatch ?? Number.NaN)).toBeLessThan(1e-12);
+  });
+
+  it("shares an event's carried balance among its hydrogen-containing products, so a cancellation counts once (hand-solved)", () => {
+    // O + H2O -> 2 OH destroys one Ox; each OH owes half of it. Both OH then create an Ox (OH + NO -> NO2 + H):
+    // one gives back the Ox destroyed, the other is production, so L_direct = 1 − 2·½ = 0 (copying the whole
+    // balance to each OH would give 1 − 2 = −1).
+    const mech = handMechanism(
+      "shared balance (test, invented)",
+      {
+        H2O: "held",
+        Y: "held",
+        Z: "held",
+        O2: "held",
+        OH: "solved",
+        H: "solved",
+        NO: "solved",
+        NO2: "solved",
+        O: "solved",
+      },
+      {
+        R1: "O + H2O -> 2 OH",
+        R2: "OH + NO -> NO2 + H",
+        R3: "H + Y -> Z",
+        R4: "NO2 + hv -> NO + O",
+      },
+    );
+    const state = { numberDensity_cm3: mech.species.map(() => 1), rate_cm3s: [1, 2, 2, 2] };
+    const d = directOxLoss(mech, state);
+    expectClose(d.loss_cm3s, 0, { abs: 1e-12 }, "direct");
+    const weights = Object.fromEntries(d.terms.map((t) => [t.reactionId, t.weight]));
+    expectClose(weights.R2, -0.5, { rel: 1e-12 }, "OH + NO weight");
   });
 
   it("throws if an option is invalid or the mechanism has no odd oxygen", () => {

@@ -75,8 +75,8 @@ describe("reference mechanism, 20–60 km", () => {
     }
   });
 
-  it("agrees with the direct rate-limiting-step formula within 1 % at every level 20–60 km (measured ≤ 0.13 %)", () => {
-    for (const [z, r] of reports) expect(Math.abs(r.budget.directMismatch), `${z} km`).toBeLessThan(0.01);
+  it("agrees with the direct rate-limiting-step formula within 1 % at every level 20–60 km (measured ≤ 0.14 %)", () => {
+    for (const [z, r] of reports) expect(Math.abs(r.budget.directMismatch ?? Number.NaN), `${z} km`).toBeLessThan(0.01);
   });
 
   it("has NOx cycles largest near 30–35 km, as Jucks et al. (1996, JGR 101) measured for 24–38 km", () => {
