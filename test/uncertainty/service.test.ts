@@ -82,6 +82,30 @@ describe("uncertainty jobs", () => {
     expect(mc?.summaries).toEqual(direct.summaries);
   });
 
+  it("solve every sample with the condition's aerosol surface, as the central analysis does", async () => {
+    const volcanic = {
+      mechanismId: "reference",
+      condition: { altitude_km: 20, aerosolSurface_um2cm3: 20 },
+      options: { uncertaintySamples: 12, uncertaintySeed: 5 },
+    };
+    const s = await finished((await startUncertaintyJob({ analysis: volcanic })).id);
+    expect(s.state).toBe("done");
+    const mc = (await getAnalysisRecord(s.resultId as string)).result.uncertainty?.monteCarlo;
+    const mech = loadBuiltinMechanism("reference").mechanism;
+    const c = runAnalysis(mech, { id: "reference", title: mech.title }, { ...volcanic, options: {} });
+    expect(solveConditionsOf(c.condition).aerosolSurface_cm2cm3).toBeCloseTo(20e-8, 20);
+    const direct = monteCarlo(
+      mech,
+      solveConditionsOf(c.condition),
+      c.steadyState,
+      c.cycles,
+      { fminRelative: 1e-4, oxDefinition: "standard", heldSpecies: Object.keys(c.condition.held_cm3) },
+      { samples: 12, seed: 5 },
+    );
+    expect(mc?.failed).toBe(0);
+    expect(mc?.summaries).toEqual(direct.summaries);
+  });
+
   it("run every level of a stored sweep and keep a level that did not converge as such", async () => {
     const levels = [35, 40].map((z) => ({
       altitude_km: z,
