@@ -24,6 +24,7 @@ export function summariseLevel(request: AnalysisRequest, result: AnalysisResult,
       M_cm3: c.M_cm3,
       zenith_deg: c.zenith_deg,
       o3ColumnAbove_DU: c.o3ColumnAbove_DU,
+      aerosolSurface_um2cm3: c.aerosolSurface_um2cm3,
     },
     budget: ok
       ? {

@@ -137,13 +137,15 @@ export interface SweepLevel {
   message: string;
   /** the single-level analysis request this level is equivalent to (open it in the explorer) */
   request: AnalysisRequest;
-  /** K, hPa, cm⁻³, degrees, DU as resolved; null when the condition could not be resolved */
+  /** K, hPa, cm⁻³, degrees, DU, µm² cm⁻³ as resolved; null when the condition could not be resolved */
   condition: {
     T_K: number;
     p_hPa: number;
     M_cm3: number;
     zenith_deg: number;
     o3ColumnAbove_DU: number;
+    /** aerosol surface area density used by uptake reactions; absent in sweeps stored before engine 0.2.0 */
+    aerosolSurface_um2cm3?: number;
   } | null;
   budget: LevelBudget | null;
   cycles: LevelCycle[];

@@ -52,6 +52,7 @@ function expectLevelEqualsAnalysis(level: SweepLevel, single: AnalysisResult): v
   }
   expect(level.condition?.T_K).toBe(single.condition.T_K);
   expectClose(level.condition?.o3ColumnAbove_DU as number, single.condition.o3ColumnAbove_DU, { rel: 1e-12 });
+  expect(level.condition?.aerosolSurface_um2cm3).toBe(single.condition.aerosolSurface_um2cm3);
 }
 
 describe("runSweep", () => {
