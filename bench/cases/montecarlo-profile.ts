@@ -38,9 +38,9 @@ function profileCase(pool: EnginePool, label: string): BenchCase {
         levels.map(async (z) => {
           const t0 = performance.now();
           const res = (await pool.run({ kind: "analysis", mechanism: SRC, request: request(z) }, 3_600_000)) as {
-            uncertainty?: { monteCarlo?: { failed: number; succeeded: number } };
+            result: { uncertainty?: { monteCarlo?: { failed: number; succeeded: number } } };
           };
-          const mc = res.uncertainty?.monteCarlo;
+          const mc = res.result.uncertainty?.monteCarlo;
           if (!mc) throw new Error(`level ${z} km: no Monte Carlo result`);
           failed += mc.failed;
           succeeded += mc.succeeded;
