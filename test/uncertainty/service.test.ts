@@ -48,6 +48,21 @@ async function finished(id: string) {
   throw new Error("job did not finish");
 }
 
+/** The same Monte Carlo in this thread: central analysis of the request, then its samples with the given seed. */
+function inThread(request: { mechanismId: string; condition: { altitude_km: number } }, samples: number, seed: number) {
+  const mech = loadBuiltinMechanism(request.mechanismId).mechanism;
+  const c = runAnalysis(mech, { id: request.mechanismId, title: mech.title }, { ...request, options: {} });
+  const mc = monteCarlo(
+    mech,
+    solveConditionsOf(c.condition),
+    c.steadyState,
+    c.cycles,
+    { fminRelative: 1e-4, oxDefinition: "standard", heldSpecies: Object.keys(c.condition.held_cm3) },
+    { samples, seed },
+  );
+  return { condition: c.condition, mc };
+}
+
 const analysis = {
   mechanismId: "oxygen-chlorine",
   condition: { altitude_km: 40 },
@@ -69,17 +84,7 @@ describe("uncertainty jobs", () => {
     expect(record.result.uncertainty?.sensitivity?.status).toBe("ok");
     expect(record.request.options?.uncertaintySamples).toBe(120);
     // the same seed in one thread gives the same ranges as the batches
-    const mech = loadBuiltinMechanism("oxygen-chlorine").mechanism;
-    const c = runAnalysis(mech, { id: "oxygen-chlorine", title: mech.title }, { ...analysis, options: {} });
-    const direct = monteCarlo(
-      mech,
-      solveConditionsOf(c.condition),
-      c.steadyState,
-      c.cycles,
-      { fminRelative: 1e-4, oxDefinition: "standard", heldSpecies: Object.keys(c.condition.held_cm3) },
-      { samples: 120, seed: 3 },
-    );
-    expect(mc?.summaries).toEqual(direct.summaries);
+    expect(mc?.summaries).toEqual(inThread(analysis, 120, 3).mc.summaries);
   });
 
   it("solve every sample with the condition's aerosol surface, as the central analysis does", async () => {
@@ -91,19 +96,10 @@ describe("uncertainty jobs", () => {
     const s = await finished((await startUncertaintyJob({ analysis: volcanic })).id);
     expect(s.state).toBe("done");
     const mc = (await getAnalysisRecord(s.resultId as string)).result.uncertainty?.monteCarlo;
-    const mech = loadBuiltinMechanism("reference").mechanism;
-    const c = runAnalysis(mech, { id: "reference", title: mech.title }, { ...volcanic, options: {} });
-    expect(solveConditionsOf(c.condition).aerosolSurface_cm2cm3).toBeCloseTo(20e-8, 20);
-    const direct = monteCarlo(
-      mech,
-      solveConditionsOf(c.condition),
-      c.steadyState,
-      c.cycles,
-      { fminRelative: 1e-4, oxDefinition: "standard", heldSpecies: Object.keys(c.condition.held_cm3) },
-      { samples: 12, seed: 5 },
-    );
+    const direct = inThread(volcanic, 12, 5);
+    expect(solveConditionsOf(direct.condition).aerosolSurface_cm2cm3).toBeCloseTo(20e-8, 20);
     expect(mc?.failed).toBe(0);
-    expect(mc?.summaries).toEqual(direct.summaries);
+    expect(mc?.summaries).toEqual(direct.mc.summaries);
   });
 
   it("run every level of a stored sweep and keep a level that did not converge as such", async () => {
