@@ -20,7 +20,7 @@ export function checkPhotolysisInput(input: PhotolysisInput, options: Photolysis
   need(finiteIn(input?.altitude_km, 0, 86), "altitude_km", `altitude ${input?.altitude_km} km is outside 0–86 km`);
   need(finiteIn(input.zenith_deg, 0, 180), "zenith_deg", `zenith angle ${input.zenith_deg}° is outside 0–180°`);
   need(finiteIn(input.T_K, 150, 350), "T_K", `temperature ${input.T_K} K is outside 150–350 K`);
-  for (const key of ["o3ColumnAbove_cm2", "o2ColumnAbove_cm2", "o3ColumnTotal_cm2", "M_cm3"] as const) {
+  for (const key of ["o3ColumnAbove_cm2", "o2ColumnAbove_cm2", "M_cm3"] as const) {
     const v = input[key];
     if (v !== undefined) need(finiteIn(v, 0, Number.MAX_VALUE), key, `${key} = ${v} must be a finite number ≥ 0`);
   }
@@ -33,6 +33,13 @@ export function checkPhotolysisInput(input: PhotolysisInput, options: Photolysis
   }
   if (options.albedo !== undefined) {
     need(finiteIn(options.albedo, 0, 1), "albedo", `albedo ${options.albedo} is outside 0–1`);
+  }
+  if (options.aerosolOpticalDepth !== undefined) {
+    need(
+      finiteIn(options.aerosolOpticalDepth, 0, 10),
+      "aerosolOpticalDepth",
+      `aerosol optical depth ${options.aerosolOpticalDepth} is outside 0–10`,
+    );
   }
   if (options.o3ScaleHeight_km !== undefined) {
     need(

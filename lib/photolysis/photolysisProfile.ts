@@ -38,18 +38,14 @@ export function photolysisProfile(
   }
   let columns: number[] | undefined;
   let o3ColumnAt: ((zz: number) => number) | undefined;
-  let totalBelowLowest = 0;
   if (input.o3_cm3) {
     const top = Math.max(...z);
-    const bottom = Math.min(...z);
     columns = columnsAboveLevels(z, input.o3_cm3, {
       columnAboveTop_cm2: input.o3ColumnAboveTop_cm2 ?? ozoneColumnAbove_cm2(top),
     });
     const sorted = z.map((zz, i) => [zz, columns![i]] as const).sort((a, b) => a[0] - b[0]);
     o3ColumnAt = (zz: number) => columnAtLevels(sorted, zz);
-    totalBelowLowest = ozoneColumnAbove_cm2(0) - ozoneColumnAbove_cm2(bottom);
   }
-  const lowestColumn = columns ? Math.max(...columns) : 0;
   return z.map((zz, i) => {
     const T = input.T_K?.[i] ?? standardAtmosphere(zz).T_K;
     return photolysisFrequencies(
@@ -58,7 +54,6 @@ export function photolysisProfile(
         zenith_deg: input.zenith_deg,
         T_K: T,
         o3ColumnAbove_cm2: columns?.[i],
-        o3ColumnTotal_cm2: columns ? lowestColumn + totalBelowLowest : undefined,
       },
       { ...options, o3ColumnAt: options.o3ColumnAt ?? o3ColumnAt },
     );

@@ -15,8 +15,6 @@ export interface PhotolysisInput {
   o3ColumnAbove_cm2?: number;
   /** O2 column above the altitude, molecules cm⁻²; default: the standard atmosphere × 0.209476 */
   o2ColumnAbove_cm2?: number;
-  /** total O3 column (ground to top), molecules cm⁻², for the surface-reflected light; default: o3ColumnAbove_cm2 plus the default climatology below the altitude */
-  o3ColumnTotal_cm2?: number;
   /** air number density, cm⁻³; accepted for the engine's convenience, not used (no pressure-dependent yields are modelled) */
   M_cm3?: number;
 }
@@ -28,10 +26,14 @@ export interface PhotolysisOptions {
   channels?: string[];
   /** J values (s⁻¹) to return as given instead of computing them, by channel */
   fixed?: Record<string, number>;
-  /** effective Lambertian albedo of the ground, clouds and lower atmosphere (0–1); default 0.2 */
+  /** Lambertian albedo of the ground (and of clouds below, if any) for the diffuse light (0–1); default 0.3 */
   albedo?: number;
-  /** include Rayleigh extinction of the direct beam; default true */
+  /** aerosol optical depth of the column at 550 nm (≥ 0), spread like the background sulfate profile; default 0 */
+  aerosolOpticalDepth?: number;
+  /** include Rayleigh extinction of the direct beam and Rayleigh scattering; default true */
   rayleigh?: boolean;
+  /** include the diffuse light (two-stream multiple scattering and ground reflection); default true. Off: direct beam only */
+  diffuse?: boolean;
   /** only bins lying wholly inside [min, max] nm get sunlight (for tests and diagnostics); default: all */
   wavelengthRange_nm?: [number, number];
   /** scale height of the O3 column at the altitude, km, for the slant path near and beyond 90°; default: column/density of the default climatology */
@@ -56,6 +58,8 @@ export interface ActinicFlux {
   upper_nm: Float64Array;
   /** extraterrestrial photon flux, photons cm⁻² s⁻¹ per bin */
   topOfAtmosphere_cm2s: Float64Array;
-  /** actinic flux (direct + reflected), photons cm⁻² s⁻¹ per bin; in the Schumann–Runge bands the band-mean */
+  /** actinic flux (direct + diffuse), photons cm⁻² s⁻¹ per bin; in the Schumann–Runge bands the band-mean */
   actinic_cm2s: Float64Array;
+  /** the diffuse part of it, photons cm⁻² s⁻¹ per bin (0 below 206 nm) */
+  diffuse_cm2s: Float64Array;
 }

@@ -139,23 +139,33 @@ describe("photolysisFrequencies", () => {
     expect(some.O2).toBe(one.O2);
   });
 
-  it("adds surface-reflected light: more with a brighter albedo, none in the Hartley band below the ozone layer", () => {
+  it("adds ground-reflected light: between 80 % and 100 % of the Lambertian 1 + 2Aμ0 where the air is nearly clear, none in the Schumann–Runge bands", () => {
     const input = { altitude_km: 20, zenith_deg: 30, T_K: 216.65 };
     const dark = photolysisFrequencies(input, { albedo: 0 });
     const bright = photolysisFrequencies(input, { albedo: 0.5 });
-    // 1 + 2·A·μ0 for light the atmosphere does not absorb (Madronich 1987, from memory)
-    const expected = 1 + 2 * 0.5 * Math.cos(Math.PI / 6);
-    expect(bright.NO3_NO2 / dark.NO3_NO2).toBeGreaterThan(expected * 0.97);
-    expect(bright.NO3_NO2 / dark.NO3_NO2).toBeLessThan(expected * 1.001);
-    expect(bright.O2).toBe(dark.O2);
+    // 1 + 2·A·μ0 for light the atmosphere neither absorbs nor scatters (Madronich 1987, J. Geophys. Res. 92, 9740;
+    // from memory); Rayleigh scattering (τ ≈ 0.09 at 600 nm, common practice) and Chappuis absorption take some of it
+    const lambertian = 2 * 0.5 * Math.cos(Math.PI / 6);
+    const gain = bright.NO3_NO2 / dark.NO3_NO2 - 1;
+    expect(gain).toBeGreaterThan(0.8 * lambertian);
+    expect(gain).toBeLessThan(lambertian);
+    const sr = photolysisFrequencies(input, { albedo: 0, wavelengthRange_nm: [175, 205] }).O2;
+    expect(photolysisFrequencies(input, { albedo: 0.5, wavelengthRange_nm: [175, 205] }).O2).toBe(sr);
   });
 
-  it("exposes the actinic flux per bin, never above the extraterrestrial flux times 1 + 2Aμ0", () => {
-    const f = actinicFlux({ altitude_km: 25, zenith_deg: 50, T_K: 222 });
-    const cap = 1 + 2 * 0.2 * Math.cos((50 * Math.PI) / 180);
+  it("exposes the actinic flux per bin as the direct beam plus a diffuse part that is ≥ 0 and absent when switched off", () => {
+    const input = { altitude_km: 25, zenith_deg: 50, T_K: 222 };
+    const f = actinicFlux(input);
+    const direct = actinicFlux(input, { diffuse: false });
+    let diffuseSum = 0;
     for (let i = 0; i < f.actinic_cm2s.length; i++) {
-      expect(f.actinic_cm2s[i]).toBeLessThanOrEqual(f.topOfAtmosphere_cm2s[i] * cap * (1 + 1e-12));
+      expect(f.diffuse_cm2s[i]).toBeGreaterThanOrEqual(0);
+      expectClose(f.actinic_cm2s[i], direct.actinic_cm2s[i] + f.diffuse_cm2s[i], { rel: 1e-12, abs: 1e-300 });
+      expect(direct.diffuse_cm2s[i]).toBe(0);
+      if (f.upper_nm[i] <= 206) expect(f.diffuse_cm2s[i]).toBe(0);
+      diffuseSum += f.diffuse_cm2s[i];
     }
+    expect(diffuseSum).toBeGreaterThan(0);
   });
 
   it("uses the local temperature: colder air gives a smaller J(O1D) at 30 km", () => {
