@@ -154,6 +154,34 @@ export function ConditionsPanel(p: Props) {
         </fieldset>
 
         <fieldset className="space-y-2">
+          <legend className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">Light</legend>
+          <div className="grid grid-cols-2 gap-2">
+            <NumberField
+              id="albedo"
+              label="Ground albedo"
+              unit=""
+              value={c.albedo}
+              onChange={(v) => set({ albedo: v })}
+              placeholder="0.3"
+              error={p.fieldErrors.albedo}
+            />
+            <NumberField
+              id="aod"
+              label="Aerosol optical depth"
+              unit="550 nm"
+              value={c.aerosolOpticalDepth}
+              onChange={(v) => set({ aerosolOpticalDepth: v })}
+              placeholder="0"
+              error={p.fieldErrors.aerosolOpticalDepth}
+            />
+          </div>
+          <p className="text-[11px] text-stone-500">
+            Scattered and reflected light from a two-stream column; 0.05–0.1 for sea or forest, 0.6–0.9 over snow or
+            thick cloud.
+          </p>
+        </fieldset>
+
+        <fieldset className="space-y-2">
           <legend className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">Sun</legend>
           <div className="flex gap-3 text-[12px]" role="radiogroup" aria-label="Sun position from">
             <label className="flex items-center gap-1">

@@ -5,6 +5,7 @@
  */
 import type { AnalysisResult } from "@/lib/engine/types";
 import type { RateLaw } from "@/lib/kinetics/types";
+import { PHOTOLYSIS_CHANNELS } from "@/lib/photolysis/channels";
 import { familyLabel } from "@/lib/viz/familyLabel";
 import { familyOf } from "@/lib/viz/familyOf";
 import { formatLifetime, formatMixingRatio, formatNumber, formatPercent } from "@/lib/viz/formatNumber";
@@ -223,6 +224,7 @@ function ReactionDetails({ id, mechanism, result, onSelect }: { id: string } & O
         ) : null}
         <Row label="source">{rx.source ?? "not given"}</Row>
       </dl>
+      {rx.rate.law === "photolysis" ? <PhotolysisDetails channel={rx.rate.channel} result={result} /> : null}
       {rx.note ? <p className="mt-1 text-stone-600">{rx.note}</p> : null}
       <h3 className="mt-2 text-[11px] font-semibold uppercase tracking-wider text-stone-500">Species</h3>
       <p className="flex flex-wrap gap-1">
@@ -252,6 +254,23 @@ function ReactionDetails({ id, mechanism, result, onSelect }: { id: string } & O
           </ul>
         </>
       ) : null}
+    </>
+  );
+}
+
+/** J of a photolysis channel at the analysis's conditions, and where its light and data come from. */
+function PhotolysisDetails({ channel, result }: { channel: string; result: AnalysisResult | null }) {
+  const data = PHOTOLYSIS_CHANNELS.find((c) => c.id === channel)?.data;
+  const J = result?.condition.J_s[channel];
+  const light = result?.condition.sources?.J;
+  return (
+    <>
+      <h3 className="mt-2 text-[11px] font-semibold uppercase tracking-wider text-stone-500">Photolysis</h3>
+      <dl>
+        <Row label="J here">{J !== undefined ? `${formatNumber(J)} s⁻¹` : "—"}</Row>
+      </dl>
+      {light ? <p className="text-stone-600">Light: {light}</p> : null}
+      {data ? <p className="mt-1 text-stone-600">Data: {data}</p> : null}
     </>
   );
 }

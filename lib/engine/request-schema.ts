@@ -45,6 +45,13 @@ export const conditionSchema = z
         "expected an aerosol surface area density between 0 and 10000 µm² cm⁻³ (background ~1, after an eruption ~10–100)",
       )
       .optional(),
+    albedo: finite.refine((v) => v >= 0 && v <= 1, "expected a ground albedo between 0 and 1").optional(),
+    aerosolOpticalDepth: finite
+      .refine(
+        (v) => v >= 0 && v <= 10,
+        "expected an aerosol optical depth at 550 nm between 0 and 10 (background stratosphere ~0.005, after a large eruption ~0.1–0.3)",
+      )
+      .optional(),
   })
   .strict();
 

@@ -85,7 +85,10 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
  */
 export function jAt(
   mech: CompiledMechanism,
-  c: Pick<ResolvedCondition, "altitude_km" | "T_K" | "p_hPa" | "M_cm3" | "o3ColumnAbove_DU">,
+  c: Pick<
+    ResolvedCondition,
+    "altitude_km" | "T_K" | "p_hPa" | "M_cm3" | "o3ColumnAbove_DU" | "albedo" | "aerosolOpticalDepth"
+  >,
   input: Pick<ConditionInput, "J" | "jScale">,
   zenith_deg: number,
 ): Record<string, number> {
@@ -100,7 +103,7 @@ export function jAt(
       o3ColumnAbove_cm2: c.o3ColumnAbove_DU * DOBSON_UNIT_cm2,
       o2ColumnAbove_cm2: o2Above,
     },
-    { jScale: input.jScale, fixed: input.J },
+    { jScale: input.jScale, fixed: input.J, albedo: c.albedo, aerosolOpticalDepth: c.aerosolOpticalDepth },
   );
   return restrictJ(mech, all);
 }

@@ -40,6 +40,10 @@ export interface ConditionInput {
   o3ColumnAbove_DU?: number;
   /** aerosol surface area density for the mechanism's uptake reactions, µm² cm⁻³ (0–10000); default: background sulfate at the altitude */
   aerosolSurface_um2cm3?: number;
+  /** Lambertian albedo of the ground (and any cloud deck below) for the scattered light, 0–1; default 0.3 */
+  albedo?: number;
+  /** aerosol optical depth of the column at 550 nm for the light (0–10), spread like the background sulfate profile; default 0 */
+  aerosolOpticalDepth?: number;
 }
 
 export interface AnalysisOptions {
@@ -80,6 +84,10 @@ export interface ResolvedCondition {
   o3ColumnAbove_DU: number;
   /** aerosol surface area density used by uptake reactions, µm² cm⁻³ */
   aerosolSurface_um2cm3: number;
+  /** ground albedo used for the light, 0–1 (absent in records from before the two-stream light: 0.2, one reflection) */
+  albedo?: number;
+  /** column aerosol optical depth at 550 nm used for the light */
+  aerosolOpticalDepth?: number;
   /** every photolysis frequency used, s⁻¹ */
   J_s: Record<string, number>;
   /** held amounts used, cm⁻³ */

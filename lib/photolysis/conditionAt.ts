@@ -23,6 +23,7 @@ import {
 } from "../atmosphere";
 import type { ConditionInput, ResolvedCondition } from "../engine/types";
 import { InputError } from "../errors";
+import { DEFAULTS as PHOTOLYSIS_DEFAULTS } from "./actinicFlux";
 import { photolysisFrequencies } from "./photolysisFrequencies";
 
 export const DEFAULTS = {
@@ -73,6 +74,14 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
   if (input.zenith_deg !== undefined) {
     check(isIn(input.zenith_deg, 0, 180), "zenith_deg", `zenith angle ${input.zenith_deg}° is outside 0–180°`);
   }
+  if (input.albedo !== undefined) check(isIn(input.albedo, 0, 1), "albedo", `albedo ${input.albedo} is outside 0–1`);
+  if (input.aerosolOpticalDepth !== undefined) {
+    check(
+      isIn(input.aerosolOpticalDepth, 0, 10),
+      "aerosolOpticalDepth",
+      `aerosol optical depth ${input.aerosolOpticalDepth} is outside 0–10`,
+    );
+  }
   for (const [group, values] of [
     ["held", input.held],
     ["poolTotals", input.poolTotals],
@@ -105,6 +114,8 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
       year: Number(date.slice(0, 4)),
     });
 
+  const albedo = input.albedo ?? PHOTOLYSIS_DEFAULTS.albedo;
+  const aerosolOpticalDepth = input.aerosolOpticalDepth ?? PHOTOLYSIS_DEFAULTS.aerosolOpticalDepth;
   const sources: Record<string, string> = {
     T_K: input.T_K !== undefined ? "given" : "U.S. Standard Atmosphere 1976",
     p_hPa: input.p_hPa !== undefined ? "given" : "U.S. Standard Atmosphere 1976",
@@ -113,7 +124,7 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
         ? "given"
         : "NOAA solar-position equations (declination, equation of time, hour angle) for latitude, date and local mean solar time",
     o3Column: `default climatology O3 × standard atmosphere: ${climatologySources.O3}`,
-    J: "photolysisFrequencies (lib/photolysis): cross sections and solar spectrum approximate, from memory",
+    J: `photolysisFrequencies (lib/photolysis): direct beam and delta-Eddington two-stream scattered light, ground albedo ${albedo}${aerosolOpticalDepth > 0 ? `, aerosol optical depth ${aerosolOpticalDepth} at 550 nm` : ""}; cross sections and solar spectrum approximate, from memory (lib/photolysis/tables/README.md)`,
     aerosol: input.aerosolSurface_um2cm3 !== undefined ? "given" : BACKGROUND_SULFATE_SOURCE,
   };
 
@@ -139,7 +150,7 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
   const o2Above = O2_FRACTION * airColumnAbove_cm2(z) * (p_hPa / std.p_hPa);
   const J_s = photolysisFrequencies(
     { altitude_km: z, zenith_deg, T_K, o3ColumnAbove_cm2: o3Above, o2ColumnAbove_cm2: o2Above, M_cm3 },
-    { jScale: input.jScale, fixed: input.J },
+    { jScale: input.jScale, fixed: input.J, albedo, aerosolOpticalDepth },
   );
   if (input.J && Object.keys(input.J).length > 0)
     sources.J += `; fixed by the user: ${Object.keys(input.J).join(", ")}`;
@@ -159,6 +170,8 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
     ozone: input.ozone ?? DEFAULTS.ozone,
     o3ColumnAbove_DU: o3Above / DOBSON_UNIT_cm2,
     aerosolSurface_um2cm3: input.aerosolSurface_um2cm3 ?? backgroundSulfateSurface_um2cm3(z),
+    albedo,
+    aerosolOpticalDepth,
     J_s,
     held_cm3,
     poolTotals_cm3,

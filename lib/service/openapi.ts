@@ -600,6 +600,21 @@ export const openApiDocument = {
                 description:
                   "sulfate aerosol surface area density for uptake reactions, um2 cm-3; default: background profile",
               },
+              albedo: {
+                type: "number",
+                minimum: 0,
+                maximum: 1,
+                default: 0.3,
+                description: "Lambertian ground albedo for the scattered light (two-stream radiative transfer)",
+              },
+              aerosolOpticalDepth: {
+                type: "number",
+                minimum: 0,
+                maximum: 10,
+                default: 0,
+                description:
+                  "column aerosol optical depth at 550 nm for the light, spread like the background sulfate profile",
+              },
             },
           },
           options: {

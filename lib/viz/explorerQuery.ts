@@ -96,6 +96,10 @@ export function parseExplorerQuery(params: Params): ExplorerQuery {
   if (o3 === "solved" || o3 === "held") condition.ozone = o3;
   const sad = num("sad", 0, 10000);
   if (sad !== undefined) condition.aerosolSurface_um2cm3 = sad;
+  const albedo = num("alb", 0, 1);
+  if (albedo !== undefined) condition.albedo = albedo;
+  const aod = num("aod", 0, 10);
+  if (aod !== undefined) condition.aerosolOpticalDepth = aod;
   for (const key of q.keys().sort()) {
     const m = /^(total|held)\.(.+)$/.exec(key);
     if (!m) continue;
@@ -129,6 +133,8 @@ export function explorerQueryString(q: Omit<ExplorerQuery, "warnings">): string 
   out.set("mode", c.mode ?? EXPLORER_DEFAULTS.mode);
   if (c.ozone) out.set("o3", c.ozone);
   if (c.aerosolSurface_um2cm3 !== undefined) out.set("sad", String(c.aerosolSurface_um2cm3));
+  if (c.albedo !== undefined) out.set("alb", String(c.albedo));
+  if (c.aerosolOpticalDepth !== undefined) out.set("aod", String(c.aerosolOpticalDepth));
   for (const [k, v] of Object.entries(c.poolTotals ?? {}).sort(([a], [b]) => a.localeCompare(b)))
     out.set(`total.${k}`, String(v));
   for (const [k, v] of Object.entries(c.held ?? {}).sort(([a], [b]) => a.localeCompare(b)))

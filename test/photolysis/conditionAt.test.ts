@@ -68,5 +68,20 @@ describe("conditionAt", () => {
     expect(() => conditionAt({ altitude_km: 30, date: "2026-02-30" })).toThrow(/condition\.date/);
     expect(() => conditionAt({ altitude_km: 30, held: { CH4: 2 } })).toThrow(/condition\.held\.CH4/);
     expect(() => conditionAt({ altitude_km: 30, latitude_deg: 100 })).toThrow(/condition\.latitude_deg/);
+    expect(() => conditionAt({ altitude_km: 30, albedo: 1.2 })).toThrow(/condition\.albedo/);
+    expect(() => conditionAt({ altitude_km: 30, aerosolOpticalDepth: -0.1 })).toThrow(/condition\.aerosolOpticalDepth/);
+  });
+
+  it("takes the ground albedo and aerosol optical depth for the light, records them, and says so in the J source", () => {
+    const base = conditionAt({ altitude_km: 20, zenith_deg: 30 });
+    expect(base.albedo).toBe(0.3);
+    expect(base.aerosolOpticalDepth).toBe(0);
+    const snow = conditionAt({ altitude_km: 20, zenith_deg: 30, albedo: 0.9 });
+    expect(snow.J_s.NO2).toBeGreaterThan(1.2 * base.J_s.NO2);
+    expect(snow.sources.J).toMatch(/albedo 0\.9/);
+    const hazy = conditionAt({ altitude_km: 12, zenith_deg: 30, aerosolOpticalDepth: 0.3 });
+    const clear = conditionAt({ altitude_km: 12, zenith_deg: 30 });
+    expect(hazy.J_s.NO2).not.toBe(clear.J_s.NO2);
+    expect(hazy.sources.J).toMatch(/aerosol optical depth 0\.3/);
   });
 });

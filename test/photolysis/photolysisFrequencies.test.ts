@@ -168,6 +168,32 @@ describe("photolysisFrequencies", () => {
     expect(diffuseSum).toBeGreaterThan(0);
   });
 
+  it("dims the direct beam by the delta-scaled aerosol extinction, Beer–Lambert with f = g² (Joseph et al. 1976)", () => {
+    const input = { altitude_km: 0, zenith_deg: 0, T_K: 288.15 };
+    const opts = { diffuse: false, wavelengthRange_nm: [545, 555] as [number, number] };
+    const clear = photolysisFrequencies(input, opts).NO3_NO2;
+    const hazy = photolysisFrequencies(input, { ...opts, aerosolOpticalDepth: 0.3 }).NO3_NO2;
+    // two 5 nm bins at 547.5 and 552.5 nm, Ångström exponent 1, ω 0.99, g 0.7: τ' = 0.3·(550/λ)·(1 − 0.99·0.49)
+    const t = (l: number) => Math.exp(-0.3 * (550 / l) * (1 - 0.99 * 0.49));
+    expectClose(hazy / clear, 0.5 * (t(547.5) + t(552.5)), { rel: 3e-3 });
+    // with the scattered light on, the aerosol sends part of what it takes out of the beam on as diffuse light
+    const all = photolysisFrequencies(input, { wavelengthRange_nm: [545, 555], aerosolOpticalDepth: 0.3 }).NO3_NO2;
+    expect(all).toBeGreaterThan(hazy);
+  });
+
+  it("gives J(NO2) at the ground under a high sun in the band of the Trebs et al. (2009) fit, and more aloft", () => {
+    // Trebs et al. 2009 (Atmos. Meas. Tech. 2, 725): j(NO2) = (1 + α)(B1·G + B2·G²); with G = 900–1000 W m⁻² and a
+    // UV-A albedo α = 0.1 this is 1.02–1.09e-2 s⁻¹ (computed from the published fit). 10 % more or less is allowed for
+    // the two-stream method and the remembered cross sections and solar spectrum.
+    const ground = photolysisFrequencies({ altitude_km: 0, zenith_deg: 10, T_K: 288.15 }, { albedo: 0.1 }).NO2;
+    expect(ground).toBeGreaterThan(0.9 * 1.02e-2);
+    expect(ground).toBeLessThan(1.1 * 1.09e-2);
+    // scattered light from below and less extinction above: J(NO2) rises from the ground to 20 km (common practice)
+    const aloft = photolysisFrequencies({ altitude_km: 20, zenith_deg: 10, T_K: 216.65 }, { albedo: 0.1 }).NO2;
+    expect(aloft / ground).toBeGreaterThan(1.1);
+    expect(aloft / ground).toBeLessThan(1.6);
+  });
+
   it("uses the local temperature: colder air gives a smaller J(O1D) at 30 km", () => {
     // Huggins-band cross sections and the O(1D) yield fall on cooling (JPL evaluation; common practice)
     const cold = photolysisFrequencies({ altitude_km: 30, zenith_deg: 30, T_K: 200 }).O3_O1D;
@@ -184,6 +210,7 @@ describe("photolysisFrequencies", () => {
     expect(() => photolysisFrequencies(ok, { channels: ["O4"] })).toThrow(/channels\[0\]/);
     expect(() => photolysisFrequencies(ok, { fixed: { NO2: Number.NaN } })).toThrow(/fixed\.NO2/);
     expect(() => photolysisFrequencies(ok, { albedo: 2 })).toThrow(/albedo/);
+    expect(() => photolysisFrequencies(ok, { aerosolOpticalDepth: -1 })).toThrow(/aerosolOpticalDepth/);
     expect(() => photolysisFrequencies(ok, { jScale: -1 })).toThrow(/jScale/);
     expect(() => photolysisFrequencies(ok, { wavelengthRange_nm: [500, 300] })).toThrow(/wavelengthRange_nm/);
   });
