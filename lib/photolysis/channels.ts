@@ -3,6 +3,8 @@
  * of the project), with their products and the data each J is built from.
  */
 
+import { HNO3_SOURCE } from "./hno3CrossSection";
+
 export interface PhotolysisChannel {
   /** channel id, e.g. "O3_O1D" */
   id: string;
@@ -54,7 +56,12 @@ export const PHOTOLYSIS_CHANNELS: readonly PhotolysisChannel[] = [
     data: "cross section and yield approximate, from memory",
   },
   { id: "N2O5", molecule: "N2O5", reaction: "N2O5 + hv -> NO2 + NO3", data: `approximate, from memory; ${YIELD_1}` },
-  { id: "HNO3", molecule: "HNO3", reaction: "HNO3 + hv -> OH + NO2", data: `approximate, from memory; ${YIELD_1}` },
+  {
+    id: "HNO3",
+    molecule: "HNO3",
+    reaction: "HNO3 + hv -> OH + NO2",
+    data: `${HNO3_SOURCE}; ${YIELD_1}`,
+  },
   {
     id: "HO2NO2",
     molecule: "HO2NO2",

@@ -1,7 +1,7 @@
 /**
  * Per-bin tables built once from the data files: cross section × quantum
  * yield (cm²) of every channel on the wavelength grid, bin-averaged with 8
- * midpoints; temperature-dependent ones (O3 and its two channels, N2O, Cl2)
+ * midpoints; temperature-dependent ones (O3 and its two channels, N2O, Cl2, HNO3)
  * on a 180–320 K grid every 5 K, interpolated linearly in T at call time.
  * Also the O2 absorption outside the Schumann–Runge bands, the bands'
  * opacity-distribution bounds, and the Rayleigh cross section.
@@ -10,6 +10,7 @@
 import { brclCrossSection_cm2 } from "./brclCrossSection";
 import { PHOTOLYSIS_CHANNELS } from "./channels";
 import { cl2CrossSection_cm2 } from "./cl2CrossSection";
+import { hno3CrossSection_cm2 } from "./hno3CrossSection";
 import { interpolateNodes, type Nodes } from "./interpolateNodes";
 import { n2oCrossSection_cm2 } from "./n2oCrossSection";
 import { o1dQuantumYield } from "./o1dQuantumYield";
@@ -24,7 +25,7 @@ import { binMean, WAVELENGTH_GRID } from "./wavelengthGrid";
 export const T_GRID_K = { first: 180, step: 5, count: 29 } as const;
 
 /** Channels whose σ·φ depends on temperature. */
-export const T_DEPENDENT_CHANNELS = ["O3_O1D", "O3_O", "N2O", "Cl2"] as const;
+export const T_DEPENDENT_CHANNELS = ["O3_O1D", "O3_O", "N2O", "Cl2", "HNO3"] as const;
 
 export interface SpectralTables {
   /** σ·φ per bin, cm², of every temperature-independent channel */
@@ -72,7 +73,6 @@ const FIXED_SPECS: Record<string, (l: number) => number> = {
   NO3_NO: (l) => xs(CROSS_SECTIONS.NO3.points)(l) * yieldOf(QUANTUM_YIELDS.NO3_NO.points)(l),
   NO3_NO2: (l) => xs(CROSS_SECTIONS.NO3.points)(l) * yieldOf(QUANTUM_YIELDS.NO3_NO2.points)(l),
   N2O5: xs(CROSS_SECTIONS.N2O5.points),
-  HNO3: xs(CROSS_SECTIONS.HNO3.points),
   HO2NO2: xs(CROSS_SECTIONS.HO2NO2.points),
   H2O2: xs(CROSS_SECTIONS.H2O2.points),
   HOCl: xs(CROSS_SECTIONS.HOCl.points),
@@ -113,7 +113,7 @@ function buildTables(): SpectralTables {
   }
 
   const o3ByTemperature: Float64Array[] = [];
-  const byTemperature: Record<string, Float64Array[]> = { O3_O1D: [], O3_O: [], N2O: [], Cl2: [] };
+  const byTemperature: Record<string, Float64Array[]> = { O3_O1D: [], O3_O: [], N2O: [], Cl2: [], HNO3: [] };
   for (let k = 0; k < T_GRID_K.count; k++) {
     const T = T_GRID_K.first + k * T_GRID_K.step;
     o3ByTemperature.push(perBin((l) => o3CrossSection_cm2(l, T)));
@@ -121,6 +121,7 @@ function buildTables(): SpectralTables {
     byTemperature.O3_O.push(perBin((l) => o3CrossSection_cm2(l, T) * (1 - o1dQuantumYield(l, T))));
     byTemperature.N2O.push(perBin((l) => n2oCrossSection_cm2(l, T)));
     byTemperature.Cl2.push(perBin((l) => cl2CrossSection_cm2(l, T)));
+    byTemperature.HNO3.push(perBin((l) => hno3CrossSection_cm2(l, T)));
   }
 
   const srMin = new Float64Array(G.n);

@@ -112,10 +112,10 @@ export const CLIMATOLOGY: Readonly<Record<ClimatologySpecies, MixingRatioProfile
   NOy: {
     z_km: [0, 10, 12, 14, 16, 18, 20, 25, 30, 35, 40, 45, 50, 55, 60, 70, 80, 86],
     mixingRatio: [
-      0.5e-9, 0.5e-9, 1e-9, 2e-9, 3.5e-9, 5.5e-9, 8e-9, 13e-9, 16e-9, 17.5e-9, 17e-9, 15e-9, 12e-9, 9e-9, 6e-9, 2.5e-9,
-      1e-9, 1e-9,
+      0.5e-9, 0.58e-9, 0.95e-9, 1.33e-9, 2.0e-9, 3.2e-9, 5.1e-9, 10.5e-9, 16e-9, 17.5e-9, 17e-9, 15e-9, 12e-9, 9e-9,
+      6e-9, 2.5e-9, 1e-9, 1e-9,
     ],
     source:
-      "approximate, from memory: mid-latitude NOy peaking at 15–20 ppbv near 30–40 km, anticorrelated with N2O below",
+      "approximate, from memory: mid-latitude NOy peaking at 15–20 ppbv near 30–40 km; at 10–25 km from this climatology's N2O by the compact lower-stratosphere correlation NOy ≈ 0.5 ppbv + 0.075·(336 ppbv − N2O) (slope within the −0.06 to −0.09 of mid-latitude aircraft measurements, e.g. Fahey et al. 1990, Nature 344, 321; from memory), which joins the 16 ppbv at 30 km",
   },
 };
