@@ -5,7 +5,6 @@ export { defineOutputs, OUTPUT_DEFAULTS, type OutputOptions } from "./defineOutp
 export { evaluateOutputs } from "./evaluateOutputs";
 export { finishMonteCarlo, MONTE_CARLO_DEFAULTS, type MonteCarloPlan, monteCarlo, planMonteCarlo } from "./monteCarlo";
 export { normalDraws } from "./normalDraws";
-export { type ProfileBandSeries, profileBandSeries } from "./profileBandSeries";
 export { quantile } from "./quantile";
 export { RANK_DEFAULTS, type RankOptions, rankAgainstAltitude, rankSensitivities } from "./rankSensitivities";
 export { runSampleBatch, type SampleBatch } from "./runSampleBatch";
