@@ -1,7 +1,12 @@
-/** CSV exports of an analysis, with units in the headers (RFC 4180 quoting). */
+/**
+ * CSV exports of an analysis, with units in the headers (RFC 4180 quoting),
+ * each after its provenance block (lib/service/csvProvenance.ts).
+ */
 import { csvTable as toCsv } from "../csv";
 import type { AnalysisResult } from "../engine/types";
 import { monteCarloCsv, sensitivityCsv } from "../uncertainty";
+import { getAnalysisRecord } from "./analyses";
+import { type CsvExportOptions, conditionEntries, csvExport, csvMechanism } from "./csvProvenance";
 
 export { toCsv };
 
@@ -93,4 +98,39 @@ export function uncertaintyCsv(r: AnalysisResult): string {
 export function sensitivitiesCsv(r: AnalysisResult): string {
   const s = r.uncertainty?.sensitivity;
   return s ? sensitivityCsv(s) : "# no sensitivities: request options.sensitivity = true\n";
+}
+
+const ANALYSIS_EXPORTS = {
+  "rates.csv": [ratesCsv, "rates.csv: every reaction's rate constant, rate and odd-oxygen effect at the steady state"],
+  "species.csv": [speciesCsv, "species.csv: every species' amount, production, loss and lifetime at the steady state"],
+  "cycles.csv": [cyclesCsv, "cycles.csv: the catalytic cycles with rate, share of the Ox loss and chain length"],
+  "uncertainty.csv": [uncertaintyCsv, "uncertainty.csv: Monte Carlo medians and 5–95 % ranges of the outputs"],
+  "sensitivities.csv": [sensitivitiesCsv, "sensitivities.csv: normalised sensitivities d ln(output) / d ln(k)"],
+} as const;
+
+/** A CSV export of a stored analysis with its provenance block; null for an unknown file. */
+export async function analysisExport(
+  id: string,
+  file: string,
+  o: CsvExportOptions,
+): Promise<{ csv: string; filename: string } | null> {
+  const entry = ANALYSIS_EXPORTS[file as keyof typeof ANALYSIS_EXPORTS];
+  if (!entry) return null;
+  const [make, table] = entry;
+  const record = await getAnalysisRecord(id);
+  const r = record.result;
+  const csv = csvExport(
+    make(r),
+    {
+      table,
+      mechanisms: [await csvMechanism(r.mechanism)],
+      condition: conditionEntries(r.condition),
+      engineVersion: r.engineVersion,
+      computedAt: record.createdAt,
+      permalink: `/a/${id}`,
+      record: `/api/analyses/${id}`,
+    },
+    o,
+  );
+  return { csv, filename: `analysis-${id}-${file}` };
 }

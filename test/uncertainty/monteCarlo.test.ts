@@ -107,7 +107,7 @@ describe("Monte Carlo over the rate-constant uncertainties", () => {
 
 describe("the draws", () => {
   it("use the JPL factor f(T) = f(298)·exp|g(1/T − 1/298)| as one standard deviation of ln k", () => {
-    // O + O3: f(298) = 1.15, g = 200 K (JPL 19-5, from memory; shared reference data section B)
+    // O + O3: f(298) = 1.15, g = 200 K (JPL 19-5, from memory; docs/references.md, Kinetics)
     const sigma = logFactors(mech, 220);
     const j = mech.reactions.findIndex((r) => r.equation === "O + O3 -> 2 O2");
     expect(j).toBeGreaterThanOrEqual(0);
