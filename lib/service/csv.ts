@@ -1,12 +1,11 @@
 /**
- * CSV exports of an analysis, with units in the headers (RFC 4180 quoting),
- * each after its provenance block (lib/service/csvProvenance.ts).
+ * The CSV tables of an analysis, with units in the headers (RFC 4180
+ * quoting); lib/service/analysisExports.ts sends them after their
+ * provenance block.
  */
-import { csvTable as toCsv } from "../csv";
+import { type CsvCommentEntry, csvTable as toCsv } from "../csv";
 import type { AnalysisResult } from "../engine/types";
-import { monteCarloCsv, sensitivityCsv } from "../uncertainty";
-import { getAnalysisRecord } from "./analyses";
-import { type CsvExportOptions, conditionEntries, csvExport, csvMechanism } from "./csvProvenance";
+import { monteCarloCsv, monteCarloNotes, sensitivityCsv, sensitivityNotes } from "../uncertainty";
 
 export { toCsv };
 
@@ -88,49 +87,26 @@ export function cyclesCsv(r: AnalysisResult): string {
   );
 }
 
-/** Monte Carlo medians and 5–95 % ranges (lib/uncertainty); a comment line only when the analysis has none. */
+/** Monte Carlo medians and 5–95 % ranges (lib/uncertainty); "" when the analysis has none (see uncertaintyNotes). */
 export function uncertaintyCsv(r: AnalysisResult): string {
   const mc = r.uncertainty?.monteCarlo;
-  return mc ? monteCarloCsv(mc) : "# no Monte Carlo ranges: request options.uncertaintySamples > 0\n";
+  return mc ? monteCarloCsv(mc) : "";
 }
 
-/** Sensitivity coefficients in long form (lib/uncertainty); a comment line only when the analysis has none. */
+/** What uncertaintyCsv was computed with, or why it is empty, for the provenance block. */
+export function uncertaintyNotes(r: AnalysisResult): CsvCommentEntry[] {
+  const mc = r.uncertainty?.monteCarlo;
+  return mc ? monteCarloNotes(mc) : [["note", "no Monte Carlo ranges: request options.uncertaintySamples > 0"]];
+}
+
+/** Sensitivity coefficients in long form (lib/uncertainty); "" when the analysis has none (see sensitivitiesNotes). */
 export function sensitivitiesCsv(r: AnalysisResult): string {
   const s = r.uncertainty?.sensitivity;
-  return s ? sensitivityCsv(s) : "# no sensitivities: request options.sensitivity = true\n";
+  return s ? sensitivityCsv(s) : "";
 }
 
-const ANALYSIS_EXPORTS = {
-  "rates.csv": [ratesCsv, "rates.csv: every reaction's rate constant, rate and odd-oxygen effect at the steady state"],
-  "species.csv": [speciesCsv, "species.csv: every species' amount, production, loss and lifetime at the steady state"],
-  "cycles.csv": [cyclesCsv, "cycles.csv: the catalytic cycles with rate, share of the Ox loss and chain length"],
-  "uncertainty.csv": [uncertaintyCsv, "uncertainty.csv: Monte Carlo medians and 5–95 % ranges of the outputs"],
-  "sensitivities.csv": [sensitivitiesCsv, "sensitivities.csv: normalised sensitivities d ln(output) / d ln(k)"],
-} as const;
-
-/** A CSV export of a stored analysis with its provenance block; null for an unknown file. */
-export async function analysisExport(
-  id: string,
-  file: string,
-  o: CsvExportOptions,
-): Promise<{ csv: string; filename: string } | null> {
-  const entry = ANALYSIS_EXPORTS[file as keyof typeof ANALYSIS_EXPORTS];
-  if (!entry) return null;
-  const [make, table] = entry;
-  const record = await getAnalysisRecord(id);
-  const r = record.result;
-  const csv = csvExport(
-    make(r),
-    {
-      table,
-      mechanisms: [await csvMechanism(r.mechanism)],
-      condition: conditionEntries(r.condition),
-      engineVersion: r.engineVersion,
-      computedAt: record.createdAt,
-      permalink: `/a/${id}`,
-      record: `/api/analyses/${id}`,
-    },
-    o,
-  );
-  return { csv, filename: `analysis-${id}-${file}` };
+/** The method behind sensitivitiesCsv, or why it is empty, for the provenance block. */
+export function sensitivitiesNotes(r: AnalysisResult): CsvCommentEntry[] {
+  const s = r.uncertainty?.sensitivity;
+  return s ? sensitivityNotes(s) : [["note", "no sensitivities: request options.sensitivity = true"]];
 }

@@ -12,4 +12,4 @@ export { logFactors, SAMPLE_DEFAULTS, type SampleOptions, sampleMultipliers } fr
 export { SENSITIVITY_DEFAULTS, type SensitivityOptions, sensitivities, sensitivityParameters } from "./sensitivities";
 export { SUMMARY_DEFAULTS, summariseSamples } from "./summariseSamples";
 export type * from "./types";
-export { monteCarloCsv, sensitivityCsv } from "./uncertaintyCsv";
+export { monteCarloCsv, monteCarloNotes, sensitivityCsv, sensitivityNotes } from "./uncertaintyCsv";

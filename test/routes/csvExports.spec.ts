@@ -1,18 +1,10 @@
 import { type APIRequestContext, expect, test } from "@playwright/test";
 import { readCsv, withoutCsvComments } from "../../lib/csv";
+import { finish } from "./finishJob";
 
 // Every CSV export starts with its provenance block of `# key: value` lines (DEVELOPERS.md, "CSV exports").
 // A reader that skips '#' lines (pandas comment="#", R comment.char = "#") is imitated by dropping them and
 // parsing with lib/csv; `?comments=none` must give exactly that table.
-
-async function finish(request: APIRequestContext, jobId: string) {
-  for (let i = 0; i < 600; i++) {
-    const s = await (await request.get(`/api/jobs/${jobId}`)).json();
-    if (["done", "failed", "cancelled"].includes(s.state)) return s;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`job ${jobId} did not finish`);
-}
 
 /** The `# key: value` entries of the block at the top of a CSV text. */
 function block(text: string): Map<string, string> {
@@ -85,7 +77,7 @@ test.describe("CSV exports", () => {
     expect(readCsv(rates)).toHaveLength(created.result.steadyState.reactions.length + 1);
     const wrong = await request.get(`/api/analyses/${id}/rates.csv?comments=off`);
     expect(wrong.status()).toBe(400);
-    expect((await wrong.json()).message).toContain("comments=none");
+    expect((await wrong.json()).error.message).toContain("comments=none");
   });
 
   test("sweep and comparison CSVs carry the profile and both sides; profile.csv still reads as a profile", async ({

@@ -1,4 +1,5 @@
-import { type APIRequestContext, expect, test } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { finish } from "./finishJob";
 
 // Route tests of sweeps, comparisons and jobs against the started production server (no mocks).
 
@@ -7,15 +8,6 @@ const small = {
   profile: { kind: "standard" },
   grid: { from_km: 30, to_km: 40, step_km: 5 },
 };
-
-async function finish(request: APIRequestContext, jobId: string) {
-  for (let i = 0; i < 600; i++) {
-    const s = await (await request.get(`/api/jobs/${jobId}`)).json();
-    if (["done", "failed", "cancelled"].includes(s.state)) return s;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`job ${jobId} did not finish`);
-}
 
 test.describe("profile routes", () => {
   test("a sweep is queued, reports progress, is stored with a permalink and exports CSV", async ({ request }) => {

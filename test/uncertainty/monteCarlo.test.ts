@@ -9,6 +9,7 @@ import {
   logFactors,
   monteCarlo,
   monteCarloCsv,
+  monteCarloNotes,
   normalDraws,
   planMonteCarlo,
   quantile,
@@ -77,9 +78,13 @@ describe("Monte Carlo over the rate-constant uncertainties", () => {
     expect(mc.notVaried).toContain("J_O2");
     const bands = shareBands(mc);
     expect(bands.map((b) => b.family).sort()).toEqual(["ClOx", "Ox"]);
-    const csv = monteCarloCsv(mc).split("\n");
-    expect(csv[1]).toBe("key,kind,label,unit,central,median,p05,p95,count,missing");
-    expect(csv.length).toBe(mc.outputs.length + 3);
+    const csv = monteCarloCsv(mc).split("\r\n");
+    expect(csv[0]).toBe("key,kind,label,unit,central,median,p05,p95,count,missing");
+    expect(csv.length).toBe(mc.outputs.length + 2);
+    expect(monteCarloNotes(mc)[0]).toEqual([
+      "monte-carlo",
+      `${mc.samples} samples, seed ${mc.seed}, ${mc.succeeded} converged, ${mc.failed} failed`,
+    ]);
   });
 
   it("counts and reports a sample that fails instead of hiding it", () => {

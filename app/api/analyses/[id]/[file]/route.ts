@@ -1,4 +1,4 @@
-import { analysisExport } from "@/lib/service/csv";
+import { analysisExport } from "@/lib/service/analysisExports";
 import { csvExportOptions } from "@/lib/service/csvProvenance";
 import { csvResponse, notFound, respond } from "@/lib/service/http";
 
