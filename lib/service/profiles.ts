@@ -318,16 +318,15 @@ const PROFILE_EXPORTS = {
 } as const;
 
 /** The settings every level of a sweep shares (the per-level condition is in the table). */
-function sweepCondition(r: SweepResult, request: SweepRequest, side?: string): CsvCommentEntry[] {
-  const pre = side ? `${side}-` : "";
+function sweepCondition(r: SweepResult, request: SweepRequest): CsvCommentEntry[] {
   const { profile: _profile, mechanismId: _mechanism, ...settings } = request;
   return [
     [
-      `${pre}profile`,
+      "profile",
       `${r.profile.title} (${r.profile.source}${r.profile.demo ? "; invented demo data, not a measurement" : ""})`,
     ],
-    [`${pre}condition`, `per level in the table; mode=${r.mode}; ozone=${r.ozone}; o3-column=${r.columnSource}`],
-    [`${pre}request`, JSON.stringify(settings)],
+    ["condition", `per level in the table; mode=${r.mode}; ozone=${r.ozone}; o3-column=${r.columnSource}`],
+    ["request", JSON.stringify(settings)],
   ];
 }
 
@@ -337,8 +336,8 @@ export async function profileExport(
   file: string,
   o: CsvExportOptions,
 ): Promise<{ csv: string; filename: string } | null> {
+  if (!Object.hasOwn(PROFILE_EXPORTS, file)) return null;
   const entry = PROFILE_EXPORTS[file as keyof typeof PROFILE_EXPORTS];
-  if (!entry) return null;
   const [make, table] = entry;
   const record = await getProfileRecord(id);
   const r = record.body.result;

@@ -75,6 +75,8 @@ test.describe("CSV exports", () => {
     expect(block(await proxied.text()).get("permalink")).toBe(`https://ozone.example.org/a/${id}`);
     const rates = await (await request.get(`/api/analyses/${id}/rates.csv?comments=none`)).text();
     expect(readCsv(rates)).toHaveLength(created.result.steadyState.reactions.length + 1);
+    // a file name that is a property of every object is an unknown export, not a server error
+    expect((await request.get(`/api/analyses/${id}/toString`)).status()).toBe(404);
     const wrong = await request.get(`/api/analyses/${id}/rates.csv?comments=off`);
     expect(wrong.status()).toBe(400);
     expect((await wrong.json()).error.message).toContain("comments=none");
@@ -101,6 +103,7 @@ test.describe("CSV exports", () => {
       expect(entries.get("permalink")?.endsWith(`/profiles/${sweep.resultId}`)).toBe(true);
       expect(JSON.parse(entries.get("request") as string).grid).toEqual(small.grid);
     }
+    expect((await request.get(`/api/profiles/${sweep.resultId}/constructor`)).status()).toBe(404);
     // profile.csv is the upload format, whose own "# title:" lines stay in the bare file
     const profile = await (await request.get(`/api/profiles/${sweep.resultId}/profile.csv`)).text();
     const profileBare = await (await request.get(`/api/profiles/${sweep.resultId}/profile.csv?comments=none`)).text();
