@@ -1,4 +1,4 @@
-// `npm test`: the whole gate. Typecheck, lint/format, unit and reference tests
+// `npm test`: the whole gate. Typecheck, lint/format, dependency rules, unit and reference tests
 // (vitest), the scale-out suite (vitest, test/scale) against a local Redis and
 // PostgreSQL that scripts/services.mjs starts and stops, then route and
 // browser tests (Playwright) against a really started production server.
@@ -35,6 +35,14 @@ function ensureChromium() {
 mkdirSync("test-results", { recursive: true });
 run("typecheck", "node_modules/.bin/tsc", ["--noEmit"]);
 run("lint", "node_modules/.bin/biome", ["check", "."]);
+// import circles and upward imports between the lib/ layers (.dependency-cruiser.cjs)
+run("deps", "node_modules/.bin/depcruise", [
+  "--config",
+  ".dependency-cruiser.cjs",
+  "--ignore-known",
+  ".dependency-cruiser-known-violations.json",
+  "lib",
+]);
 run("unit", "node_modules/.bin/vitest", [
   "run",
   "--reporter=default",

@@ -3,6 +3,7 @@
  * space for the answers. Rendered on the server from the student record only.
  */
 import type { StudentSheet } from "@/lib/assessment/types";
+import { CAUTION_LINE } from "@/lib/caution";
 
 interface Props {
   sheet: StudentSheet;
@@ -73,6 +74,9 @@ export function StudentSheetView({ sheet, title, mechanismTitle, instructions, v
         ))}
       </ol>
       <p className="mt-6 text-right text-[12px] text-stone-500">Total: {total} marks</p>
+      <p className="mt-4 border-t border-stone-300 pt-1 text-[11px] text-stone-500" data-testid="sheet-caution">
+        {CAUTION_LINE}
+      </p>
     </article>
   );
 }

@@ -9,9 +9,9 @@ import { standardAtmosphere } from "@/lib/atmosphere/standardAtmosphere";
 import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
+import { NumberField } from "../NumberField";
 import type { Problem } from "./api";
 import { MechanismPicker } from "./MechanismPicker";
-import { NumberField } from "./NumberField";
 import { Panel } from "./Panel";
 
 /** Amount fields offered when the mechanism has them: id, kind, display unit and factor to mol/mol. */

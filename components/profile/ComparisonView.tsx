@@ -143,7 +143,7 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
           onChange={setDiffScale}
           options={[
             { value: "linear", label: "linear" },
-            { value: "symlog", label: "symmetric log" },
+            { value: "signed-log", label: "symmetric log" },
           ]}
         />
       </div>

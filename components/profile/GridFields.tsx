@@ -1,7 +1,7 @@
 "use client";
 /** The altitude grid of a sweep: from, to, step (km); empty fields use the defaults. */
 import type { SweepGrid } from "@/lib/profiles/types";
-import { NumberField } from "./NumberField";
+import { NumberField } from "../NumberField";
 
 export function GridFields({ value, onChange }: { value: SweepGrid; onChange(v: SweepGrid): void }) {
   return (

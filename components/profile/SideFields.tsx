@@ -7,7 +7,7 @@
 import { useId, useState } from "react";
 import { InputError } from "@/lib/errors";
 import { parseProfileCsv } from "@/lib/profiles/parseProfileCsv";
-import { NumberField } from "./NumberField";
+import { NumberField } from "../NumberField";
 import type { SideState } from "./sideRequest";
 import type { MechanismOption, ProfileOption } from "./types";
 

@@ -1,7 +1,7 @@
 /** Family shares of the Ox loss against altitude with their 5–95 % Monte Carlo bands (profileBandSeries), in the profile charts' frame. */
 import { ChartAxes } from "@/components/profile/ChartAxes";
+import { profileBandSeries } from "@/lib/profiles/series/profileBandSeries";
 import type { ProfileBand } from "@/lib/uncertainty/bandSeries";
-import { profileBandSeries } from "@/lib/uncertainty/profileBandSeries";
 
 export function ProfileShareBandsChart({ bands, title }: { bands: ProfileBand[]; title: string }) {
   const s = profileBandSeries(bands);

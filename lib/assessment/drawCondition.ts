@@ -5,7 +5,7 @@
  * the same condition and the printed values are round numbers.
  */
 import type { ConditionInput } from "../engine/types";
-import { mulberry32 } from "./mulberry32";
+import { mulberry32 } from "../random";
 import { roundToSignificant } from "./significant";
 import type { ConditionRanges, Range } from "./types";
 

@@ -15,6 +15,7 @@
  */
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { InputError } from "../errors";
+import { variantSeed } from "../random";
 import { DEFAULTS as DRAW_DEFAULTS, drawCondition, SCALAR_FIELDS } from "./drawCondition";
 import { formatAnswer } from "./formatKey";
 import { sheetConditions } from "./sheetConditions";
@@ -30,7 +31,6 @@ import type {
   StudentSheet,
   Variant,
 } from "./types";
-import { variantSeed } from "./variantSeed";
 
 export const DEFAULTS = {
   /** draws per variant before generation gives up */

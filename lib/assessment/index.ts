@@ -1,3 +1,4 @@
+export { fmix32, mulberry32, variantSeed } from "../random";
 export { readCsv, writeCsv } from "./csv";
 export { DEFAULTS as DRAW_DEFAULTS, drawCondition, SCALAR_FIELDS } from "./drawCondition";
 export { answerTemplateCsv, keyCsv, keyJson, marksCsv } from "./exports";
@@ -6,7 +7,6 @@ export type { GeneratedAssessment, GenerateOptions, VariantAnalyses } from "./ge
 export { DEFAULTS as GENERATE_DEFAULTS, distinctStarts, generateAssessment, questionInfo } from "./generateAssessment";
 export { markAnswer, withinTolerance } from "./markAnswer";
 export { LIMITS as MARKING_LIMITS, markClass } from "./markClass";
-export { mulberry32 } from "./mulberry32";
 export { normaliseName, parseNumberAnswer } from "./parseAnswer";
 export { formatMixingRatio, sheetConditions } from "./sheetConditions";
 export { formatSignificant, roundToSignificant } from "./significant";
@@ -15,4 +15,3 @@ export { assessmentSpecSchema, checkAgainstMechanism, LIMITS as SPEC_LIMITS, par
 export { studentView } from "./studentView";
 export { QUESTION_TEMPLATES, templateOf } from "./templates";
 export type * from "./types";
-export { fmix32, variantSeed } from "./variantSeed";

@@ -24,26 +24,38 @@ export function markClass(
   key: KeyEntry[],
   assessment: { variants: number; questions: number },
 ): ClassMarks {
-  const rows = readCsv(csvText);
+  const all = readCsv(csvText);
+  // leading `# key: value` lines (the answer template's provenance block) are skipped; row numbers stay the file's
+  let skip = 0;
+  while (skip < all.length && (all[skip][0] ?? "").trimStart().startsWith("#")) skip++;
+  const rows = all.slice(skip);
   if (rows.length === 0)
-    throw new InputError("row 1", "the file is empty: expected a header row student,variant,q1,…", "invalid-csv");
+    throw new InputError(
+      `row ${skip + 1}`,
+      "the file is empty: expected a header row student,variant,q1,…",
+      "invalid-csv",
+    );
   const header = rows[0].map((h) => h.trim().toLowerCase());
   const col = new Map<string, number>();
   header.forEach((h, i) => {
     const name = h || `(column ${i + 1})`;
     if (h !== "student" && h !== "variant" && !/^q[1-9]\d*$/.test(h))
-      throw bad(1, name, `unknown column "${rows[0][i]}"; expected student, variant and q1–q${assessment.questions}`);
-    if (col.has(h)) throw bad(1, name, `the column ${h} appears twice`);
+      throw bad(
+        skip + 1,
+        name,
+        `unknown column "${rows[0][i]}"; expected student, variant and q1–q${assessment.questions}`,
+      );
+    if (col.has(h)) throw bad(skip + 1, name, `the column ${h} appears twice`);
     const q = h.startsWith("q") ? Number(h.slice(1)) : 0;
     if (q > assessment.questions)
-      throw bad(1, name, `there is no question ${q}; this assessment has ${assessment.questions}`);
+      throw bad(skip + 1, name, `there is no question ${q}; this assessment has ${assessment.questions}`);
     col.set(h, i);
   });
   for (const required of ["student", "variant", ...Array.from({ length: assessment.questions }, (_, i) => `q${i + 1}`)])
-    if (!col.has(required)) throw bad(1, required, `the column ${required} is missing`);
+    if (!col.has(required)) throw bad(skip + 1, required, `the column ${required} is missing`);
   if (rows.length - 1 > LIMITS.maxStudents)
     throw new InputError(
-      `row ${LIMITS.maxStudents + 2}`,
+      `row ${skip + LIMITS.maxStudents + 2}`,
       `at most ${LIMITS.maxStudents} students per file`,
       "invalid-csv",
     );
@@ -53,7 +65,7 @@ export function markClass(
   const seen = new Map<string, number>();
   const students: StudentMarks[] = [];
   rows.slice(1).forEach((cells, i) => {
-    const row = i + 2;
+    const row = skip + i + 2;
     if (cells.every((c) => c.trim() === "")) return;
     if (cells.length > header.length)
       throw bad(row, `${cells.length}`, `this row has ${cells.length} cells but the header has ${header.length}`);

@@ -1,2 +1,3 @@
+export { type CsvCommentEntry, csvCommentBlock, withoutCsvComments } from "./csvCommentBlock";
 export { readCsv } from "./readCsv";
 export { csvCell, csvRow, csvTable } from "./writeCsv";

@@ -10,10 +10,12 @@ import { randomBytes } from "node:crypto";
 import { z } from "zod";
 import {
   type AssessmentSpec,
+  answerTemplateCsv,
   type ClassMarks,
   checkAgainstMechanism,
   generateAssessment,
   type InstructorAssessment,
+  keyCsv,
   markClass,
   marksCsv,
   parseAssessmentSpec,
@@ -27,6 +29,7 @@ import { conditionSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { type CsvExportOptions, type CsvProvenance, csvExport, csvMechanism } from "./csvProvenance";
 import { notFound } from "./http";
 import { mechanismDetail, mechanismSource } from "./mechanisms";
 
@@ -179,8 +182,61 @@ export async function getStudentAssessment(id: string): Promise<StudentAssessmen
   return r.body as StudentAssessment;
 }
 
-export async function markAssessment(id: string, csvText: string): Promise<ClassMarks & { csv: string }> {
+/** The provenance block's fields of an assessment's CSV files (the conditions differ by variant). */
+async function assessmentProvenance(a: InstructorAssessment, table: string, permalink: string): Promise<CsvProvenance> {
+  return {
+    table,
+    mechanisms: [await csvMechanism(a.mechanism)],
+    condition: [
+      ["assessment", a.title],
+      ["condition", "one per variant: see the variant sheets (and key.json for the instructor)"],
+      ["variants", a.variants.length],
+    ],
+    engineVersion: a.engineVersion,
+    computedAt: a.createdAt,
+    permalink,
+  };
+}
+
+/** Marks the class's answers (the CSV may start with `#` lines); `csv` is the marks file with its provenance block. */
+export async function markAssessment(
+  id: string,
+  csvText: string,
+  o: CsvExportOptions,
+): Promise<ClassMarks & { csv: string }> {
   const a = await getInstructorAssessment(id);
   const marks = markClass(csvText, a.key, { variants: a.variants.length, questions: a.questions.length });
-  return { ...marks, csv: marksCsv(marks, a.questions.length) };
+  const p = await assessmentProvenance(
+    a,
+    "marks.csv: each student's marks, answers and their status",
+    instructorPath(id),
+  );
+  return { ...marks, csv: csvExport(marksCsv(marks, a.questions.length), p, o) };
+}
+
+/** key.csv (instructor) or answers-template.csv (to fill in and upload for marking) with its provenance block; null for another file. */
+export async function assessmentCsvExport(
+  id: string,
+  file: string,
+  o: CsvExportOptions,
+): Promise<{ csv: string; filename: string } | null> {
+  if (file !== "key.csv" && file !== "answers-template.csv") return null;
+  const a = await getInstructorAssessment(id);
+  if (file === "key.csv") {
+    const p = await assessmentProvenance(
+      a,
+      "key.csv: the computed answer of every question of every variant",
+      instructorPath(id),
+    );
+    return { csv: csvExport(keyCsv(a), p, o), filename: `assessment-${id}-key.csv` };
+  }
+  const p = await assessmentProvenance(
+    a,
+    "answers-template.csv: one row per student to fill in (student, variant, q1, …) and upload for marking; the # lines may stay",
+    studentPath(a.studentId),
+  );
+  return {
+    csv: csvExport(answerTemplateCsv(a.questions.length, a.variants.length), p, o),
+    filename: `assessment-${id}-answers.csv`,
+  };
 }

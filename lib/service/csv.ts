@@ -1,7 +1,11 @@
-/** CSV exports of an analysis, with units in the headers (RFC 4180 quoting). */
-import { csvTable as toCsv } from "../csv";
+/**
+ * The CSV tables of an analysis, with units in the headers (RFC 4180
+ * quoting); lib/service/analysisExports.ts sends them after their
+ * provenance block.
+ */
+import { type CsvCommentEntry, csvTable as toCsv } from "../csv";
 import type { AnalysisResult } from "../engine/types";
-import { monteCarloCsv, sensitivityCsv } from "../uncertainty";
+import { monteCarloCsv, monteCarloNotes, sensitivityCsv, sensitivityNotes } from "../uncertainty";
 
 export { toCsv };
 
@@ -83,14 +87,26 @@ export function cyclesCsv(r: AnalysisResult): string {
   );
 }
 
-/** Monte Carlo medians and 5–95 % ranges (lib/uncertainty); a comment line only when the analysis has none. */
+/** Monte Carlo medians and 5–95 % ranges (lib/uncertainty); "" when the analysis has none (see uncertaintyNotes). */
 export function uncertaintyCsv(r: AnalysisResult): string {
   const mc = r.uncertainty?.monteCarlo;
-  return mc ? monteCarloCsv(mc) : "# no Monte Carlo ranges: request options.uncertaintySamples > 0\n";
+  return mc ? monteCarloCsv(mc) : "";
 }
 
-/** Sensitivity coefficients in long form (lib/uncertainty); a comment line only when the analysis has none. */
+/** What uncertaintyCsv was computed with, or why it is empty, for the provenance block. */
+export function uncertaintyNotes(r: AnalysisResult): CsvCommentEntry[] {
+  const mc = r.uncertainty?.monteCarlo;
+  return mc ? monteCarloNotes(mc) : [["note", "no Monte Carlo ranges: request options.uncertaintySamples > 0"]];
+}
+
+/** Sensitivity coefficients in long form (lib/uncertainty); "" when the analysis has none (see sensitivitiesNotes). */
 export function sensitivitiesCsv(r: AnalysisResult): string {
   const s = r.uncertainty?.sensitivity;
-  return s ? sensitivityCsv(s) : "# no sensitivities: request options.sensitivity = true\n";
+  return s ? sensitivityCsv(s) : "";
+}
+
+/** The method behind sensitivitiesCsv, or why it is empty, for the provenance block. */
+export function sensitivitiesNotes(r: AnalysisResult): CsvCommentEntry[] {
+  const s = r.uncertainty?.sensitivity;
+  return s ? sensitivityNotes(s) : [["note", "no sensitivities: request options.sensitivity = true"]];
 }

@@ -37,10 +37,19 @@ const errors = (...codes: number[]) =>
     ]),
   );
 
+/** Every CSV export starts with `# key: value` provenance lines (docs/csv-exports.md); this drops them. */
+const comments = {
+  name: "comments",
+  in: "query",
+  required: false,
+  schema: { enum: ["none"] },
+  description: "none: the bare table, without the leading # lines of provenance (docs/csv-exports.md)",
+};
+
 const csv = (what: string) => ({
   get: {
     summary: `${what} of a stored analysis as CSV, units in the header`,
-    parameters: [{ $ref: "#/components/parameters/id" }],
+    parameters: [{ $ref: "#/components/parameters/id" }, comments],
     responses: { 200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } }, ...errors(404) },
   },
 });
@@ -57,7 +66,7 @@ const job202 = {
 const profileCsv = (what: string, kind: string) => ({
   get: {
     summary: `${what} of a stored ${kind} as CSV, units in the header`,
-    parameters: [{ $ref: "#/components/parameters/id" }],
+    parameters: [{ $ref: "#/components/parameters/id" }, comments],
     responses: { 200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } }, ...errors(404) },
   },
 });
@@ -394,7 +403,7 @@ export const openApiDocument = {
     "/api/assessments/{id}/key.csv": {
       get: {
         summary: "The answer key as CSV: variant, seed, question, answer, unit, tolerance",
-        parameters: [{ $ref: "#/components/parameters/id" }],
+        parameters: [{ $ref: "#/components/parameters/id" }, comments],
         responses: {
           200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } },
           ...errors(404),
@@ -411,7 +420,7 @@ export const openApiDocument = {
     "/api/assessments/{id}/answers-template.csv": {
       get: {
         summary: "A blank answer file for the class: student, variant, q1 … qN",
-        parameters: [{ $ref: "#/components/parameters/id" }],
+        parameters: [{ $ref: "#/components/parameters/id" }, comments],
         responses: {
           200: { description: "CSV", content: { "text/csv": { schema: { type: "string" } } } },
           ...errors(404),
@@ -425,6 +434,7 @@ export const openApiDocument = {
         parameters: [
           { $ref: "#/components/parameters/id" },
           { name: "format", in: "query", required: false, schema: { enum: ["json", "csv"], default: "json" } },
+          comments,
         ],
         requestBody: { required: true, content: { "text/csv": { schema: { type: "string" } } } },
         responses: {

@@ -8,6 +8,7 @@
 import "server-only";
 import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
 import type { DemoProfile } from "../atmosphere/types";
+import type { CsvCommentEntry } from "../csv";
 import { compileSource, type MechanismSource } from "../engine/mechanism-source";
 import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { resolveCondition } from "../engine/resolve-condition";
@@ -24,6 +25,7 @@ import type { LevelBatchResult } from "../profiles/runLevelBatch";
 import { runSweep, type SweepExecutor, type SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { notFound } from "./http";
 import { listMechanisms, mechanismSource } from "./mechanisms";
 
@@ -301,22 +303,96 @@ export function profileCatalogue() {
 }
 
 const PROFILE_EXPORTS = {
-  "levels.csv": (b: ProfileRecordBody) => sweepLevelsCsv(b.result),
-  "cycles.csv": (b: ProfileRecordBody) => sweepCyclesCsv(b.result),
-  "profile.csv": (b: ProfileRecordBody) => profileToCsv(b.profile),
+  "levels.csv": [
+    (b: ProfileRecordBody) => sweepLevelsCsv(b.result),
+    "levels.csv: every level of a stored profile sweep with its condition, Ox budget and family shares",
+  ],
+  "cycles.csv": [
+    (b: ProfileRecordBody) => sweepCyclesCsv(b.result),
+    "cycles.csv: the catalytic cycles at every level of a stored profile sweep",
+  ],
+  "profile.csv": [
+    (b: ProfileRecordBody) => profileToCsv(b.profile),
+    "profile.csv: the profile the sweep used, in the upload format (docs/profile-format.md)",
+  ],
 } as const;
 
-/** A CSV export of a stored sweep: levels.csv, cycles.csv or profile.csv; null for an unknown file. */
-export async function profileExport(id: string, file: string): Promise<{ csv: string; filename: string } | null> {
-  const make = PROFILE_EXPORTS[file as keyof typeof PROFILE_EXPORTS];
-  if (!make) return null;
-  return { csv: make((await getProfileRecord(id)).body), filename: `profile-${id}-${file}` };
+/** The settings every level of a sweep shares (the per-level condition is in the table). */
+function sweepCondition(r: SweepResult, request: SweepRequest): CsvCommentEntry[] {
+  const { profile: _profile, mechanismId: _mechanism, ...settings } = request;
+  return [
+    [
+      "profile",
+      `${r.profile.title} (${r.profile.source}${r.profile.demo ? "; invented demo data, not a measurement" : ""})`,
+    ],
+    ["condition", `per level in the table; mode=${r.mode}; ozone=${r.ozone}; o3-column=${r.columnSource}`],
+    ["request", JSON.stringify(settings)],
+  ];
 }
 
-/** The CSV export of a stored comparison; null for an unknown file. */
-export async function comparisonExport(id: string, file: string): Promise<{ csv: string; filename: string } | null> {
+/** A CSV export of a stored sweep (levels.csv, cycles.csv, profile.csv) after its provenance block; null for an unknown file. */
+export async function profileExport(
+  id: string,
+  file: string,
+  o: CsvExportOptions,
+): Promise<{ csv: string; filename: string } | null> {
+  if (!Object.hasOwn(PROFILE_EXPORTS, file)) return null;
+  const entry = PROFILE_EXPORTS[file as keyof typeof PROFILE_EXPORTS];
+  const [make, table] = entry;
+  const record = await getProfileRecord(id);
+  const r = record.body.result;
+  const csv = csvExport(
+    make(record.body),
+    {
+      table,
+      mechanisms: [await csvMechanism(r.mechanism)],
+      condition: sweepCondition(r, record.body.request),
+      engineVersion: r.engineVersion,
+      computedAt: record.createdAt,
+      permalink: profilePath(id),
+      record: `/api/profiles/${id}`,
+    },
+    o,
+  );
+  return { csv, filename: `profile-${id}-${file}` };
+}
+
+/** The CSV export of a stored comparison after its provenance block; null for an unknown file. */
+export async function comparisonExport(
+  id: string,
+  file: string,
+  o: CsvExportOptions,
+): Promise<{ csv: string; filename: string } | null> {
   if (file !== "comparison.csv") return null;
-  return { csv: comparisonCsv((await getComparisonRecord(id)).body.result), filename: `comparison-${id}.csv` };
+  const record = await getComparisonRecord(id);
+  const r = record.body.result;
+  const side = (k: "a" | "b"): CsvCommentEntry[] => [
+    [`${k}-label`, r.labels[k]],
+    [`${k}-sweep`, `${o.origin}${profilePath(r[k].sweepId)}`],
+    [
+      `${k}-profile`,
+      `${r[k].profile.title} (${r[k].profile.source}${r[k].profile.demo ? "; invented demo data" : ""})`,
+    ],
+    [`${k}-mode`, r[k].mode],
+  ];
+  const csv = csvExport(
+    comparisonCsv(r),
+    {
+      table:
+        "comparison.csv: Ox loss of two profile sweeps A and B against altitude, the difference B − A and the cycles that explain it",
+      mechanisms: [
+        { ...(await csvMechanism(r.a.mechanism)), side: "a" },
+        { ...(await csvMechanism(r.b.mechanism)), side: "b" },
+      ],
+      condition: [["condition", "per level and side: see the two sweeps"], ...side("a"), ...side("b")],
+      engineVersion: r.engineVersion,
+      computedAt: record.createdAt,
+      permalink: comparisonPath(id),
+      record: `/api/comparisons/${id}`,
+    },
+    o,
+  );
+  return { csv, filename: `comparison-${id}.csv` };
 }
 
 /** What the profile forms offer: mechanisms (id, title) and the built-in profiles (without their levels). */

@@ -9,8 +9,9 @@
  * stored as a record of kind "uncertainty-profile" with the family-share
  * bands against altitude.
  *
- * These jobs have their own embedded back end; lib/service/jobs.ts does not
- * know the kind (see docs/uncertainty.md, "Routes").
+ * The handler here is registered in lib/service/jobs.ts; submitting, reading
+ * and cancelling go through lib/service/uncertaintyJobs.ts (see
+ * docs/uncertainty.md, "Routes").
  */
 import { solveConditionsOf } from "../engine/resolve-condition";
 import "server-only";
@@ -20,7 +21,7 @@ import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { analysisRequestSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
-import type { JobBackend, JobContext, JobStatus } from "../jobs/types";
+import type { JobContext } from "../jobs/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import {
   finishMonteCarlo,
@@ -32,7 +33,6 @@ import {
   type SensitivityReport,
 } from "../uncertainty";
 import { notFound } from "./http";
-import { jobBackend } from "./jobs";
 import { mechanismSource } from "./mechanisms";
 import { getProfileRecord } from "./profiles";
 
@@ -282,44 +282,12 @@ export async function uncertaintyJob(input: UncertaintyJobInput, ctx: JobContext
   return "analysis" in input ? analysisJob(input.analysis as AnalysisRequest, ctx) : profileJob(input, ctx);
 }
 
-// The shared back end (embedded, or BullMQ when REDIS_URL is set), so /api/jobs/{id} covers these jobs too.
-const backend = (): JobBackend => jobBackend();
-
-export interface UncertaintyJobView extends JobStatus {
-  statusUrl: string;
-  /** the stored result as JSON, when done */
-  resultApiUrl?: string;
-}
-
-function view(s: JobStatus): UncertaintyJobView {
-  const v: UncertaintyJobView = { ...s, statusUrl: `/api/uncertainty/jobs/${s.id}` };
-  if (s.state === "done" && s.resultId)
-    v.resultApiUrl =
-      s.resultKind === "analysis" ? `/api/analyses/${s.resultId}` : `/api/uncertainty/profiles/${s.resultId}`;
-  return v;
-}
-
-/** Validates and queues; throws InputError (400) before anything is queued. */
-export async function startUncertaintyJob(body: unknown): Promise<UncertaintyJobView> {
+/** Validates a job's input; throws InputError (400) before anything is queued. */
+export async function validateUncertaintyJob(body: unknown): Promise<UncertaintyJobInput> {
   const input = parseWith(jobSchema, body) as UncertaintyJobInput;
   if ("analysis" in input) await mechanismSource(input.analysis.mechanismId);
   else await getProfileRecord(input.profileId, "profileId");
-  return view(await backend().submit("uncertainty", input));
-}
-
-const JOB_ID = /^[A-Za-z0-9_-]{16}$/;
-
-export async function getUncertaintyJob(id: string): Promise<UncertaintyJobView> {
-  const s = JOB_ID.test(id) ? await backend().status(id) : null;
-  if (!s) throw notFound("uncertainty job", id);
-  return view(s);
-}
-
-/** Cancels a queued or running uncertainty job (no record is stored); a finished job is returned unchanged. */
-export async function cancelUncertaintyJob(id: string): Promise<UncertaintyJobView> {
-  const s = JOB_ID.test(id) ? await backend().cancel(id) : null;
-  if (!s) throw notFound("uncertainty job", id);
-  return view(s);
+  return input;
 }
 
 export async function getUncertaintyProfile(

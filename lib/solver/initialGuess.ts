@@ -1,6 +1,6 @@
 /**
- * Starting values for the steady-state iteration and the choice of the
- * balance equation each pool total replaces.
+ * Starting values for the steady-state iteration (the choice of the balance
+ * equation each pool total replaces is in chooseReplaced.ts).
  *
  * Cold start: pool members share their pool's total equally, other species
  * start at 1e-12·[M]; a few damped Jacobi sweeps of the local balance
@@ -104,57 +104,4 @@ export function toLog(x: Float64Array, u: Float64Array): void {
     const v = Math.log(Math.max(x[i], 1e-300));
     u[i] = Math.min(NEWTON_DEFAULTS.uMax, Math.max(NEWTON_DEFAULTS.uMin, v));
   }
-}
-
-/**
- * For each pool total, the member with the largest weighted amount (the
- * dominant reservoir) gives up its balance equation; greedily distinct across
- * pools, in mechanism order. Ties go to the longest-lived member (smallest
- * loss frequency `lossFrequency[i]`). With `hysteresis` > 1 a current choice is
- * kept unless another member is larger by that factor. Returns true when any
- * choice changed.
- */
-export function chooseReplaced(
-  sys: ChemSystem,
-  x: Float64Array,
-  lossFrequency?: Float64Array,
-  hysteresis = 1,
-): boolean {
-  const taken = new Set<number>();
-  let changed = false;
-  for (const c of sys.constraints) {
-    if (hysteresis > 1 && c.replaced >= 0 && !taken.has(c.replaced)) {
-      // keep the current choice unless another member exceeds it by the factor `hysteresis`
-      let current = 0;
-      let largest = 0;
-      for (let q = 0; q < c.members.length; q++) {
-        const a = c.weights[q] * x[c.members[q]];
-        if (c.members[q] === c.replaced) current = a;
-        if (!taken.has(c.members[q])) largest = Math.max(largest, a);
-      }
-      if (current * hysteresis >= largest) {
-        taken.add(c.replaced);
-        continue;
-      }
-    }
-    let best = -1;
-    let bestAmount = -1;
-    for (let q = 0; q < c.members.length; q++) {
-      const m = c.members[q];
-      if (taken.has(m)) continue;
-      const amount = c.weights[q] * x[m];
-      const better =
-        amount > bestAmount * (1 + 1e-9) ||
-        (amount >= bestAmount * (1 - 1e-9) && lossFrequency !== undefined && lossFrequency[m] < lossFrequency[best]);
-      if (best < 0 || better) {
-        best = m;
-        bestAmount = amount;
-      }
-    }
-    if (best < 0) best = c.members[0];
-    taken.add(best);
-    if (c.replaced !== best) changed = true;
-    c.replaced = best;
-  }
-  return changed;
 }

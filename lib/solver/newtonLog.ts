@@ -14,8 +14,8 @@
  * Units: x in molecules cm⁻³, Δτ in s.
  */
 import type { ChemSystem } from "./buildSystem";
+import { chooseReplaced } from "./chooseReplaced";
 import { luFactor, luSolve } from "./denseLu";
-import { chooseReplaced } from "./initialGuess";
 import { jacobianLog, productionLoss, reactionRates } from "./massAction";
 
 export const NEWTON_DEFAULTS = {

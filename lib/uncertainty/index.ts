@@ -5,7 +5,6 @@ export { defineOutputs, OUTPUT_DEFAULTS, type OutputOptions } from "./defineOutp
 export { evaluateOutputs } from "./evaluateOutputs";
 export { finishMonteCarlo, MONTE_CARLO_DEFAULTS, type MonteCarloPlan, monteCarlo, planMonteCarlo } from "./monteCarlo";
 export { normalDraws } from "./normalDraws";
-export { type ProfileBandSeries, profileBandSeries } from "./profileBandSeries";
 export { quantile } from "./quantile";
 export { RANK_DEFAULTS, type RankOptions, rankAgainstAltitude, rankSensitivities } from "./rankSensitivities";
 export { runSampleBatch, type SampleBatch } from "./runSampleBatch";
@@ -13,4 +12,4 @@ export { logFactors, SAMPLE_DEFAULTS, type SampleOptions, sampleMultipliers } fr
 export { SENSITIVITY_DEFAULTS, type SensitivityOptions, sensitivities, sensitivityParameters } from "./sensitivities";
 export { SUMMARY_DEFAULTS, summariseSamples } from "./summariseSamples";
 export type * from "./types";
-export { monteCarloCsv, sensitivityCsv } from "./uncertaintyCsv";
+export { monteCarloCsv, monteCarloNotes, sensitivityCsv, sensitivityNotes } from "./uncertaintyCsv";

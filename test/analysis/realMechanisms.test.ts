@@ -36,7 +36,7 @@ describe("oxygen + chlorine set in the upper stratosphere", () => {
     expect(clox!.chainLength!).toBeGreaterThanOrEqual(100);
   });
 
-  it("also reports the operational chain length k[ClO][O] / (ClOx loss to reservoirs) (reference-data E.2, Lary 1997), not below the pathway one", () => {
+  it("also reports the operational chain length k[ClO][O] / (ClOx loss to reservoirs) (Lary 1997; docs/references.md, Loss partitioning and chain length), not below the pathway one", () => {
     const slowest = clox!.steps.find((s) => s.reactionId === clox!.rateLimitingStep)!;
     const lossClOx = r.carrierFamilies.find((f) => f.family === "ClOx")!.lossToReservoirs_cm3s;
     expect(clox!.chainCarrier).toBe("ClOx");
@@ -96,7 +96,7 @@ describe("reference mechanism, 20–60 km", () => {
     }
   });
 
-  it("has the ClOx share peak near 40 km, at 10–40 % there (reference-data E.1, from memory: 25–35 % with 1990s chlorine)", () => {
+  it("has the ClOx share peak near 40 km, at 10–40 % there (from memory: 25–35 % with 1990s chlorine; docs/references.md, Loss partitioning and chain length)", () => {
     const clox = levels.map((z) => [z, familyShare(reports.get(z)!, "ClOx")] as const);
     const peak = clox.reduce((a, b) => (b[1] > a[1] ? b : a));
     expect(peak[0]).toBeGreaterThanOrEqual(35);

@@ -53,6 +53,15 @@ describe("markClass", () => {
     expect(m.warnings).toEqual(['row 5, column q2: "eighty" is not a number; no mark given']);
   });
 
+  test("skips the # lines a downloaded answer template starts with, and still names the file's own rows", () => {
+    const withBlock = `# table: answers-template.csv: invented\r\n# caution: research and teaching tool\r\n${answers}`;
+    const m = markClass(withBlock, key, shape);
+    expect(m.students.map((s) => s.total)).toEqual([4, 1, 2, 2]);
+    // "eighty" is on line 7 of the file: two # lines, the header, then Ada, Ben, Cy, Dee
+    expect(m.warnings).toEqual(['row 7, column q2: "eighty" is not a number; no mark given']);
+    expect(() => markClass("# only a comment\nstudent,variant,q1,q2\n", key, shape)).toThrow(/row 2, column q3/);
+  });
+
   test("accepts the columns in any order and in any case", () => {
     const m = markClass("Q3,Variant,q2,STUDENT,q1\n-5,1,160,Ada,ClOx\n", key, shape);
     expect(m.students[0].total).toBe(4);

@@ -41,7 +41,7 @@ describe("climatologyAt", () => {
   });
 
   it("puts the default ozone column near 300 DU", () => {
-    // "300 DU is a typical global average" (CRC Handbook, "Dobson unit"); reference-data.md §D [C]
+    // "300 DU is a typical global average" (CRC Handbook, "Dobson unit"; docs/references.md, Constants and composition)
     const du = ozoneColumnAbove_cm2(0) / DOBSON_UNIT_cm2;
     expect(du).toBeGreaterThan(270);
     expect(du).toBeLessThan(340);
@@ -49,7 +49,7 @@ describe("climatologyAt", () => {
 
   it("peaks the ozone number density at 20–25 km and the mixing ratio higher, near 30–36 km", () => {
     // Encyclopaedia Britannica, "ozone layer" (number-density peak 20–25 km at mid-latitudes) [C];
-    // mixing-ratio peak higher, ~8 ppmv (ODU SEES notes; reference-data.md §D, numbers from memory)
+    // mixing-ratio peak higher, ~8 ppmv near 30–35 km (from memory; docs/references.md, Constants and composition)
     let zn = 0;
     let zx = 0;
     for (let z = 10; z <= 50; z += 0.25) {
@@ -71,7 +71,7 @@ describe("climatologyAt", () => {
   });
 
   it("roughly conserves 2·CH4 + H2O at 7–8.5 ppmv through the stratosphere", () => {
-    // reference-data.md §D (from memory): 2·CH4 + H2O ≈ 7–7.5 ppmv roughly conserved
+    // from memory (docs/references.md, Constants and composition): 2·CH4 + H2O ≈ 7–7.5 ppmv roughly conserved
     for (const z of [20, 25, 30, 35, 40, 45, 50]) {
       const c = climatologyAt(z);
       const sum = 2 * c.CH4 + c.H2O;
@@ -81,7 +81,7 @@ describe("climatologyAt", () => {
   });
 
   it("keeps NOy at its 15–20 ppbv peak between 30 and 40 km", () => {
-    // reference-data.md §D (from memory)
+    // ~15–20 ppbv near 30–40 km at mid-latitudes, from memory (docs/references.md, Constants and composition)
     for (const z of [30, 35, 40]) {
       expect(climatologyAt(z).NOy).toBeGreaterThanOrEqual(15e-9);
       expect(climatologyAt(z).NOy).toBeLessThanOrEqual(20e-9);

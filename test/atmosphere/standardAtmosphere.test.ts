@@ -10,7 +10,7 @@ import { InputError } from "../../lib/errors";
 import { expectClose } from "../helpers/close";
 
 // U.S. Standard Atmosphere, 1976 (NOAA-S/T 76-1562), Table I at geometric
-// altitude, as collected in /work/shared/reference-data.md §A.3 [C2]:
+// altitude, as in docs/references.md, Standard atmosphere (recomputed):
 // Z (km), H (km'), T (K), p (Pa), rho (kg m-3).
 const TABLE_I: ReadonlyArray<[number, number, number, number, number]> = [
   [0, 0.0, 288.15, 1.01325e5, 1.225],
@@ -24,7 +24,7 @@ const TABLE_I: ReadonlyArray<[number, number, number, number, number]> = [
   [80, 79.0057, 198.639, 1.0525, 1.8458e-5],
 ];
 
-// Layer bases (geopotential km', T_M K, p Pa), same standard, reference-data.md §A.2 [C2].
+// Layer bases (geopotential km', T_M K, p Pa), same standard, docs/references.md, Standard atmosphere (recomputed).
 const LAYER_BASES: ReadonlyArray<[number, number, number]> = [
   [11, 216.65, 22632.1],
   [20, 216.65, 5474.89],
@@ -55,14 +55,14 @@ describe("standardAtmosphere", () => {
   });
 
   it("gives the standard's 86 km top: kinetic T 186.87 K and p 0.37338 Pa", () => {
-    // U.S. Standard Atmosphere 1976, reference-data.md §A.2 top row [C2]
+    // U.S. Standard Atmosphere 1976, layer table, top row (docs/references.md, Standard atmosphere; recomputed)
     const s = standardAtmosphere(86);
     expectClose(s.T_K, 186.87, { abs: 0.01 }, "kinetic temperature");
     expectClose(s.p_Pa, 0.37338, { rel: 1e-3 }, "pressure");
   });
 
   it("gives [M] = p/(k_B·T) with the exact SI Boltzmann constant, 2.547e19 cm⁻³ at sea level", () => {
-    // n at 0 km from reference-data.md §A.3 (k = 1.380649e-23, SI Brochure 2019)
+    // n at 0 km from docs/references.md, Standard atmosphere (k = 1.380649e-23, SI Brochure 2019)
     const s = standardAtmosphere(0);
     expect(BOLTZMANN_J_K).toBe(1.380649e-23);
     expectClose(s.M_cm3, 2.547e19, { rel: 1e-3 }, "[M] at sea level");
@@ -83,7 +83,7 @@ describe("standardAtmosphere", () => {
     for (const z of [0, 11.019, 47.35, 86]) {
       expectClose(geopotentialToGeometric_km(geometricToGeopotential_km(z)), z, { abs: 1e-10 });
     }
-    // H = r0 Z/(r0 + Z), r0 = 6356.766 km: 86 km → 84.852 km' (reference-data.md §A.2)
+    // H = r0 Z/(r0 + Z), r0 = 6356.766 km: 86 km → 84.852 km' (docs/references.md, Standard atmosphere)
     expectClose(geometricToGeopotential_km(86), 84.852, { abs: 1e-3 });
   });
 

@@ -76,6 +76,10 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
   await student.goto(`${studentHref}?v=1`);
   await student.screenshot({ path: `${SHOTS}/assess-student-print.png`, fullPage: true });
   await student.goto(studentHref as string);
+  // every printed sheet carries the research-and-teaching caution
+  await expect(student.getByTestId("sheet-caution")).toHaveCount(10);
+  await expect(student.getByTestId("sheet-caution").first()).toBeVisible();
+  await expect(student.getByTestId("sheet-caution").first()).toContainText("not for regulatory reporting");
   const pdf = await student.pdf({ path: `${SHOTS}/assess-student.pdf`, format: "A4", printBackground: true });
   const pages = (pdf.toString("latin1").match(/\/Type\s*\/Page[^s]/g) ?? []).length;
   expect(pages).toBe(10);
@@ -97,5 +101,7 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
   await page.emulateMedia({ media: "print" });
   await expect(page.getByRole("heading", { name: "Mark the class" })).toBeHidden();
   await expect(page.getByRole("table", { name: "Answer key" })).toBeVisible();
+  await expect(page.getByTestId("key-caution")).toBeVisible();
+  await expect(page.getByTestId("key-caution")).toContainText("not for regulatory reporting");
   await page.screenshot({ path: `${SHOTS}/assess-key-print.png`, fullPage: true });
 });

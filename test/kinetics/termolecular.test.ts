@@ -10,7 +10,7 @@ describe("termolecular (JPL 19-5 falloff form)", () => {
     // k = 5.1671e-13/1.019109 × 0.6^0.25290 = 5.0702e-13 × 0.87881 = 4.4558e-13.
     const k = termolecular({ k0_300: 1.8e-31, n: 3.4, kinf_300: 1.5e-11, m: 1.9 }, 220, 1e18);
     expectClose(k, 4.4558e-13, { rel: 2e-4 });
-    // reference-data.md section B.2 gives the same computed value, 4.46e-13
+    // docs/references.md, Kinetics, gives the same computed value, 4.46e-13
     expectClose(k, 4.46e-13, { rel: 0.002 });
   });
 
@@ -45,7 +45,7 @@ describe("termolecular (JPL 19-5 falloff form)", () => {
 
   it("returns the low-pressure limit k0(T)[M] when k∞ is omitted (O + O2 + M)", () => {
     // JPL 19-5 (from memory): 6.0e-34 (T/300)^-2.4; by hand at 220 K: 6.0e-34 × 2.10512 = 1.2631e-33
-    // (reference-data.md section B.2: k0(220) = 1.263e-33)
+    // (docs/references.md, Kinetics: k0(220) = 1.263e-33)
     expectClose(termolecular({ k0_300: 6.0e-34, n: 2.4 }, 220, 1), 1.2631e-33, { rel: 2e-4 });
     expectClose(termolecular({ k0_300: 6.0e-34, n: 2.4 }, 220, 5e17), 1.2631e-33 * 5e17, { rel: 2e-4 });
   });

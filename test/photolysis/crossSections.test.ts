@@ -16,7 +16,7 @@ import { expectClose } from "../helpers/close";
 describe("O3 cross section", () => {
   it("peaks in the Hartley band at about 1.1e-17 cm² near 255 nm", () => {
     // ≈ 1.15e-17 cm² near 255 nm at room temperature: JPL 19-5 §4, Molina & Molina, JGR 91, 14501 (1986),
-    // via reference-data.md §C (from memory)
+    // (docs/references.md, Photolysis; from memory)
     let best = 0;
     let at = 0;
     for (let l = 230; l <= 280; l += 0.1) {
@@ -89,7 +89,7 @@ describe("the parameterized cross sections", () => {
 
 describe("the O2 cross sections", () => {
   it("are zero in every bin above the 242 nm dissociation threshold", () => {
-    // λ < 242 nm (D0(O2) = 5.115 eV → 242.4 nm): reference-data.md §C [C]
+    // λ < 242 nm (D0(O2) = 5.115 eV → 242.4 nm; docs/references.md, Photolysis; recomputed)
     const G = WAVELENGTH_GRID;
     for (let i = 0; i < G.n; i++) {
       if (G.lower_nm[i] >= 242) expect(SPECTRAL_TABLES.fixed.O2[i], `bin ${G.lower_nm[i]} nm`).toBe(0);

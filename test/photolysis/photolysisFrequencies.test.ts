@@ -18,7 +18,7 @@ const at = (z: number, zenith = 30) =>
 /**
  * Typical photolysis frequencies, mid-latitude, moderate sun: Brasseur &
  * Solomon, "Aeronomy of the Middle Atmosphere", 3rd ed. (2005), ch. 4 figures
- * of J against altitude, as collected in reference-data.md §C — from memory,
+ * of J against altitude (docs/references.md, Photolysis) — from memory,
  * order of magnitude. Each [low, high] is that table's range; the check
  * allows a factor of 2 beyond it on either side because the ranges are
  * remembered, not read.
@@ -64,7 +64,7 @@ describe("photolysisFrequencies", () => {
   }
 
   it("gives a J(NO2) nearly independent of altitude in the stratosphere and 3–20 × J(O3) at 30–40 km", () => {
-    // reference-data.md §C reading notes (Brasseur & Solomon 2005, from memory)
+    // docs/references.md, Photolysis, reading notes (Brasseur & Solomon 2005, from memory)
     const j = [20, 30, 40, 50].map((z) => at(z).NO2);
     expect(Math.max(...j) / Math.min(...j)).toBeLessThan(1.2);
     for (const z of [30, 40]) {
@@ -76,7 +76,7 @@ describe("photolysisFrequencies", () => {
   });
 
   it("raises J(O2) by roughly an order of magnitude per 10 km between 20 and 50 km", () => {
-    // reference-data.md §C: ~1e-12–1e-11 at 20 km to ~1e-9 at 50 km (from memory)
+    // Brasseur & Solomon 2005 (docs/references.md, Photolysis): ~1e-12–1e-11 at 20 km to ~1e-9 at 50 km (from memory)
     const j = [20, 30, 40, 50].map((z) => at(z).O2);
     for (let k = 1; k < j.length; k++) {
       expect(j[k] / j[k - 1]).toBeGreaterThan(2);
@@ -85,7 +85,7 @@ describe("photolysisFrequencies", () => {
   });
 
   it("gives J(O2) = 0 when only wavelengths above the 242 nm threshold are lit", () => {
-    // O2 photodissociation threshold λ < 242 nm: reference-data.md §C [C]
+    // O2 photodissociation threshold λ < 242 nm = hc/D0(O2) (docs/references.md, Photolysis; recomputed)
     const input = { altitude_km: 40, zenith_deg: 30, T_K: 250 };
     const J = photolysisFrequencies(input, { wavelengthRange_nm: [242, 750] });
     expect(J.O2).toBe(0);

@@ -158,7 +158,7 @@ describe("profileToCsv", () => {
   it("writes the default profile from the 1976 standard atmosphere", () => {
     const q = parseProfileCsv(profileToCsv(standardProfile()));
     expect(q.levels.length).toBe(87);
-    // U.S. Standard Atmosphere 1976 (reference-data.md A.2): isothermal 216.65 K from 11 to 20 km'; at 20 km
+    // U.S. Standard Atmosphere 1976 (docs/references.md, Standard atmosphere, layers): isothermal 216.65 K from 11 to 20 km'; at 20 km
     // geometric (19.937 km' geopotential) p = 5474.89 Pa · exp(34.1632 K/km' · 0.0627 km' / 216.65 K) = 55.29 hPa
     expectClose(q.levels[20].T_K as number, 216.65, { abs: 0.01 });
     expectClose(q.levels[20].p_hPa as number, 55.293, { rel: 2e-4 });

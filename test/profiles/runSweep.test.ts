@@ -198,7 +198,7 @@ describe("analyseLevel", () => {
     const request = { mechanismId: "oxygen-chlorine", condition: { altitude_km: 25 } };
     const thick = analyseLevel(mech, ref, request);
     const thin = analyseLevel(mech, ref, request, { o3ColumnAbove_cm2: ozoneColumnAbove_cm2(25) / 2 });
-    // less overhead O3 lets more UV below 310 nm through (common practice; reference-data.md photolysis notes)
+    // less overhead O3 lets more UV below 310 nm through (common practice; docs/references.md, Photolysis, reading notes)
     expect(thin.result.condition.J_s.O3_O1D).toBeGreaterThan(thick.result.condition.J_s.O3_O1D);
     expectClose(thin.result.condition.o3ColumnAbove_DU, thick.result.condition.o3ColumnAbove_DU / 2, { rel: 1e-12 });
   });

@@ -34,7 +34,7 @@ describe("chart frame", () => {
     expect(s.zeroX).toBe(100);
     expect(s.x(0)).toBe(100);
     expect(s.x(-1e6)).toBe(0);
-    expect(signedAxis([-1e6, 1e6], 0, 200, "symlog").x(-1e6)).toBe(0);
+    expect(signedAxis([-1e6, 1e6], 0, 200, "signed-log").x(-1e6)).toBe(0);
   });
 
   it("splits a line where a point is missing", () => {

@@ -54,17 +54,17 @@ test.describe("service routes", () => {
     expect(fetched.result.steadyState.numberDensity_cm3).toEqual(result.steadyState.numberDensity_cm3);
     expect(fetched.request.condition.altitude_km).toBe(40);
 
-    const rates = await request.get(`/api/analyses/${id}/rates.csv`);
+    const rates = await request.get(`/api/analyses/${id}/rates.csv?comments=none`);
     expect(rates.headers()["content-type"]).toContain("text/csv");
     const lines = (await rates.text()).trim().split(/\r\n/);
     expect(lines[0]).toContain("rate (molecules cm-3 s-1)");
     expect(lines.length).toBe(result.steadyState.reactions.length + 1);
-    expect((await (await request.get(`/api/analyses/${id}/species.csv`)).text()).split("\r\n")[0]).toContain(
-      "number_density (molecules cm-3)",
-    );
-    expect((await (await request.get(`/api/analyses/${id}/cycles.csv`)).text()).split("\r\n")[0]).toContain(
-      "chain_length",
-    );
+    expect(
+      (await (await request.get(`/api/analyses/${id}/species.csv?comments=none`)).text()).split("\r\n")[0],
+    ).toContain("number_density (molecules cm-3)");
+    expect(
+      (await (await request.get(`/api/analyses/${id}/cycles.csv?comments=none`)).text()).split("\r\n")[0],
+    ).toContain("chain_length");
     const json = await request.get(`/api/analyses/${id}.json`);
     expect(json.headers()["content-disposition"]).toContain("attachment");
     expect((await json.json()).id).toBe(id);

@@ -1,4 +1,5 @@
-import { type APIRequestContext, expect, test } from "@playwright/test";
+import { expect, test } from "@playwright/test";
+import { finish } from "./finishJob";
 
 // Route tests of sweeps, comparisons and jobs against the started production server (no mocks).
 
@@ -7,15 +8,6 @@ const small = {
   profile: { kind: "standard" },
   grid: { from_km: 30, to_km: 40, step_km: 5 },
 };
-
-async function finish(request: APIRequestContext, jobId: string) {
-  for (let i = 0; i < 600; i++) {
-    const s = await (await request.get(`/api/jobs/${jobId}`)).json();
-    if (["done", "failed", "cancelled"].includes(s.state)) return s;
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`job ${jobId} did not finish`);
-}
 
 test.describe("profile routes", () => {
   test("a sweep is queued, reports progress, is stored with a permalink and exports CSV", async ({ request }) => {
@@ -45,14 +37,14 @@ test.describe("profile routes", () => {
       Math.abs(single.result.cycles.budget.loss_cm3s - levels[1].budget.loss_cm3s) / levels[1].budget.loss_cm3s;
     expect(rel).toBeLessThan(1e-6);
 
-    const csv = await request.get(`/api/profiles/${done.resultId}/levels.csv`);
+    const csv = await request.get(`/api/profiles/${done.resultId}/levels.csv?comments=none`);
     expect(csv.headers()["content-type"]).toContain("text/csv");
     const lines = (await csv.text()).trim().split("\r\n");
     expect(lines[0]).toContain("Ox loss (molecules cm-3 s-1)");
     expect(lines.length).toBe(4);
-    expect((await (await request.get(`/api/profiles/${done.resultId}/cycles.csv`)).text()).split("\r\n")[0]).toContain(
-      "chain_length",
-    );
+    expect(
+      (await (await request.get(`/api/profiles/${done.resultId}/cycles.csv?comments=none`)).text()).split("\r\n")[0],
+    ).toContain("chain_length");
     expect(await (await request.get(`/api/profiles/${done.resultId}/profile.csv`)).text()).toContain(
       "altitude (km),T (K),p (hPa)",
     );
@@ -123,7 +115,7 @@ test.describe("profile routes", () => {
       expect(l.difference.loss_cm3s).toBe(0);
       expect(l.difference.explaining).toEqual([]);
     }
-    const csv = await request.get(`/api/comparisons/${done.resultId}/comparison.csv`);
+    const csv = await request.get(`/api/comparisons/${done.resultId}/comparison.csv?comments=none`);
     expect((await csv.text()).split("\r\n")[0]).toContain("B - A Ox loss (molecules cm-3 s-1)");
     expect((await request.get(`/compare/${done.resultId}`)).status()).toBe(200);
   });

@@ -25,7 +25,7 @@ test.describe("uncertainty routes", () => {
     expect(loss.median).toBeLessThanOrEqual(loss.p95);
     expect(result.uncertainty.sensitivity.parameters.length).toBeGreaterThan(10);
 
-    const csv = await request.get(`/api/analyses/${id}/uncertainty.csv`);
+    const csv = await request.get(`/api/analyses/${id}/uncertainty.csv?comments=none`);
     expect(csv.status()).toBe(200);
     expect((await csv.text()).split("\r\n")[0]).toMatch(/median/);
     const sens = await request.get(`/api/analyses/${id}/sensitivities.csv`);

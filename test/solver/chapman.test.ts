@@ -22,7 +22,7 @@ import type { SolveConditions } from "../../lib/solver/types";
 import { expectClose } from "../helpers/close";
 import { chapmanMechanism } from "./helpers";
 
-/** Invented round J values and U.S. Standard Atmosphere 1976 T and [M] at 20, 30, 40, 50 km (reference-data.md §A.3). */
+/** Invented round J values and U.S. Standard Atmosphere 1976 T and [M] at 20, 30, 40, 50 km (docs/references.md, Standard atmosphere). */
 const LEVELS = [
   { z: 20, T_K: 216.65, M_cm3: 1.849e18, J: { O2: 3e-12, O3_O1D: 5e-5, O3_O: 4.5e-4 } },
   { z: 30, T_K: 226.509, M_cm3: 3.828e17, J: { O2: 5e-11, O3_O1D: 3e-4, O3_O: 5e-4 } },

@@ -107,7 +107,7 @@ export function makeMechanism(spec: {
   };
 }
 
-/** JPL-style rate laws used below; parameters from /work/shared/reference-data.md §B (JPL 19-5, from memory). */
+/** JPL-style rate laws used below; parameters of JPL 19-5 (from memory; docs/references.md, Kinetics). */
 const arr = (A: number, EoverR_K: number): RateLaw => ({ law: "arrhenius", A, EoverR_K });
 const J = (channel: string): RateLaw => ({ law: "photolysis", channel });
 

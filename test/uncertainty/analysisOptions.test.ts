@@ -4,7 +4,7 @@ import { runAnalysis } from "@/lib/engine/run-analysis";
 import type { AnalysisRequest } from "@/lib/engine/types";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
-import { sensitivitiesCsv, uncertaintyCsv } from "@/lib/service/csv";
+import { sensitivitiesCsv, uncertaintyCsv, uncertaintyNotes } from "@/lib/service/csv";
 import { bandPolygons, profileShareBands, rankAgainstAltitude } from "@/lib/uncertainty";
 
 const mech = loadBuiltinMechanism("oxygen-chlorine").mechanism;
@@ -21,9 +21,14 @@ describe("the uncertainty options of an analysis", () => {
     expect(r.uncertainty?.monteCarlo?.seed).toBe(4);
     const again = analyse({ altitude_km: 40 }, { uncertaintySamples: 12, uncertaintySeed: 4 });
     expect(again.uncertainty?.monteCarlo?.summaries).toEqual(r.uncertainty?.monteCarlo?.summaries);
-    expect(uncertaintyCsv(r).split("\n")[1]).toMatch(/^key,kind,label/);
-    expect(sensitivitiesCsv(r).split("\n").length).toBeGreaterThan(10);
-    expect(uncertaintyCsv(analyse({ altitude_km: 40 }, {}))).toMatch(/^# no Monte Carlo/);
+    expect(uncertaintyCsv(r).split("\r\n")[0]).toMatch(/^key,kind,label/);
+    expect(sensitivitiesCsv(r).split("\r\n").length).toBeGreaterThan(10);
+    // without ranges the table is empty and the provenance block says why
+    const plain = analyse({ altitude_km: 40 }, {});
+    expect(uncertaintyCsv(plain)).toBe("");
+    expect(uncertaintyNotes(plain)).toEqual([
+      ["note", "no Monte Carlo ranges: request options.uncertaintySamples > 0"],
+    ]);
   });
 
   it("skip both with a warning in the 24-hour mode", () => {

@@ -9,6 +9,7 @@ import {
   logFactors,
   monteCarlo,
   monteCarloCsv,
+  monteCarloNotes,
   normalDraws,
   planMonteCarlo,
   quantile,
@@ -77,9 +78,13 @@ describe("Monte Carlo over the rate-constant uncertainties", () => {
     expect(mc.notVaried).toContain("J_O2");
     const bands = shareBands(mc);
     expect(bands.map((b) => b.family).sort()).toEqual(["ClOx", "Ox"]);
-    const csv = monteCarloCsv(mc).split("\n");
-    expect(csv[1]).toBe("key,kind,label,unit,central,median,p05,p95,count,missing");
-    expect(csv.length).toBe(mc.outputs.length + 3);
+    const csv = monteCarloCsv(mc).split("\r\n");
+    expect(csv[0]).toBe("key,kind,label,unit,central,median,p05,p95,count,missing");
+    expect(csv.length).toBe(mc.outputs.length + 2);
+    expect(monteCarloNotes(mc)[0]).toEqual([
+      "monte-carlo",
+      `${mc.samples} samples, seed ${mc.seed}, ${mc.succeeded} converged, ${mc.failed} failed`,
+    ]);
   });
 
   it("counts and reports a sample that fails instead of hiding it", () => {
@@ -107,7 +112,7 @@ describe("Monte Carlo over the rate-constant uncertainties", () => {
 
 describe("the draws", () => {
   it("use the JPL factor f(T) = f(298)·exp|g(1/T − 1/298)| as one standard deviation of ln k", () => {
-    // O + O3: f(298) = 1.15, g = 200 K (JPL 19-5, from memory; shared reference data section B)
+    // O + O3: f(298) = 1.15, g = 200 K (JPL 19-5, from memory; docs/references.md, Kinetics)
     const sigma = logFactors(mech, 220);
     const j = mech.reactions.findIndex((r) => r.equation === "O + O3 -> 2 O2");
     expect(j).toBeGreaterThanOrEqual(0);

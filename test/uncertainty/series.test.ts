@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { bandPolygons, profileBandSeries, shareBands } from "@/lib/uncertainty";
+import { profileBandSeries } from "@/lib/profiles/series";
+import { bandPolygons, shareBands } from "@/lib/uncertainty";
 import type { MonteCarloResult } from "@/lib/uncertainty/types";
 
 // invented bands (not computed): three levels, the top one without a range

@@ -30,12 +30,8 @@ import { runAnalysis } from "@/lib/engine/run-analysis";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { getAnalysisRecord } from "@/lib/service/analyses";
-import {
-  cancelUncertaintyJob,
-  getUncertaintyJob,
-  getUncertaintyProfile,
-  startUncertaintyJob,
-} from "@/lib/service/uncertainty";
+import { getUncertaintyProfile } from "@/lib/service/uncertainty";
+import { cancelUncertaintyJob, getUncertaintyJob, startUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 import { getStore, newRecordId } from "@/lib/store";
 import { monteCarlo } from "@/lib/uncertainty";
 

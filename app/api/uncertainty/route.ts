@@ -1,5 +1,6 @@
 import { readJsonBody, respond } from "@/lib/service/http";
-import { MAX_UNCERTAINTY_BODY, startUncertaintyJob } from "@/lib/service/uncertainty";
+import { MAX_UNCERTAINTY_BODY } from "@/lib/service/uncertainty";
+import { startUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 
 export const dynamic = "force-dynamic";
 

@@ -302,7 +302,7 @@ export const CROSS_SECTIONS = {
     [440, 2.0e-22],
   ]),
   ClONO2: table(
-    `${FROM_MEMORY}; the 300–440 nm tail lowered by ~2.5× after J(ClONO2) came out above the typical values of reference-data.md §C (Brasseur & Solomon 2005, from memory)`,
+    `${FROM_MEMORY}; the 300–440 nm tail lowered by ~2.5× after J(ClONO2) came out above the typical values of Brasseur & Solomon 2005 (from memory; docs/references.md, Photolysis)`,
     [
       [200, 2.8e-18],
       [205, 3.2e-18],

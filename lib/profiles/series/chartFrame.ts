@@ -21,7 +21,7 @@ export const FRAME_DEFAULTS = {
 };
 
 export type RateScale = "linear" | "log";
-export type SignedScale = "linear" | "symlog";
+export type SignedScale = "linear" | "signed-log";
 
 export interface Tick {
   /** px along the axis */
@@ -83,7 +83,7 @@ export function rateAxis(values: readonly number[], left: number, right: number,
 export function signedAxis(values: readonly number[], left: number, right: number, scale: SignedScale) {
   const mid = (left + right) / 2;
   const half = (right - left) / 2;
-  if (scale === "symlog") {
+  if (scale === "signed-log") {
     const s = signedLogScale(values, { decades: 4 });
     const x = (v: number) => Math.round((mid + s.normalize(v) * half) * 10) / 10;
     const ticks = s

@@ -103,7 +103,7 @@ export function differenceSeries(
       plot,
       xTicks,
       yTicks,
-      xLabel: `B − A Ox loss rate (molecules cm⁻³ s⁻¹, ${scale === "symlog" ? "symmetric log" : "linear"} scale)`,
+      xLabel: `B − A Ox loss rate (molecules cm⁻³ s⁻¹, ${scale === "signed-log" ? "symmetric log" : "linear"} scale)`,
       yLabel: "altitude (km)",
       zeroX,
     },

@@ -3,3 +3,4 @@ export * from "./differenceSeries";
 export * from "./familyColor";
 export * from "./familySplitSeries";
 export * from "./lossProfileSeries";
+export * from "./profileBandSeries";

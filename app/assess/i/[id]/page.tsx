@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { CopyLink, MarkingPanel, PrintButton } from "@/components/assessment";
 import { formatTolerance } from "@/lib/assessment";
 import type { InstructorAssessment } from "@/lib/assessment/types";
+import { CAUTION_LINE } from "@/lib/caution";
 import { getInstructorAssessment, studentPath } from "@/lib/service/assessments";
 
 export const dynamic = "force-dynamic";
@@ -153,6 +154,9 @@ export default async function InstructorPage({ params }: { params: Promise<{ id:
             </tbody>
           </table>
         </div>
+        <p className="mt-2 text-[11px] text-stone-500" data-testid="key-caution">
+          {CAUTION_LINE}
+        </p>
         {a.warnings.length > 0 && (
           <details className="no-print mt-3 text-[12px] text-stone-600">
             <summary className="cursor-pointer">

@@ -1,9 +1,10 @@
 import { MAX_ANSWERS_BODY, markAssessment } from "@/lib/service/assessments";
+import { csvExportOptions } from "@/lib/service/csvProvenance";
 import { csvResponse, HttpError, readBodyText, respond } from "@/lib/service/http";
 
 export const dynamic = "force-dynamic";
 
-/** Body: the class's answers as CSV (or JSON { csv }). Answers JSON marks, or CSV with ?format=csv. */
+/** Body: the class's answers as CSV (or JSON { csv }). Answers JSON marks, or CSV with ?format=csv (and ?comments=none for the bare table). */
 export async function POST(req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
   return respond(async () => {
@@ -19,7 +20,7 @@ export async function POST(req: Request, ctx: { params: Promise<{ id: string }> 
       if (typeof csv !== "string") throw new HttpError(400, "invalid-request", "expected { csv: string }", "csv");
       text = csv;
     }
-    const marks = await markAssessment(id, text);
+    const marks = await markAssessment(id, text, csvExportOptions(req));
     if (new URL(req.url).searchParams.get("format") === "csv")
       return csvResponse(marks.csv, `assessment-${id}-marks.csv`);
     return Response.json(marks);

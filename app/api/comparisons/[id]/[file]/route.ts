@@ -1,12 +1,13 @@
+import { csvExportOptions } from "@/lib/service/csvProvenance";
 import { csvResponse, notFound, respond } from "@/lib/service/http";
 import { comparisonExport } from "@/lib/service/profiles";
 
 export const dynamic = "force-dynamic";
 
-export async function GET(_req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
+export async function GET(req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
   const { id, file } = await ctx.params;
   return respond(async () => {
-    const out = await comparisonExport(id, file);
+    const out = await comparisonExport(id, file, csvExportOptions(req));
     if (!out) throw notFound("export", file);
     return csvResponse(out.csv, out.filename);
   });

@@ -1,5 +1,5 @@
 import { respond } from "@/lib/service/http";
-import { cancelUncertaintyJob, getUncertaintyJob } from "@/lib/service/uncertainty";
+import { cancelUncertaintyJob, getUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 
 export const dynamic = "force-dynamic";
 

@@ -2,7 +2,8 @@
 /**
  * A labelled number input that keeps what the user types while it is
  * incomplete, reports a number (or undefined when emptied: "use the default")
- * and shows the default in use as its placeholder.
+ * and shows the default in use as its placeholder. Used by the explorer's
+ * conditions and the profile forms; the accessible name is "label (unit)".
  */
 import { useEffect, useState } from "react";
 
@@ -45,8 +46,11 @@ export function NumberField({
   const msg = localBad ? "expected a number" : error;
   return (
     <div className={className}>
-      <label htmlFor={id} className="flex items-baseline justify-between text-[12px] text-stone-600">
-        <span>{label}</span>
+      <div className="flex items-baseline justify-between text-[12px] text-stone-600">
+        <label htmlFor={id}>
+          {label}
+          <span className="sr-only"> ({unit})</span>
+        </label>
         {value !== undefined ? (
           <button
             type="button"
@@ -60,7 +64,7 @@ export function NumberField({
             reset
           </button>
         ) : null}
-      </label>
+      </div>
       <div
         className={`mt-0.5 flex items-center rounded border bg-white focus-within:outline-2 focus-within:outline-stone-800 ${
           msg ? "border-red-600" : "border-stone-300"
@@ -86,7 +90,9 @@ export function NumberField({
           }}
           className="w-full min-w-0 rounded bg-transparent px-1.5 py-1 text-[13px] tabular-nums outline-none placeholder:text-stone-400"
         />
-        <span className="shrink-0 pr-1.5 text-[11px] text-stone-500">{unit}</span>
+        <span aria-hidden="true" className="shrink-0 pr-1.5 text-[11px] text-stone-500">
+          {unit}
+        </span>
       </div>
       {msg ? (
         <p id={`${id}-error`} role="alert" className="mt-0.5 text-[11px] text-red-700">

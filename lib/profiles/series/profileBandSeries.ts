@@ -1,22 +1,16 @@
 /**
  * Chart data for the family shares against altitude with their Monte Carlo
  * 5–95 % bands (unstacked, share 0–1 on x, altitude on y): the frame in the
- * profile charts' layout (lib/profiles chartFrame, same margins) and, per
- * family, the band polygons (bandPolygons), the median line segments and
- * the family's colours (lib/profiles familyColor). Pure data, snapshot-able.
+ * profile charts' layout (chartFrame, same margins) and, per family, the
+ * band polygons (lib/uncertainty bandPolygons), the median line segments
+ * and the family's colours (familyColor). Pure data, snapshot-able.
  *
  * Units: px, share 0–1, km.
  */
-import {
-  altitudeAxis,
-  type ChartFrame,
-  FRAME_DEFAULTS,
-  type FrameOptions,
-  familyColor,
-  pathSegments,
-} from "../profiles/series";
-import { bandPolygons } from "./bandPolygons";
-import type { ProfileBand } from "./bandSeries";
+import { bandPolygons } from "../../uncertainty/bandPolygons";
+import type { ProfileBand } from "../../uncertainty/bandSeries";
+import { altitudeAxis, type ChartFrame, FRAME_DEFAULTS, type FrameOptions, pathSegments } from "./chartFrame";
+import { familyColor } from "./familyColor";
 
 export interface ProfileBandSeries {
   frame: ChartFrame;

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { fmix32, mulberry32, variantSeed } from "@/lib/assessment";
+import { fmix32, mulberry32, variantSeed } from "@/lib/random";
 
 // Independent re-implementations of the published C code in BigInt arithmetic (mod 2³²), used only as test oracles.
 // mulberry32: Tommy Ettinger, 2017 (public domain). fmix32: MurmurHash3 finaliser, Austin Appleby (public domain).
