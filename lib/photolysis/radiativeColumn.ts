@@ -59,6 +59,8 @@ export const DEFAULTS = {
   opaque: 60,
   /** scattering optical depth of the lit part of a column below which (when no light reaches the ground) its diffuse field is taken as 0 */
   negligibleScattering: 1e-6,
+  /** layers kept below the deepest interface the beam reaches (optical depth < opaque) */
+  layersBelowBeam: 3,
   /** fields kept in the cache */
   cacheSize: 64,
 };
@@ -112,6 +114,46 @@ interface Geometry {
 }
 
 const GEOMETRY: Geometry = buildGeometry();
+
+/**
+ * Per-bin optical data of the column's layers and interfaces, for the bins
+ * with diffuse light (index bin − firstBin): the default climatology's O3
+ * absorption optical depth of each layer at its temperature, the O2 and
+ * Rayleigh optical depths of each layer, and the O3 cross section at each
+ * interface's temperature (for the slant paths).
+ */
+interface ColumnOptics {
+  o3Layer: Float64Array;
+  o2Layer: Float64Array;
+  rayleighLayer: Float64Array;
+  o3Interface: Float64Array;
+}
+
+const OPTICS: ColumnOptics = buildOptics();
+
+function buildOptics(): ColumnOptics {
+  const G = WAVELENGTH_GRID;
+  const T = SPECTRAL_TABLES;
+  const geo = GEOMETRY;
+  const N = geo.layers;
+  const bins = G.n - G.srEnd;
+  const o3Layer = new Float64Array(bins * N);
+  const o2Layer = new Float64Array(bins * N);
+  const rayleighLayer = new Float64Array(bins * N);
+  const o3Interface = new Float64Array(bins * (N + 1));
+  const sigmaO3 = (b: number, k: number, w: number) =>
+    T.o3ByTemperature[k][b] + w * (T.o3ByTemperature[k + 1][b] - T.o3ByTemperature[k][b]);
+  for (let j = 0; j < bins; j++) {
+    const b = G.srEnd + j;
+    for (let k = 0; k < N; k++) {
+      o3Layer[j * N + k] = sigmaO3(b, geo.kLayer[k], geo.wLayer[k]) * geo.o3[k];
+      o2Layer[j * N + k] = T.o2[b] * O2_FRACTION * geo.air[k];
+      rayleighLayer[j * N + k] = T.rayleigh[b] * geo.air[k];
+    }
+    for (let i = 0; i <= N; i++) o3Interface[j * (N + 1) + i] = sigmaO3(b, geo.kInterface[i], geo.wInterface[i]);
+  }
+  return { o3Layer, o2Layer, rayleighLayer, o3Interface };
+}
 
 function buildGeometry(): Geometry {
   const top = DEFAULTS.top_km;
@@ -266,7 +308,9 @@ export function computeDiffuseField(settings: ColumnSettings): DiffuseField {
   const o3s = settings.o3Scale;
   const dark = Number.POSITIVE_INFINITY;
 
+  const X = OPTICS;
   for (let b = firstBin; b < G.n; b++) {
+    const j = b - firstBin;
     const lambda = 0.5 * (G.lower_nm[b] + G.upper_nm[b]);
     const sO2 = T.o2[b];
     const sR = rayleighOn ? T.rayleigh[b] : 0;
@@ -274,38 +318,41 @@ export function computeDiffuseField(settings: ColumnSettings): DiffuseField {
     // slant optical depths first: where the beam is spent high up, the light below it is negligible
     col.slant[0] = 0;
     let deepest = 0;
+    const si = j * (N + 1);
     for (let i = 1; i <= N; i++) {
       if (!slant.sunlit[i]) {
         col.slant[i] = dark;
         continue;
       }
-      const lo = T.o3ByTemperature[geo.kInterface[i]][b];
-      const hi = T.o3ByTemperature[geo.kInterface[i] + 1][b];
-      const sO3 = lo + geo.wInterface[i] * (hi - lo);
-      const tau = sO3 * slant.o3[i] + sO2 * slant.o2[i] + sR * slant.air[i] + aer * slant.aerosol[i];
-      col.slant[i] = tau > DEFAULTS.opaque ? dark : tau;
-      if (tau <= DEFAULTS.opaque) deepest = i;
+      const tau = X.o3Interface[si + i] * slant.o3[i] + sO2 * slant.o2[i] + sR * slant.air[i] + aer * slant.aerosol[i];
+      if (tau > DEFAULTS.opaque) col.slant[i] = dark;
+      else {
+        col.slant[i] = tau;
+        deepest = i;
+      }
     }
     if (deepest === 0) continue;
+    // below the depth where the beam is spent no light arrives: end the column there over a black ground
+    const layers = deepest === N ? N : Math.min(N, deepest + DEFAULTS.layersBelowBeam);
     let scattering = 0;
-    for (let k = 0; k < N; k++) {
-      const lo = T.o3ByTemperature[geo.kLayer[k]][b];
-      const hi = T.o3ByTemperature[geo.kLayer[k] + 1][b];
-      const sO3 = lo + geo.wLayer[k] * (hi - lo);
-      const rayleigh = sR * geo.air[k];
+    const sl = j * N;
+    for (let k = 0; k < layers; k++) {
+      const rayleigh = rayleighOn ? X.rayleighLayer[sl + k] : 0;
       const aerosol = aer * geo.aerosolShare[k];
       const scatter = rayleigh + wAs * aerosol;
-      const tau = sO3 * o3s * geo.o3[k] + sO2 * O2_FRACTION * geo.air[k] + rayleigh + aerosol;
+      const tau = o3s * X.o3Layer[sl + k] + X.o2Layer[sl + k] + rayleigh + aerosol;
       col.dtau[k] = tau;
-      col.omega[k] = tau > 0 ? Math.min(scatter / tau, 1 - 1e-12) : 0;
+      col.omega[k] = tau > 0 ? scatter / tau : 0;
       col.g[k] = scatter > 0 ? (gAs * wAs * aerosol) / scatter : 0;
-      if (k < deepest) scattering += scatter;
+      scattering += scatter;
     }
     // no light reaches the ground and hardly any is scattered on the way: the diffuse field is negligible
-    if (deepest < N && scattering < DEFAULTS.negligibleScattering) continue;
+    if (layers < N && scattering < DEFAULTS.negligibleScattering) continue;
+    col.layers = layers;
+    col.albedo = layers === N ? settings.albedo : 0;
     col.beam = G.flux_cm2s[b];
     solveTwoStream(col, work, out);
-    for (let i = 0; i <= N; i++) flux[i * bins + (b - firstBin)] = Math.max(out[i], 0);
+    for (let i = 0; i <= layers; i++) flux[i * bins + j] = Math.max(out[i], 0);
   }
   return field;
 }
