@@ -33,6 +33,9 @@ export const NEWTON_DEFAULTS = {
   maxPtcLogStep: 5,
   /** a pseudo-time step that multiplies ‖r‖₂ by more than this is retried with Δτ/4 */
   maxPtcGrowth: 3,
+  /** Newton steps accepted with a line-search factor below crawlLambda, crawlSteps in a row, send the iteration back to pseudo-time stepping */
+  crawlLambda: 1 / 32,
+  crawlSteps: 4,
   /** bounds of ln x: 1e-250 … 1e30 cm⁻³ */
   uMin: Math.log(1e-250),
   uMax: Math.log(1e30),
@@ -212,6 +215,8 @@ export function newtonLog(
   // in ln x) is below stepTolerance: rows dominated by fast cycling (O ⇄ O3)
   // can have a tiny scaled residual while the slow balance is still off.
   let lastNewtonStep = Number.POSITIVE_INFINITY;
+  let lastPtcTau = NEWTON_DEFAULTS.tau0_s;
+  let crawling = 0;
   while (newtonIterations < settings.maxNewtonIterations && ptcSteps < settings.maxPtcSteps) {
     if (norm <= settings.tolerance) {
       if (lastNewtonStep <= settings.stepTolerance) return result(true);
@@ -257,6 +262,15 @@ export function newtonLog(
         }
         lambda /= 2;
       }
+      // A run of heavily damped steps means Newton's method is far from its
+      // basin (a slow mode still relaxing): go back to pseudo-time stepping.
+      crawling = accepted && lambda < NEWTON_DEFAULTS.crawlLambda ? crawling + 1 : 0;
+      if (crawling >= NEWTON_DEFAULTS.crawlSteps && fallbacks < 5) {
+        crawling = 0;
+        fallbacks++;
+        tau = lastPtcTau;
+        continue;
+      }
       if (!accepted) {
         norm = evaluateResidual(sys, kEff, u, ws);
         // Round-off floor: no descent possible while the residual is already small.
@@ -288,6 +302,7 @@ export function newtonLog(
         norm = evaluateResidual(sys, kEff, u, ws);
         rOld.set(ws.r);
       }
+      lastPtcTau = tau;
       tau *= ratio >= 0.9 ? Math.min(10, Math.max(2, ratio)) : ratio > 0.5 ? 1.2 : 0.5;
       if (tau >= NEWTON_DEFAULTS.tauNewton_s || (norm < 1e-4 && fallbacks === 0)) tau = Number.POSITIVE_INFINITY;
     }

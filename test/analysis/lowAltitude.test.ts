@@ -98,15 +98,22 @@ describe("analysis at 20 km", () => {
     }
   }
 
-  it("agrees with the direct formula within 1 % and deletes less than 3 % of the Ox loss (measured −0.14 % and 2.1 %)", () => {
+  // The 20 km share of deleted pathways rose from 2.1 % to 7.3 % when the two-stream light, the
+  // JPL HNO3 cross section and the NOy–N2O climatology came in (docs/cycle-analysis.md, "What moved"):
+  // HOx and halogen cycles coupled through NOy reservoirs split into many small pathways. It falls
+  // slowly with f_min (6.1 % at 1e-5, 4.5 % at 1e-6, 2.7 % at 1e-7, the last at 7 s), so the bound is 8 %.
+  it("agrees with the direct formula within 1 % and deletes less than 8 % of the Ox loss (measured 0.80 % and 7.3 %)", () => {
     expect(Math.abs(s.report.budget.directMismatch ?? Number.NaN)).toBeLessThan(0.01);
-    expect(deletedShare(s.report)).toBeLessThan(0.03);
+    expect(deletedShare(s.report)).toBeLessThan(0.08);
   });
 
-  it("keeps that agreement within 1 % for f_min from 1e-3 to 1e-5, so it is not tuned to one threshold", () => {
+  // Measured 0.18 %, 0.80 % and 1.10 % at f_min 1e-3, 1e-4 and 1e-5: as pathways are resolved further,
+  // part of the flux that the deleted remainder counted as loss turns out to be balanced by production
+  // pathways, so the two sides converge to a small difference, not to zero.
+  it("keeps that agreement within 1.5 % for f_min from 1e-3 to 1e-5, so it is not tuned to one threshold", () => {
     for (const fminRelative of [1e-3, 1e-5]) {
       const r = analyseCycles(mech, s.state, { heldSpecies: s.held, fminRelative });
-      expect(Math.abs(r.budget.directMismatch ?? Number.NaN), `f_min ${fminRelative}`).toBeLessThan(0.01);
+      expect(Math.abs(r.budget.directMismatch ?? Number.NaN), `f_min ${fminRelative}`).toBeLessThan(0.015);
     }
   });
 });

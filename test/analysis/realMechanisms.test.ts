@@ -71,11 +71,13 @@ describe("reference mechanism, 20–60 km", () => {
         { abs: 1e-12 },
         `${z} km`,
       );
-      expect(r.budget.unassignedLoss_cm3s / r.budget.loss_cm3s).toBeLessThan(0.03);
+      // deleted share 7.3 % at 20 km and 3.4 % at 25 km since the two-stream light and NOy
+      // climatology (test/analysis/lowAltitude.test.ts says why); under 3 % above
+      expect(r.budget.unassignedLoss_cm3s / r.budget.loss_cm3s, `${z} km`).toBeLessThan(z <= 20 ? 0.08 : z <= 25 ? 0.04 : 0.03);
     }
   });
 
-  it("agrees with the direct rate-limiting-step formula within 1 % at every level 20–60 km (measured ≤ 0.14 %)", () => {
+  it("agrees with the direct rate-limiting-step formula within 1 % at every level 20–60 km (measured 0.80 % at 20 km)", () => {
     for (const [z, r] of reports) expect(Math.abs(r.budget.directMismatch ?? Number.NaN), `${z} km`).toBeLessThan(0.01);
   });
 
