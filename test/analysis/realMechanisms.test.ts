@@ -73,7 +73,9 @@ describe("reference mechanism, 20–60 km", () => {
       );
       // deleted share 7.3 % at 20 km and 3.4 % at 25 km since the two-stream light and NOy
       // climatology (test/analysis/lowAltitude.test.ts says why); under 3 % above
-      expect(r.budget.unassignedLoss_cm3s / r.budget.loss_cm3s, `${z} km`).toBeLessThan(z <= 20 ? 0.08 : z <= 25 ? 0.04 : 0.03);
+      expect(r.budget.unassignedLoss_cm3s / r.budget.loss_cm3s, `${z} km`).toBeLessThan(
+        z <= 20 ? 0.08 : z <= 25 ? 0.04 : 0.03,
+      );
     }
   });
 
