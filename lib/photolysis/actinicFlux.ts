@@ -23,7 +23,7 @@
  */
 import { airColumnAbove_cm2, O2_FRACTION, ozoneColumnAbove_cm2 } from "../atmosphere";
 import { expint1 } from "./expint";
-import { aerosolSlantDepth, columnO3Above_cm2, diffuseAt, diffuseField } from "./radiativeColumn";
+import { aerosolSlantDepth, columnO3Above_cm2, diffuseAtO3Scale } from "./radiativeColumn";
 import { slantColumns } from "./slantColumns";
 import { SPECTRAL_TABLES, temperatureWeights } from "./spectralTables";
 import type { ActinicFlux, PhotolysisInput, PhotolysisOptions } from "./types";
@@ -59,6 +59,8 @@ export interface FluxWork {
   o3: Float64Array;
   /** per-bin diffuse actinic flux at the altitude */
   diffuse: Float64Array;
+  /** per-bin scratch of the diffuse interpolation */
+  scratch: Float64Array;
 }
 
 export function newFluxWork(): FluxWork {
@@ -68,6 +70,7 @@ export function newFluxWork(): FluxWork {
     o2Absorbed: new Float64Array(n),
     o3: new Float64Array(n),
     diffuse: new Float64Array(n),
+    scratch: new Float64Array(n),
   };
 }
 
@@ -93,14 +96,18 @@ export function fillActinicFlux(input: FluxInput, options: PhotolysisOptions, wo
   const aod = options.aerosolOpticalDepth ?? DEFAULTS.aerosolOpticalDepth;
   if (options.diffuse ?? DEFAULTS.diffuse) {
     const reference = columnO3Above_cm2(input.altitude_km);
-    const field = diffuseField({
-      zenith_deg: input.zenith_deg,
-      albedo: options.albedo ?? DEFAULTS.albedo,
-      aerosolOpticalDepth: aod,
-      o3Scale: reference > 0 ? input.o3Above_cm2 / reference : 1,
-      rayleigh: useRayleigh,
-    });
-    if (field.sunlit) diffuseAt(field, input.altitude_km, diffuse);
+    diffuseAtO3Scale(
+      {
+        zenith_deg: input.zenith_deg,
+        albedo: options.albedo ?? DEFAULTS.albedo,
+        aerosolOpticalDepth: aod,
+        rayleigh: useRayleigh,
+      },
+      reference > 0 ? input.o3Above_cm2 / reference : 1,
+      input.altitude_km,
+      diffuse,
+      work.scratch,
+    );
   }
   const range = options.wavelengthRange_nm;
   const { k, w } = temperatureWeights(input.T_K);

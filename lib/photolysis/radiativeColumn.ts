@@ -63,6 +63,12 @@ export const DEFAULTS = {
   layersBelowBeam: 3,
   /** fields kept in the cache */
   cacheSize: 64,
+  /**
+   * the O3 factors of the cached columns are whole powers of this; a factor in between is
+   * interpolated linearly in its logarithm (diffuseAtO3Scale), so that the levels of a profile,
+   * whose O3 columns above differ a little from the climatology's, share two columns
+   */
+  o3ScaleStep: 1.05,
 };
 
 /** What a column's diffuse field depends on. */
@@ -407,6 +413,43 @@ export function diffuseAt(field: DiffuseField, altitude_km: number, out: Float64
   const a = i0 * bins;
   const b = (i0 + 1) * bins;
   for (let j = 0; j < bins; j++) out[firstBin + j] = flux[a + j] + f * (flux[b + j] - flux[a + j]);
+}
+
+/**
+ * The diffuse flux at an altitude for any O3 factor: between the cached columns at the two
+ * neighbouring whole powers of DEFAULTS.o3ScaleStep, linear in ln(o3Scale). `scratch` is a
+ * per-bin work array. Returns false when no interface of either column sees the sun.
+ */
+export function diffuseAtO3Scale(
+  settings: Omit<ColumnSettings, "o3Scale">,
+  o3Scale: number,
+  altitude_km: number,
+  out: Float64Array,
+  scratch: Float64Array,
+): boolean {
+  if (!(o3Scale > 0)) {
+    // no O3 at all: a column of its own
+    const none = diffuseField({ ...settings, o3Scale: 0 });
+    if (none.sunlit) diffuseAt(none, altitude_km, out);
+    return none.sunlit;
+  }
+  const q = Math.log(o3Scale) / Math.log(DEFAULTS.o3ScaleStep);
+  const lo = Math.floor(q + 1e-9);
+  const w = Math.max(0, q - lo);
+  const at = (power: number) => diffuseField({ ...settings, o3Scale: DEFAULTS.o3ScaleStep ** power });
+  const a = at(lo);
+  if (w < 1e-9) {
+    if (a.sunlit) diffuseAt(a, altitude_km, out);
+    return a.sunlit;
+  }
+  const b = at(lo + 1);
+  if (!a.sunlit && !b.sunlit) return false;
+  out.fill(0);
+  scratch.fill(0);
+  if (a.sunlit) diffuseAt(a, altitude_km, out);
+  if (b.sunlit) diffuseAt(b, altitude_km, scratch);
+  for (let i = 0; i < out.length; i++) out[i] += w * (scratch[i] - out[i]);
+  return true;
 }
 
 /** Default-climatology O3 column above an altitude, cm⁻² (the reference of `o3Scale`). */
