@@ -10,7 +10,6 @@
  *
  * Units: x in molecules cm⁻³, rates in molecules cm⁻³ s⁻¹.
  */
-import { EngineError } from "../errors";
 import type { ChemSystem } from "./buildSystem";
 import { gatherAmounts, linearDerivative, logDerivative } from "./dependentRates";
 
@@ -56,8 +55,8 @@ export function productionLoss(sys: ChemSystem, rates: Float64Array, P: Float64A
 }
 
 /**
- * dF/du with u = ln x, row-major n×n, from the rates (overwrites J). The unknown amounts x are needed
- * when the system has amount-dependent reactions (their γ is differentiated at x).
+ * dF/du with u = ln x, row-major n×n, from the rates (overwrites J). Amount-dependent reactions are
+ * differentiated at x when given, else at the amounts of the `reactionRates` call that gave `rates`.
  */
 export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Array, x?: ArrayLike<number>): void {
   const n = sys.n;
@@ -72,13 +71,11 @@ export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Arra
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
     }
   }
-  if (sys.dependent.length > 0 && !x)
-    throw new EngineError("jacobian", "jacobianLog: the amounts x are needed for amount-dependent reactions");
   for (const d of sys.dependent) {
     const j = d.reaction;
     const r = rates[j];
     if (r === 0) continue;
-    gatherAmounts(d, x as ArrayLike<number>, sys.unknownOf, sys.fixed);
+    if (x) gatherAmounts(d, x, sys.unknownOf, sys.fixed);
     for (let q = 0; q < d.species.length; q++) {
       const l = sys.unknownOf[d.species[q]];
       if (l < 0) continue;
@@ -126,7 +123,9 @@ export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Ar
     for (let q = 0; q < d.species.length; q++) {
       const l = sys.unknownOf[d.species[q]];
       if (l < 0) continue;
-      const dr = mass * linearDerivative(d, q);
+      // the same difference as the log form where a > 0, so that both forms agree to rounding
+      const a = d.amounts[q];
+      const dr = a > 0 ? (mass * d.gamma(d.amounts) * logDerivative(d, q)) / a : mass * linearDerivative(d, q);
       if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * dr;
     }
   }
