@@ -204,7 +204,7 @@ export function ConditionsPanel(p: Props) {
                 className="rounded border border-stone-300 bg-white px-1 py-0.5 focus:outline-2 focus:outline-stone-800"
               >
                 <option value="none">none</option>
-                <option value="auto">automatic (T_NAT, frost point)</option>
+                <option value="auto">automatic</option>
                 <option value="NAT">NAT</option>
                 <option value="ice">ice</option>
               </select>
@@ -215,8 +215,9 @@ export function ConditionsPanel(p: Props) {
               unit="µm² cm⁻³"
               value={c.cloudSurface_um2cm3}
               onChange={(v) => set({ cloudSurface_um2cm3: v })}
-              placeholder={`NAT ${CLOUD_DEFAULTS.natSurface_um2cm3}, ice ${CLOUD_DEFAULTS.iceSurface_um2cm3}`}
+              placeholder="default"
               error={p.fieldErrors.cloudSurface_um2cm3}
+              hint={`Default NAT ${CLOUD_DEFAULTS.natSurface_um2cm3}, ice ${CLOUD_DEFAULTS.iceSurface_um2cm3}. Automatic: ice below the frost point, NAT below T_NAT.`}
             />
           </div>
           {p.resolved?.cloud ? (
