@@ -1,4 +1,11 @@
-export { type AmountDependence, amountDependence, amountSpecies, partialPressure_atm } from "./amountDependence";
+export {
+  type AmountDependence,
+  amountDependence,
+  amountSpecies,
+  newSurfaceCache,
+  partialPressure_atm,
+  type SurfaceCache,
+} from "./amountDependence";
 export { arrhenius } from "./arrhenius";
 export { type ChemicalActivationParams, chemicalActivation } from "./chemicalActivation";
 export { effectiveRateConstant } from "./effectiveRateConstant";

@@ -25,7 +25,7 @@
  * Units: T in K, partial pressures in atm, r in cm; H in M atm⁻¹, D in cm² s⁻¹,
  * c̄ in cm s⁻¹, k in s⁻¹, R = 0.082 L atm mol⁻¹ K⁻¹.
  */
-import { sulfateComposition } from "./sulfateComposition";
+import { type SulfateComposition, sulfateComposition } from "./sulfateComposition";
 
 export const SULFATE_GAMMA_DEFAULTS = {
   /** particle radius of the reacto-diffusive length test, cm (0.1 µm, background sulfate; common practice) */
@@ -64,11 +64,14 @@ function sphereFactor(q: number): number {
   return 1 / Math.tanh(q) - 1 / q;
 }
 
-/** The three γ at one state; all in [0, 1]. */
-export function sulfateGammas(input: SulfateGammaInput): SulfateGammas {
+/**
+ * The three γ at one state; all in [0, 1]. `composition` may pass the
+ * solution's composition at this T and p(H2O) when already known.
+ */
+export function sulfateGammas(input: SulfateGammaInput, composition?: SulfateComposition): SulfateGammas {
   const { T_K: T, pH2O_atm, pHCl_atm, pClONO2_atm } = input;
   const r = input.radius_cm ?? SULFATE_GAMMA_DEFAULTS.radius_cm;
-  const c = sulfateComposition(T, pH2O_atm);
+  const c = composition ?? sulfateComposition(T, pH2O_atm);
   const sqrtT = Math.sqrt(T);
   const hclAq = c.henryHCl_Matm * Math.max(pHCl_atm, 0);
 

@@ -9,7 +9,7 @@
  *
  * Units: number densities in molecules cm⁻³.
  */
-import { amountDependence } from "../kinetics";
+import { amountDependence, newSurfaceCache } from "../kinetics";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SolveConditions } from "./types";
 
@@ -31,9 +31,11 @@ export interface DependentRate {
 export function dependentRates(mech: CompiledMechanism, cond: SolveConditions): DependentRate[] {
   const env = { T_K: cond.T_K, M_cm3: cond.M_cm3, J_s: {} };
   const out: DependentRate[] = [];
+  // the sulfate reactions read the same amounts: one γ evaluation serves all three
+  const cache = newSurfaceCache();
   for (const r of mech.reactions) {
     if (r.firstOrderIn === undefined) continue;
-    const dep = amountDependence(r.rate, env, mech.species[r.firstOrderIn].id);
+    const dep = amountDependence(r.rate, env, mech.species[r.firstOrderIn].id, cache);
     if (!dep) continue;
     const species = Int32Array.from(dep.species.map((id) => mech.speciesIndex[id]));
     out.push({ reaction: r.index, species, gamma: dep.gamma, amounts: new Float64Array(species.length) });
