@@ -50,8 +50,13 @@ export async function setup(): Promise<BenchCase[]> {
   const vortex = solveConditionsOf(resolveCondition(mech, POLAR_VORTEX_DEMO.condition));
   const p = 50 / 1013.25;
   const gammaInput = { T_K: 192, pH2O_atm: 5e-6 * p, pHCl_atm: 1.5e-9 * p, pClONO2_atm: 1e-9 * p };
+  // warm the compiled code of all three solves alike, so that the first case timed is not the one that pays for it
+  for (let i = 0; i < 30; i++) {
+    solveSteadyState(mech, at30);
+    solveSteadyState(fixed30, at30);
+    solveSteadyState(mech, vortex);
+  }
   return [
-    { name: "γ evaluation (sulfateGammas, 192 K)", run: () => sulfateGammas(gammaInput) },
     {
       name: "steady state 30 km, γ evaluated",
       run: () => solveSteadyState(mech, at30),
@@ -66,5 +71,6 @@ export async function setup(): Promise<BenchCase[]> {
         return s;
       },
     },
+    { name: "γ evaluation (sulfateGammas, 192 K)", run: () => sulfateGammas(gammaInput) },
   ];
 }
