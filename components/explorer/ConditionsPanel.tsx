@@ -5,7 +5,9 @@
  * zenith angle), instantaneous or 24-hour, and the amounts held.
  */
 import { backgroundSulfateSurface_um2cm3 } from "@/lib/atmosphere/backgroundAerosol";
+import { CLOUD_DEFAULTS, type CloudType } from "@/lib/atmosphere/polarCloud";
 import { standardAtmosphere } from "@/lib/atmosphere/standardAtmosphere";
+import { DEMO_CONDITIONS } from "@/lib/engine/demoConditions";
 import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
@@ -39,6 +41,18 @@ interface Props {
 
 const sig = (v: number, d = 4) => Number(v.toPrecision(d));
 
+/** The cloud the last analysis used and the temperatures that decided it. */
+function cloudLine(cloud: NonNullable<ResolvedCondition["cloud"]>): string {
+  const t = (v: number | null) => (v === null ? "n/a" : `${v.toFixed(1)} K`);
+  const area =
+    cloud.present === "NAT"
+      ? `, ${cloud.natSurface_um2cm3} µm² cm⁻³`
+      : cloud.present === "ice"
+        ? `, ${cloud.iceSurface_um2cm3} µm² cm⁻³`
+        : "";
+  return `Cloud used: ${cloud.present}${area}. T_NAT ${t(cloud.T_NAT_K)}, frost point ${t(cloud.frostPoint_K)}.`;
+}
+
 export function ConditionsPanel(p: Props) {
   const c = p.condition;
   const set = (patch: Partial<ConditionInput>) => {
@@ -67,6 +81,30 @@ export function ConditionsPanel(p: Props) {
         onSubmit={(e) => e.preventDefault()}
         aria-label="Conditions"
       >
+        <div className="flex flex-col gap-0.5 text-[12px]">
+          <label htmlFor="example" className="text-stone-600">
+            Example condition
+          </label>
+          <select
+            id="example"
+            value=""
+            onChange={(e) => {
+              const demo = DEMO_CONDITIONS.find((d) => d.id === e.target.value);
+              if (!demo) return;
+              if (demo.mechanismId !== p.mechanismId) p.onMechanism(demo.mechanismId);
+              p.onCondition({ ...demo.condition });
+            }}
+            className="rounded border border-stone-300 bg-white px-1 py-0.5 focus:outline-2 focus:outline-stone-800"
+          >
+            <option value="">choose…</option>
+            {DEMO_CONDITIONS.map((d) => (
+              <option key={d.id} value={d.id} title={d.description}>
+                {d.label}
+              </option>
+            ))}
+          </select>
+        </div>
+
         <MechanismPicker
           mechanisms={p.mechanisms}
           mechanismId={p.mechanismId}
@@ -149,8 +187,44 @@ export function ConditionsPanel(p: Props) {
                 : "background"
             }
             error={p.fieldErrors.aerosolSurface_um2cm3}
-            hint="For the uptake reactions (N2O5, BrONO2 hydrolysis); 10–100 after a large eruption."
+            hint="For the reactions on liquid sulfate (N2O5, BrONO2, ClONO2, HOCl); 10–100 after a large eruption."
           />
+          <div className="grid grid-cols-2 gap-2">
+            <div className="flex flex-col gap-0.5 text-[12px]">
+              <label htmlFor="cloud" className="text-stone-600">
+                Polar cloud
+              </label>
+              <select
+                id="cloud"
+                value={c.cloud ?? "none"}
+                onChange={(e) => {
+                  const v = e.target.value as CloudType;
+                  set({ cloud: v === "none" ? undefined : v });
+                }}
+                className="rounded border border-stone-300 bg-white px-1 py-0.5 focus:outline-2 focus:outline-stone-800"
+              >
+                <option value="none">none</option>
+                <option value="auto">automatic</option>
+                <option value="NAT">NAT</option>
+                <option value="ice">ice</option>
+              </select>
+            </div>
+            <NumberField
+              id="cloud-surface"
+              label="Cloud surface"
+              unit="µm² cm⁻³"
+              value={c.cloudSurface_um2cm3}
+              onChange={(v) => set({ cloudSurface_um2cm3: v })}
+              placeholder="default"
+              error={p.fieldErrors.cloudSurface_um2cm3}
+              hint={`Default NAT ${CLOUD_DEFAULTS.natSurface_um2cm3}, ice ${CLOUD_DEFAULTS.iceSurface_um2cm3}. Automatic: ice below the frost point, NAT below T_NAT.`}
+            />
+          </div>
+          {p.resolved?.cloud ? (
+            <p className="text-[11px] text-stone-500" data-testid="cloud-state">
+              {cloudLine(p.resolved.cloud)}
+            </p>
+          ) : null}
         </fieldset>
 
         <fieldset className="space-y-2">

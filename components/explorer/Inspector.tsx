@@ -182,8 +182,14 @@ function lawRows(rate: RateLaw): [string, string][] {
       ];
     case "uptake":
       return [
-        ["law", "uptake on aerosol, γ v̄ A / 4"],
-        ["γ", String(rate.gamma)],
+        ["law", `uptake on ${rate.surface ?? "sulfate"}, γ v̄ A / 4`],
+        ["γ", rate.partner ? `${rate.gamma}, limited by the ${rate.partner.species} that arrives` : String(rate.gamma)],
+        ["molar mass", `${formatNumber(rate.molarMass_gmol)} g mol⁻¹`],
+      ];
+    case "liquid-aerosol":
+      return [
+        ["law", "uptake on liquid sulfate, γ(T, H2O, HCl) after Shi et al. 2001"],
+        ["process", rate.process],
         ["molar mass", `${formatNumber(rate.molarMass_gmol)} g mol⁻¹`],
       ];
     default:

@@ -184,6 +184,20 @@ export function SideFields({
               min={-90}
               max={90}
             />
+            <label className="text-[12px] text-stone-600" htmlFor={`${id}-cloud`}>
+              Polar cloud
+              <select
+                id={`${id}-cloud`}
+                className={select}
+                value={value.cloud ?? "none"}
+                onChange={(e) => set({ cloud: e.target.value as NonNullable<SideState["cloud"]> })}
+              >
+                <option value="none">none</option>
+                <option value="auto">automatic, per level (T_NAT, frost point)</option>
+                <option value="NAT">NAT at every level</option>
+                <option value="ice">ice at every level</option>
+              </select>
+            </label>
           </>
         )}
       </div>

@@ -15,6 +15,8 @@ export interface SideState {
   latitude_deg?: number;
   date?: string;
   localSolarTime_h?: number;
+  /** polar cloud type of every level (auto is decided per level); undefined = none */
+  cloud?: "none" | "NAT" | "ice" | "auto";
 }
 
 export const defaultSide = (over: Partial<SideState> = {}): SideState => ({
@@ -42,6 +44,7 @@ export function sweepRequestOf(s: SideState, grid: SweepGrid): SweepRequest {
     ...(s.latitude_deg !== undefined ? { latitude_deg: s.latitude_deg } : {}),
     ...(s.date ? { date: s.date } : {}),
     ...(s.localSolarTime_h !== undefined ? { localSolarTime_h: s.localSolarTime_h } : {}),
+    ...(s.cloud && s.cloud !== "none" ? { cloud: s.cloud } : {}),
   };
   const g = Object.fromEntries(Object.entries(grid).filter(([, v]) => v !== undefined)) as SweepGrid;
   return { mechanismId: s.mechanismId, profile, ...(Object.keys(g).length ? { grid: g } : {}), condition };

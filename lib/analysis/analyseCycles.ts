@@ -14,6 +14,7 @@ import { carrierWeights } from "./carrierFamilies";
 import { type DescribeContext, describePathway } from "./describePathway";
 import { directOxLoss } from "./directOxLoss";
 import { findPathways } from "./findPathways";
+import { netStepRates } from "./netStepRates";
 import { oxWeights } from "./oxWeights";
 import { reactionNet } from "./reactionNet";
 import { weightedSum } from "./sparseVector";
@@ -131,7 +132,14 @@ export function analyseCycles(
     carrierLoss.set(family, loss);
   }
 
-  const ctx: DescribeContext = { mech, rates, oxWeights: weights, held, carrierLoss };
+  const ctx: DescribeContext = {
+    mech,
+    rates,
+    oxWeights: weights,
+    held,
+    carrierLoss,
+    stepRates: netStepRates(mech, rates),
+  };
   const cycles: CatalyticCycle[] = [];
   const other: CatalyticCycle[] = [];
   // Deleted pathways are often unfinished (radicals unresolved), so their gross Ox loss is measured with the

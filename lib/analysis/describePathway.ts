@@ -8,7 +8,9 @@
  * - catalytic cycle: an Ox-destroying pathway whose net effect involves only
  *   odd-oxygen members and O2;
  * - rate-limiting step: the step with the smallest r_j/m_j (reaction rate
- *   over its multiplicity in the cycle), after Lary (1997);
+ *   over its multiplicity in the cycle, the net rate for an equilibrium pair:
+ *   netStepRates.ts), after Lary (1997); of steps at the same rate (within
+ *   1e-6) the first in the mechanism;
  * - efficiency: min_j f·m_j/r_j, the share of its least-devoted step's rate
  *   that runs through this cycle (for ClOx: of all Cl + O3 events, the
  *   fraction whose ClO then meets O); that step is the entry step;
@@ -32,7 +34,12 @@ export interface DescribeContext {
   held: Uint8Array;
   /** carrier family → loss to reservoirs, molecules cm⁻³ s⁻¹ */
   carrierLoss: Map<string, number>;
+  /** rates as steps (net rates of equilibrium pairs, netStepRates.ts); default `rates` */
+  stepRates?: number[];
 }
+
+/** Relative tolerance within which two step rates count as equal. */
+const SAME_RATE = 1e-6;
 
 function formatSide(terms: [string, number][]): string {
   return terms
@@ -87,11 +94,15 @@ export function describePathway(
   }
   const family = familyName(families);
 
+  const stepRates = ctx.stepRates ?? rates;
+  const perPass = (s: Pathway["steps"][number]) => stepRates[s.reaction] / s.multiplicity;
   let slowest = p.steps[0];
   let entry = p.steps[0];
   let efficiency = Number.POSITIVE_INFINITY;
   for (const s of p.steps) {
-    if (rates[s.reaction] / s.multiplicity < rates[slowest.reaction] / slowest.multiplicity) slowest = s;
+    const v = perPass(s);
+    const best = perPass(slowest);
+    if (v < best * (1 - SAME_RATE) || (v <= best * (1 + SAME_RATE) && s.reaction < slowest.reaction)) slowest = s;
     const share = rates[s.reaction] > 0 ? (p.rate_cm3s * s.multiplicity) / rates[s.reaction] : 0;
     if (share < efficiency) {
       efficiency = share;
@@ -130,7 +141,7 @@ export function describePathway(
     efficiency: Math.min(1, efficiency),
     rateLimitingStep: mech.reactions[slowest.reaction].id,
     chainLength,
-    chainLengthRateLimiting: chainLength === null ? null : rates[slowest.reaction] / slowest.multiplicity / carrierLoss,
+    chainLengthRateLimiting: chainLength === null ? null : perPass(slowest) / carrierLoss,
     entryStep: mech.reactions[entry.reaction].id,
     chainCarrier,
     net: Object.fromEntries(p.net.map((t) => [mech.species[t.species].id, t.coef])),

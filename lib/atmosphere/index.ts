@@ -29,9 +29,19 @@ export { dayOfYear, isLeapYear } from "./dayOfYear";
 export { DEMO_PROFILES, INVENTED_COLD_PROFILE, INVENTED_WARM_PROFILE } from "./demo-profiles";
 export { equationOfTime_min } from "./equationOfTime";
 export { erfcx } from "./erfcx";
+export { frostPoint_K, iceVapourPressure_hPa } from "./frostPoint";
 export { geometricToGeopotential_km, geopotentialToGeometric_km } from "./geopotential";
 export { type HourAngleOptions, hourAngle_deg } from "./hourAngle";
+export { NAT_DEFAULTS, natExistenceTemperature_K, natHno3Pressure_hPa } from "./natExistenceTemperature";
 export { noonZenith } from "./noonZenith";
+export {
+  CLOUD_DEFAULTS,
+  type CloudInput,
+  type CloudPresent,
+  type CloudState,
+  type CloudType,
+  polarCloud,
+} from "./polarCloud";
 export { checkDayOfYear, type SolarCoordinates, solarCoordinates } from "./solarCoordinates";
 export { solarDeclination } from "./solarDeclination";
 export { solarZenithAngle } from "./solarZenithAngle";

@@ -45,6 +45,13 @@ export const conditionSchema = z
         "expected an aerosol surface area density between 0 and 10000 µm² cm⁻³ (background ~1, after an eruption ~10–100)",
       )
       .optional(),
+    cloud: z.enum(["none", "NAT", "ice", "auto"], "expected a cloud type: none, NAT, ice or auto").optional(),
+    cloudSurface_um2cm3: finite
+      .refine(
+        (v) => v >= 0 && v <= 10000,
+        "expected a cloud surface area density between 0 and 10000 µm² cm⁻³ (NAT ~1, at most 100; ice ~200)",
+      )
+      .optional(),
     albedo: finite.refine((v) => v >= 0 && v <= 1, "expected a ground albedo between 0 and 1").optional(),
     aerosolOpticalDepth: finite
       .refine(

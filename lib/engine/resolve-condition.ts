@@ -10,7 +10,15 @@
  * climatology unless the condition asks to solve it.
  */
 
-import { airColumnAbove_cm2, DOBSON_UNIT_cm2, O2_FRACTION, standardAtmosphere } from "../atmosphere";
+import {
+  airColumnAbove_cm2,
+  CLOUD_DEFAULTS,
+  type CloudState,
+  DOBSON_UNIT_cm2,
+  O2_FRACTION,
+  polarCloud,
+  standardAtmosphere,
+} from "../atmosphere";
 import { InputError } from "../errors";
 import type { Amount, CompiledMechanism } from "../mechanism/types";
 import { conditionAt, photolysisFrequencies } from "../photolysis";
@@ -66,16 +74,55 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
 
   const keep = new Set([...Object.keys(held_cm3), ...Object.keys(poolTotals_cm3), "T_K", "p_hPa", "zenith_deg"]);
   for (const k of ["o3Column", "J"]) keep.add(k);
-  // the aerosol matters only to a mechanism with uptake reactions
-  if (mech.reactions.some((r) => r.rate.law === "uptake")) keep.add("aerosol");
+  // the aerosol and clouds matter only to a mechanism with surface reactions
+  if (mech.reactions.some((r) => r.firstOrderIn !== undefined)) {
+    keep.add("aerosol");
+    keep.add("cloud");
+  }
+  const cloud = cloudOf(input, base.T_K, base.p_hPa, M_cm3, held_cm3, poolTotals_cm3);
+  sources.cloud = cloudSource(cloud, input);
   return {
     ...base,
+    cloud,
     o3ColumnAbove_DU,
     J_s,
     held_cm3,
     poolTotals_cm3,
     sources: Object.fromEntries(Object.entries(sources).filter(([k]) => keep.has(k))),
   };
+}
+
+/** The cloud of the condition: H2O from the held amount, HNO3 as the whole NOy (or the held HNO3). */
+function cloudOf(
+  input: ConditionInput,
+  T_K: number,
+  p_hPa: number,
+  M_cm3: number,
+  held_cm3: Record<string, number>,
+  poolTotals_cm3: Record<string, number>,
+): CloudState {
+  const hno3 = poolTotals_cm3.NOy ?? held_cm3.HNO3 ?? 0;
+  try {
+    return polarCloud({
+      type: input.cloud ?? CLOUD_DEFAULTS.type,
+      T_K,
+      pH2O_hPa: ((held_cm3.H2O ?? 0) / M_cm3) * p_hPa,
+      pHNO3_hPa: (hno3 / M_cm3) * p_hPa,
+      surface_um2cm3: input.cloudSurface_um2cm3,
+    });
+  } catch (e) {
+    throw new InputError("condition.cloudSurface_um2cm3", e instanceof Error ? e.message : String(e));
+  }
+}
+
+function cloudSource(c: CloudState, input: ConditionInput): string {
+  const t = (v: number | null) => (v === null ? "n/a" : `${v.toFixed(1)} K`);
+  const temps = `T_NAT ${t(c.T_NAT_K)} (Hanson and Mauersberger 1988, NOy as HNO3), frost point ${t(c.frostPoint_K)} (Marti and Mauersberger 1993)`;
+  if (c.present === "none")
+    return `no cloud (${c.type === "auto" ? "auto: warmer than T_NAT" : "none asked for"}); ${temps}`;
+  const area = c.present === "NAT" ? c.natSurface_um2cm3 : c.iceSurface_um2cm3;
+  const given = input.cloudSurface_um2cm3 !== undefined ? "given" : "default";
+  return `${c.present} cloud (${c.type === "auto" ? "auto" : "given"}), ${area} µm² cm⁻³ (${given}); ${temps}`;
 }
 
 /**
@@ -153,5 +200,7 @@ export function solveConditionsOf(c: ResolvedCondition, J_s: Record<string, numb
     poolTotals_cm3: c.poolTotals_cm3,
     // µm² cm⁻³ → cm² cm⁻³; a stored condition from before this field has none
     aerosolSurface_cm2cm3: (c.aerosolSurface_um2cm3 ?? 0) * 1e-8,
+    natSurface_cm2cm3: (c.cloud?.natSurface_um2cm3 ?? 0) * 1e-8,
+    iceSurface_cm2cm3: (c.cloud?.iceSurface_um2cm3 ?? 0) * 1e-8,
   };
 }

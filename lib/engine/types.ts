@@ -3,6 +3,7 @@
  * returns, and what the views read. Plain JSON throughout.
  */
 import type { CycleReport } from "../analysis/types";
+import type { CloudState, CloudType } from "../atmosphere/polarCloud";
 import type { SteadyState } from "../solver/types";
 import type { UncertaintyResult } from "../uncertainty/types";
 
@@ -40,6 +41,10 @@ export interface ConditionInput {
   o3ColumnAbove_DU?: number;
   /** aerosol surface area density for the mechanism's uptake reactions, µm² cm⁻³ (0–10000); default: background sulfate at the altitude */
   aerosolSurface_um2cm3?: number;
+  /** polar stratospheric cloud: "none" (default), "NAT", "ice", or "auto" (from T, the frost point and T_NAT) */
+  cloud?: CloudType;
+  /** surface area density of the cloud present, µm² cm⁻³ (NAT 0–100, ice 0–10000); default NAT 1, ice 200 */
+  cloudSurface_um2cm3?: number;
   /** Lambertian albedo of the ground (and any cloud deck below) for the scattered light, 0–1; default 0.3 */
   albedo?: number;
   /** aerosol optical depth of the column at 550 nm for the light (0–10), spread like the background sulfate profile; default 0 */
@@ -84,6 +89,8 @@ export interface ResolvedCondition {
   o3ColumnAbove_DU: number;
   /** aerosol surface area density used by uptake reactions, µm² cm⁻³ */
   aerosolSurface_um2cm3: number;
+  /** the polar stratospheric cloud used and the temperatures that decide it (absent in records from before clouds: none) */
+  cloud?: CloudState;
   /** ground albedo used for the light, 0–1 (absent in records from before the two-stream light: 0.2, one reflection) */
   albedo?: number;
   /** column aerosol optical depth at 550 nm used for the light */

@@ -9,11 +9,16 @@ import { chemicalActivation } from "./chemicalActivation";
 import { equilibriumReverse } from "./equilibriumReverse";
 import { lindemann } from "./lindemann";
 import { photolysisRate } from "./photolysisRate";
+import { surfaceArea_cm2cm3 } from "./surfaceArea";
 import { termolecular } from "./termolecular";
 import type { KineticsEnv, RateLaw } from "./types";
 import { uptake } from "./uptake";
 
-/** The rate coefficient of `law` at `env` (termolecular laws include [M]). */
+/**
+ * The rate coefficient of `law` at `env` (termolecular laws include [M]). For a
+ * law whose γ depends on amounts (`amountDependence`) it is the collision
+ * frequency v̄ A / 4, which the solver multiplies by γ(amounts).
+ */
 export function rateConstant(law: RateLaw, env: KineticsEnv): number {
   switch (law.law) {
     case "arrhenius":
@@ -30,8 +35,13 @@ export function rateConstant(law: RateLaw, env: KineticsEnv): number {
       return photolysisRate(law.channel, env.J_s, law.factor ?? 1);
     case "photolysis-fixed":
       return law.J_s;
-    case "uptake":
-      return uptake(law.gamma, law.molarMass_gmol, env.T_K, env.aerosolSurface_cm2cm3 ?? 0);
+    case "uptake": {
+      const area = surfaceArea_cm2cm3(law.surface ?? "sulfate", env);
+      // with a partner, γ depends on the amounts (amountDependence.ts): here the collision frequency (γ = 1)
+      return uptake(law.partner ? 1 : law.gamma, law.molarMass_gmol, env.T_K, area);
+    }
+    case "liquid-aerosol":
+      return uptake(1, law.molarMass_gmol, env.T_K, env.aerosolSurface_cm2cm3 ?? 0);
     default:
       throw new EngineError("unknown-rate-law", `rateConstant: unknown rate law "${(law as { law?: unknown }).law}"`);
   }

@@ -34,10 +34,29 @@ export type RateLaw =
   /** A fixed photolysis frequency J in s⁻¹. */
   | { law: "photolysis-fixed"; J_s: number }
   /**
-   * Uptake on aerosol surfaces, k = γ v̄ A / 4 in s⁻¹ (uptake.ts): γ the uptake probability (0–1], the gas's
-   * molar mass in g mol⁻¹ (for v̄), A the condition's aerosol surface area density.
+   * Uptake on particle surfaces, k = γ v̄ A / 4 in s⁻¹ (uptake.ts): γ the uptake probability (0–1], the gas's
+   * molar mass in g mol⁻¹ (for v̄), A the surface area density of `surface` (default sulfate). With a gas-phase
+   * `partner` (e.g. HCl in ClONO2 + HCl) the rate stays first order in the gas taken up and γ is limited by the
+   * partner's arrival at the surface (partnerLimitedGamma.ts).
    */
-  | { law: "uptake"; gamma: number; molarMass_gmol: number };
+  | {
+      law: "uptake";
+      gamma: number;
+      molarMass_gmol: number;
+      surface?: SurfaceKind;
+      partner?: { species: string; molarMass_gmol: number };
+    }
+  /**
+   * Uptake on liquid sulfate / supercooled ternary solution with γ from the Shi et al. (2001) parameterisation
+   * of JPL 19-5 (sulfateGamma.ts): γ depends on T, p(H2O), p(HCl) and p(ClONO2); k = γ v̄ A_sulfate / 4 in s⁻¹.
+   */
+  | { law: "liquid-aerosol"; process: LiquidAerosolProcess; molarMass_gmol: number; radius_cm?: number };
+
+/** The particle surfaces a condition can carry. */
+export type SurfaceKind = "sulfate" | "nat" | "ice";
+
+/** The reactions on liquid aerosol that the Shi et al. (2001) parameterisation covers. */
+export type LiquidAerosolProcess = "ClONO2+H2O" | "ClONO2+HCl" | "HOCl+HCl";
 
 /** JPL uncertainty: f(T) = f(298) exp|g (1/T − 1/298)|. */
 export interface Uncertainty {
@@ -54,6 +73,10 @@ export interface KineticsEnv {
   M_cm3: number;
   /** photolysis frequencies by channel, s⁻¹; a missing channel is 0 */
   J_s: Readonly<Record<string, number>>;
-  /** aerosol surface area density, cm² cm⁻³; default 0 (no uptake) */
+  /** aerosol (liquid sulfate) surface area density, cm² cm⁻³; default 0 (no uptake) */
   aerosolSurface_cm2cm3?: number;
+  /** nitric acid trihydrate (NAT) particle surface area density, cm² cm⁻³; default 0 */
+  natSurface_cm2cm3?: number;
+  /** ice particle surface area density, cm² cm⁻³; default 0 */
+  iceSurface_cm2cm3?: number;
 }

@@ -13,9 +13,10 @@ import { molarMass_gmol } from "./molarMass";
 import { parseEquation } from "./parseEquation";
 import { parseFormula } from "./parseFormula";
 import { weightedSum } from "./poolExpression";
-import { rateLawFromEntry } from "./rateLawFromEntry";
+import { rateLawFromEntry, type SurfaceGases } from "./rateLawFromEntry";
 import type { ReadResult } from "./readDocument";
 import { stoichiometryMatrix } from "./stoichiometryMatrix";
+import { surfaceEquationProblem } from "./surfaceEquation";
 import type { CompiledMechanism, CompiledReaction, ConservedPool, Species, Term } from "./types";
 
 const RESERVED = new Set(["hv", "->"]);
@@ -194,20 +195,24 @@ export function compileMechanism(
     if (e.rate.law === "equilibrium-reverse" && typeof e.rate.forward === "string") {
       pendingReverse.push({ r: reactions.length, path, entry: e });
     } else {
-      let gasMolarMass: number | undefined;
-      if (e.rate.law === "uptake") {
-        // first order in the one gas taken up; the condensed-phase partner (water in the aerosol) is not written
-        if (reactants.length !== 1 || reactants[0].coef !== 1 || hasM) {
-          sink.error(
-            [...path, "equation"],
-            "uptake",
-            `an uptake reaction has exactly one reactant, the gas taken up (e.g. "N2O5 -> 2 HNO3", marked unbalanced: water from the aerosol), found ${reactants.length === 1 ? `"${eq.text}"` : `${reactants.length} reactants`}`,
-          );
+      let gases: SurfaceGases | undefined;
+      if (e.rate.law === "uptake" || e.rate.law === "liquid-aerosol") {
+        const problem = surfaceEquationProblem(e.rate, reactants, hasM, species, speciesIndex);
+        if (problem) {
+          sink.error([...path, "equation"], "uptake", problem);
           return;
         }
-        gasMolarMass = molarMass_gmol(species[reactants[0].species].atoms);
+        r.firstOrderIn = reactants[0].species;
+        const gasMass = molarMass_gmol(species[reactants[0].species].atoms);
+        const partner = reactants.length === 2 ? species[reactants[1].species] : undefined;
+        const partnerMass = partner ? molarMass_gmol(partner.atoms) : undefined;
+        if (gasMass !== undefined && (!partner || partnerMass !== undefined)) {
+          gases = { gasMolarMass_gmol: gasMass };
+          if (partner && partnerMass !== undefined)
+            gases.partner = { species: partner.id, molarMass_gmol: partnerMass };
+        }
       }
-      const law = rateLawFromEntry(e.rate, [...path, "rate"], order, sink, () => undefined, gasMolarMass);
+      const law = rateLawFromEntry(e.rate, [...path, "rate"], order, sink, () => undefined, gases);
       if (!law) return;
       r.rate = law;
     }
@@ -234,7 +239,12 @@ export function compileMechanism(
         );
         return undefined;
       }
-      if (fr.rate.law === "equilibrium-reverse" || fr.rate.law === "uptake" || fr.photolysis) {
+      if (
+        fr.rate.law === "equilibrium-reverse" ||
+        fr.rate.law === "uptake" ||
+        fr.rate.law === "liquid-aerosol" ||
+        fr.photolysis
+      ) {
         sink.error(
           [...path, "rate", "forward"],
           "reverse",

@@ -56,6 +56,19 @@ function range(sink: DiagnosticSink, path: DocPath, value: number, key: keyof ty
   }
 }
 
+/** The gases of a surface reaction, from its equation. */
+export interface SurfaceGases {
+  /** g mol⁻¹ */
+  gasMolarMass_gmol: number;
+  /** the second reactant (e.g. HCl), if the equation has one */
+  partner?: { species: string; molarMass_gmol: number };
+}
+
+/** Uptake probabilities below this are kept but suggest a typing slip (common practice: measured γ ≥ 1e-6). */
+export const GAMMA_FLOOR = 1e-6;
+/** Plausible particle radii of the liquid-aerosol law, µm (stratospheric sulfate and STS; common practice). */
+export const RADIUS_RANGE_um = [0.01, 10] as const;
+
 /**
  * The compiled law. `order` is the number of concentration factors the rate
  * multiplies (reactants plus M for an Arrhenius law written with + M);
@@ -67,9 +80,10 @@ export function rateLawFromEntry(
   order: number,
   sink: DiagnosticSink,
   forward: (id: string) => RateLaw | undefined,
-  /** for an uptake law: the molar mass of the gas taken up, g mol⁻¹ */
-  gasMolarMass_gmol?: number,
+  /** for a surface law: the gas taken up (its molar mass, g mol⁻¹) and its gas-phase partner, if any */
+  surface?: SurfaceGases,
 ): RateLaw | undefined {
+  const gasMolarMass_gmol = surface?.gasMolarMass_gmol;
   const expo = (v: number | undefined, key: string) => {
     if (v !== undefined && Math.abs(v) > PLAUSIBLE.exponent) {
       sink.warn([...path, key], "unit-suspect", `${key} = ${v} is an unusually large temperature exponent`);
@@ -159,7 +173,34 @@ export function rateLawFromEntry(
         );
         return undefined;
       }
-      return { law: "uptake", gamma: e.gamma, molarMass_gmol: gasMolarMass_gmol };
+      if (e.gamma < GAMMA_FLOOR)
+        sink.warn(
+          [...path, "gamma"],
+          "implausible",
+          `gamma = ${e.gamma} is below ${GAMMA_FLOOR}: no measured uptake is this small`,
+        );
+      const law: RateLaw = { law: "uptake", gamma: e.gamma, molarMass_gmol: gasMolarMass_gmol };
+      if (e.surface && e.surface !== "sulfate") law.surface = e.surface;
+      if (surface?.partner) law.partner = surface.partner;
+      return law;
+    }
+    case "liquid-aerosol": {
+      if (gasMolarMass_gmol === undefined) {
+        sink.error([...path, "law"], "uptake", "a liquid-aerosol rate needs the gas taken up as its first reactant");
+        return undefined;
+      }
+      const law: RateLaw = { law: "liquid-aerosol", process: e.process, molarMass_gmol: gasMolarMass_gmol };
+      if (e.radius_um !== undefined) {
+        const [lo, hi] = RADIUS_RANGE_um;
+        if (e.radius_um < lo || e.radius_um > hi)
+          sink.warn(
+            [...path, "radius_um"],
+            "implausible",
+            `radius_um = ${e.radius_um} µm is outside ${lo}–${hi} µm, the sizes of stratospheric liquid particles`,
+          );
+        law.radius_cm = e.radius_um * 1e-4;
+      }
+      return law;
     }
     case "photolysis": {
       if (e.J !== undefined) {

@@ -27,8 +27,13 @@ export const LAW_PARAMETERS: Record<RateEntry["law"], [string[], string[]]> = {
   lindemann: [["low", "high"], []],
   "equilibrium-reverse": [["forward", "K"], []],
   photolysis: [[], ["channel", "factor", "J"]],
-  uptake: [["gamma"], []],
+  uptake: [["gamma"], ["surface"]],
+  "liquid-aerosol": [["process"], ["radius_um"]],
 };
+/** Surfaces an uptake law may name (lib/kinetics `SurfaceKind`). */
+export const SURFACES = ["sulfate", "nat", "ice"] as const;
+/** Processes of the liquid-aerosol law (Shi et al. 2001 parameterisation, lib/kinetics/sulfateGamma.ts). */
+export const LIQUID_AEROSOL_PROCESSES = ["ClONO2+H2O", "ClONO2+HCl", "HOCl+HCl"] as const;
 const LAWS = Object.keys(LAW_PARAMETERS);
 /** Accepted spellings with the JPL symbols. */
 const ALIASES: Record<string, string> = { "k∞": "kinf", "f(298)": "f298" };
@@ -114,6 +119,21 @@ class Reader {
       return undefined;
     }
     return v;
+  }
+
+  /** A text field that must be one of `options`. */
+  choice<T extends string>(o: Obj, key: string, path: DocPath, options: readonly T[], required = false): T | undefined {
+    const v = o[key];
+    if (v === undefined || v === null) {
+      if (required)
+        this.sink.error([...path, key], "missing", `missing required parameter "${key}"; one of ${options.join(", ")}`);
+      return undefined;
+    }
+    if (typeof v !== "string" || !options.includes(v as T)) {
+      this.sink.error([...path, key], "range", `${key} must be one of ${options.join(", ")}, found ${kind(v)}`);
+      return undefined;
+    }
+    return v as T;
   }
 
   list(o: Obj, key: string, path: DocPath, required: boolean): unknown[] {
@@ -236,9 +256,16 @@ class Reader {
         break;
       case "uptake": {
         const gamma = num("gamma", true);
+        const surface = this.choice(o, "surface", path, SURFACES);
         if (gamma !== undefined && gamma > 1)
           this.sink.error([...path, "gamma"], "range", `gamma is an uptake probability in (0, 1], found ${gamma}`);
-        else if (gamma !== undefined) out = { law, gamma };
+        else if (gamma !== undefined) out = surface ? { law, gamma, surface } : { law, gamma };
+        break;
+      }
+      case "liquid-aerosol": {
+        const process = this.choice(o, "process", path, LIQUID_AEROSOL_PROCESSES, true);
+        const radius_um = num("radius_um", true);
+        if (process) out = radius_um === undefined ? { law, process } : { law, process, radius_um };
         break;
       }
       case "lindemann": {
@@ -273,7 +300,12 @@ class Reader {
           );
         else if (o.forward !== undefined) {
           forward = this.rate(o.forward, [...path, "forward"], true);
-          if (forward?.law === "equilibrium-reverse" || forward?.law === "photolysis" || forward?.law === "uptake") {
+          if (
+            forward?.law === "equilibrium-reverse" ||
+            forward?.law === "photolysis" ||
+            forward?.law === "uptake" ||
+            forward?.law === "liquid-aerosol"
+          ) {
             this.sink.error(
               [...path, "forward", "law"],
               "type",

@@ -7,7 +7,7 @@
  * photolysis frequencies in s⁻¹; temperatures in K.
  */
 import type { Diagnostic } from "../errors";
-import type { RateLaw, Uncertainty } from "../kinetics/types";
+import type { LiquidAerosolProcess, RateLaw, SurfaceKind, Uncertainty } from "../kinetics/types";
 
 /** How a species enters a steady-state solve. */
 export type SpeciesRole = "solved" | "held" | "third-body";
@@ -51,6 +51,11 @@ export interface CompiledReaction {
   /** hv written in the equation. */
   photolysis: boolean;
   rate: RateLaw;
+  /**
+   * For a surface reaction (uptake, liquid-aerosol): the species index of the gas taken up. The rate is first
+   * order in it alone; a second reactant (the partner, e.g. HCl) is consumed but enters through γ.
+   */
+  firstOrderIn?: number;
   /**
    * For an equilibrium-reverse rate, the index of its forward reaction: a
    * change of the forward rate constant carries over to this one at fixed K,
@@ -169,7 +174,8 @@ export type RateEntry =
   | { law: "lindemann"; low: { A: number; "E/R"?: number }; high: { A: number; "E/R"?: number } }
   | { law: "equilibrium-reverse"; forward: string | RateEntry; K: { A: number; B: number } }
   | { law: "photolysis"; channel?: string; factor?: number; J?: number }
-  | { law: "uptake"; gamma: number };
+  | { law: "uptake"; gamma: number; surface?: SurfaceKind }
+  | { law: "liquid-aerosol"; process: LiquidAerosolProcess; radius_um?: number };
 
 export interface SpeciesEntry {
   id: string;

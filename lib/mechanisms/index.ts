@@ -19,6 +19,6 @@ export const BUILTIN_MECHANISMS = [
     id: "reference",
     title: "Reference stratosphere",
     description:
-      "Ox, HOx, NOx, ClOx and BrOx chemistry with their reservoirs, a reduced methane oxidation, the photolysis of every photolabile species, and N2O5 and BrONO2 hydrolysis on sulfate aerosol.",
+      "Ox, HOx, NOx, ClOx and BrOx chemistry with their reservoirs, a reduced methane oxidation, the photolysis of every photolabile species, the ClO dimer and ClO–BrO chemistry, and chlorine activation on sulfate aerosol, NAT and ice.",
   },
 ] as const satisfies readonly { id: string; title: string; description: string }[];

@@ -85,7 +85,7 @@ export const PHOTOLYSIS_CHANNELS: readonly PhotolysisChannel[] = [
   {
     id: "Cl2O2",
     molecule: "Cl2O2",
-    reaction: "Cl2O2 + hv -> 2 Cl + O2 (via ClOO)",
+    reaction: "Cl2O2 + hv -> Cl + ClOO",
     data: `approximate, from memory; ${YIELD_1} (JPL gives ~0.8–0.9 for Cl + ClOO)`,
   },
   { id: "OClO", molecule: "OClO", reaction: "OClO + hv -> O + ClO", data: `approximate, from memory; ${YIELD_1}` },

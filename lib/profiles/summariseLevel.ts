@@ -25,6 +25,12 @@ export function summariseLevel(request: AnalysisRequest, result: AnalysisResult,
       zenith_deg: c.zenith_deg,
       o3ColumnAbove_DU: c.o3ColumnAbove_DU,
       aerosolSurface_um2cm3: c.aerosolSurface_um2cm3,
+      ...(c.cloud && c.cloud.present !== "none"
+        ? {
+            cloud: c.cloud.present,
+            cloudSurface_um2cm3: c.cloud.present === "NAT" ? c.cloud.natSurface_um2cm3 : c.cloud.iceSurface_um2cm3,
+          }
+        : {}),
     },
     budget: ok
       ? {

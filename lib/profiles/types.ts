@@ -146,6 +146,10 @@ export interface SweepLevel {
     o3ColumnAbove_DU: number;
     /** aerosol surface area density used by uptake reactions; absent in sweeps stored before engine 0.2.0 */
     aerosolSurface_um2cm3?: number;
+    /** the polar cloud at this level (the request's cloud type decided per level); absent when none */
+    cloud?: "NAT" | "ice";
+    /** its surface area density, µm² cm⁻³ */
+    cloudSurface_um2cm3?: number;
   } | null;
   budget: LevelBudget | null;
   cycles: LevelCycle[];

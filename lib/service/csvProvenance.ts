@@ -81,10 +81,17 @@ export function conditionEntries(c: ResolvedCondition): CsvCommentEntry[] {
     .filter(([, v]) => typeof v === "number" || typeof v === "string")
     .map(([k, v]) => `${k}=${typeof v === "number" ? round(v) : v}`);
   const pools = Object.entries(c.poolTotals_cm3 ?? {}).map(([k, v]) => `${k}=${round(v)}`);
-  return [
+  const entries: CsvCommentEntry[] = [
     ["condition", scalars.join("; ")],
     ["pool-totals-cm3", pools.join("; ")],
   ];
+  if (c.cloud) {
+    const cloud = Object.entries(c.cloud)
+      .filter(([, v]) => v !== null)
+      .map(([k, v]) => `${k}=${typeof v === "number" ? round(v) : v}`);
+    entries.push(["cloud", cloud.join("; ")]);
+  }
+  return entries;
 }
 
 /** The comment lines of `p`; permalinks absolute under `origin`. */

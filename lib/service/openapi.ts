@@ -610,6 +610,19 @@ export const openApiDocument = {
                 description:
                   "sulfate aerosol surface area density for uptake reactions, um2 cm-3; default: background profile",
               },
+              cloud: {
+                enum: ["none", "NAT", "ice", "auto"],
+                default: "none",
+                description:
+                  "polar stratospheric cloud: none, NAT, ice, or auto (ice below the frost point, Marti and Mauersberger 1993; NAT below the NAT existence temperature, Hanson and Mauersberger 1988, at the local H2O and NOy as HNO3)",
+              },
+              cloudSurface_um2cm3: {
+                type: "number",
+                minimum: 0,
+                maximum: 10000,
+                description:
+                  "surface area density of the cloud present, um2 cm-3 (NAT at most 100); default NAT 1, ice 200",
+              },
               albedo: {
                 type: "number",
                 minimum: 0,

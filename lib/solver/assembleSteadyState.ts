@@ -1,7 +1,8 @@
 /**
  * Builds the SteadyState report from number densities and rates: per-species
  * production, loss and lifetime from the net stoichiometry of each reaction,
- * per-reaction k and rate, and the net chemical source of each constrained
+ * per-reaction k and rate (k of an amount-dependent surface reaction is its
+ * first-order constant γ(a) v̄ A / 4 at the state), and the net chemical source of each constrained
  * pool Σ w_i (P_i − L_i). Every number is forced finite (non-finite → 0) so
  * that a failed solve still yields a well-formed report.
  *
@@ -79,6 +80,13 @@ export function assembleSteadyState(inp: AssembleInput): SteadyState {
       total_cm3: c.requestedTotal,
     };
   });
+  const gammaAt = new Map<number, number>();
+  for (const d of sys.dependent) {
+    d.species.forEach((sp, q) => {
+      d.amounts[q] = inp.numberDensity[sp];
+    });
+    gammaAt.set(d.reaction, d.gamma(d.amounts));
+  }
   return {
     status: inp.status,
     message: inp.message,
@@ -90,7 +98,7 @@ export function assembleSteadyState(inp: AssembleInput): SteadyState {
     reactions: mech.reactions.map((r, j) => ({
       id: r.id,
       equation: r.equation,
-      k: finite(inp.k[j]),
+      k: finite(inp.k[j] * (gammaAt.get(j) ?? 1)),
       rate_cm3s: rate_cm3s[j],
     })),
     pools,

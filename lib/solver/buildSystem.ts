@@ -8,6 +8,7 @@
  */
 import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";
+import { type DependentRate, dependentRates } from "./dependentRates";
 import type { SolveConditions } from "./types";
 
 /** One pool total that replaces one balance equation. */
@@ -52,6 +53,8 @@ export interface ChemSystem {
   /** Π over held reactants of [X]^coef, per reaction */
   heldFactor: Float64Array;
   constraints: PoolConstraint[];
+  /** reactions whose γ depends on amounts (dependentRates.ts); their rate is mass action × γ */
+  dependent: DependentRate[];
   /** mech.pools indices with no total in the conditions */
   unconstrainedPools: number[];
   warnings: string[];
@@ -140,12 +143,14 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
     for (const t of r.reactants) {
       if (!(t.species >= 0 && t.species < ns))
         throw new InputError(`reactions[${j}].reactants`, "species index out of range");
+      net.set(t.species, (net.get(t.species) ?? 0) - t.coef);
+      // a surface reaction is first order in the gas taken up alone; its partner enters through γ
+      if (r.firstOrderIn !== undefined && t.species !== r.firstOrderIn) continue;
       const u = unknownOf[t.species];
       if (u >= 0) {
         rU.push(u);
         rC.push(t.coef);
       } else hf *= t.coef === 1 ? fixed[t.species] : fixed[t.species] ** t.coef;
-      net.set(t.species, (net.get(t.species) ?? 0) - t.coef);
     }
     for (const t of r.products) {
       if (!(t.species >= 0 && t.species < ns))
@@ -227,6 +232,7 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
     aNu: Float64Array.from(aN),
     heldFactor,
     constraints,
+    dependent: dependentRates(mech, cond),
     unconstrainedPools,
     warnings,
   };

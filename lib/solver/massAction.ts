@@ -5,10 +5,13 @@
  * the analytic Jacobian, in linear (∂F/∂x) or logarithmic (∂F/∂ln x) form.
  * For u = ln x the derivative of r_j is exact and division-free:
  * ∂r_j/∂u_l = ν_lj r_j (common practice; e.g. Sandu et al., Atmos. Environ. 31, 1997).
+ * Reactions whose γ depends on amounts (dependentRates.ts) are multiplied by
+ * γ(a), and their Jacobian gains r_j ∂ln γ/∂ln a through every amount read.
  *
  * Units: x in molecules cm⁻³, rates in molecules cm⁻³ s⁻¹.
  */
 import type { ChemSystem } from "./buildSystem";
+import { gatherAmounts, linearDerivative, logDerivative } from "./dependentRates";
 
 /** kEff_j = k_j × Π over held reactants [X]^coef. */
 export function effectiveConstants(sys: ChemSystem, k: ArrayLike<number>, out: Float64Array): Float64Array {
@@ -30,6 +33,9 @@ export function reactionRates(sys: ChemSystem, kEff: Float64Array, x: Float64Arr
     }
     rates[j] = r;
   }
+  for (const d of sys.dependent) {
+    if (rates[d.reaction] !== 0) rates[d.reaction] *= d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed));
+  }
 }
 
 /** Production P and loss L of every unknown from the net stoichiometry, cm⁻³ s⁻¹. */
@@ -48,8 +54,11 @@ export function productionLoss(sys: ChemSystem, rates: Float64Array, P: Float64A
   }
 }
 
-/** dF/du with u = ln x, row-major n×n, from the rates (overwrites J). */
-export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Array): void {
+/**
+ * dF/du with u = ln x, row-major n×n, from the rates (overwrites J). Amount-dependent reactions are
+ * differentiated at x when given, else at the amounts of the `reactionRates` call that gave `rates`.
+ */
+export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Array, x?: ArrayLike<number>): void {
   const n = sys.n;
   J.fill(0);
   const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
@@ -62,6 +71,18 @@ export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Arra
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
     }
   }
+  for (const d of sys.dependent) {
+    const j = d.reaction;
+    const r = rates[j];
+    if (r === 0) continue;
+    if (x) gatherAmounts(d, x, sys.unknownOf, sys.fixed);
+    for (let q = 0; q < d.species.length; q++) {
+      const l = sys.unknownOf[d.species[q]];
+      if (l < 0) continue;
+      const dr = r * logDerivative(d, q);
+      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * dr;
+    }
+  }
 }
 
 /** dF/dx, row-major n×n, at unknown amounts x ≥ 0 (exact also where some x are 0). Overwrites J. */
@@ -69,8 +90,10 @@ export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Ar
   const n = sys.n;
   J.fill(0);
   const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
+  const gammaOf = new Map<number, number>();
+  for (const d of sys.dependent) gammaOf.set(d.reaction, d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed)));
   for (let j = 0; j < sys.nReactions; j++) {
-    const kj = kEff[j];
+    const kj = kEff[j] * (gammaOf.get(j) ?? 1);
     if (kj === 0) continue;
     const q0 = rStart[j];
     const q1 = rStart[j + 1];
@@ -88,6 +111,22 @@ export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Ar
       if (d === 0) continue;
       const l = rUnknown[q];
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
+    }
+  }
+  for (const d of sys.dependent) {
+    const j = d.reaction;
+    let mass = kEff[j];
+    if (mass === 0) continue;
+    for (let q = rStart[j]; q < rStart[j + 1]; q++) mass *= x[rUnknown[q]] ** rCoef[q];
+    if (mass === 0) continue;
+    gatherAmounts(d, x, sys.unknownOf, sys.fixed);
+    for (let q = 0; q < d.species.length; q++) {
+      const l = sys.unknownOf[d.species[q]];
+      if (l < 0) continue;
+      // the same difference as the log form where a > 0, so that both forms agree to rounding
+      const a = d.amounts[q];
+      const dr = a > 0 ? (mass * d.gamma(d.amounts) * logDerivative(d, q)) / a : mass * linearDerivative(d, q);
+      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * dr;
     }
   }
 }

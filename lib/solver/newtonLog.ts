@@ -138,7 +138,7 @@ function halfSquare(r: Float64Array): number {
 function step(sys: ChemSystem, tau: number, ws: NewtonWorkspace): number {
   const n = sys.n;
   const { A, x, scale, r, du, isConstraintRow } = ws;
-  jacobianLog(sys, ws.rates, A);
+  jacobianLog(sys, ws.rates, A, x);
   for (const c of sys.constraints) {
     const row = c.replaced * n;
     A.fill(0, row, row + n);

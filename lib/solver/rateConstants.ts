@@ -40,6 +40,8 @@ export function rateConstants(
     M_cm3: cond.M_cm3,
     J_s: cond.J_s ?? {},
     aerosolSurface_cm2cm3: cond.aerosolSurface_cm2cm3,
+    natSurface_cm2cm3: cond.natSurface_cm2cm3,
+    iceSurface_cm2cm3: cond.iceSurface_cm2cm3,
   };
   for (let j = 0; j < nr; j++) {
     let k = given ? given[j] : effectiveRateConstant(mech.reactions[j], env);

@@ -66,7 +66,7 @@ export function steadyStateSensitivities(
   const u = Float64Array.from(sys.unknownSpecies, (s) => Math.log(Math.max(state.numberDensity_cm3[s], 1e-300)));
   evaluateResidual(sys, kEff, u, ws);
   const A = ws.A;
-  jacobianLog(sys, ws.rates, A);
+  jacobianLog(sys, ws.rates, A, ws.x);
   const isConstraint = new Uint8Array(n);
   for (const c of sys.constraints) {
     isConstraint[c.replaced] = 1;

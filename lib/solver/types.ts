@@ -19,8 +19,12 @@ export interface SolveConditions {
   held_cm3: Readonly<Record<string, number>>;
   /** Totals of the mechanism's pools by pool id (cm⁻³ of the pool's atoms, weighted). */
   poolTotals_cm3: Readonly<Record<string, number>>;
-  /** aerosol surface area density for uptake reactions, cm² cm⁻³; default 0 (none) */
+  /** aerosol (liquid sulfate) surface area density for uptake reactions, cm² cm⁻³; default 0 (none) */
   aerosolSurface_cm2cm3?: number;
+  /** NAT particle surface area density, cm² cm⁻³; default 0 (none) */
+  natSurface_cm2cm3?: number;
+  /** ice particle surface area density, cm² cm⁻³; default 0 (none) */
+  iceSurface_cm2cm3?: number;
 }
 
 export type SolveStatus =

@@ -139,7 +139,10 @@ export function sensitivities(
     const x = x0.map((v, s) => (dlnx[s] ? v * Math.exp(e * (dlnx[s] as number[])[j]) : v));
     const r = r0.map((v, m) => {
       let d = m === j ? 1 : 0;
-      for (const t of mech.reactions[m].reactants) {
+      const reaction = mech.reactions[m];
+      for (const t of reaction.reactants) {
+        // a surface reaction is first order in its gas; the dependence through γ is left out here
+        if (reaction.firstOrderIn !== undefined && t.species !== reaction.firstOrderIn) continue;
         const row = dlnx[t.species];
         if (row) d += t.coef * row[j];
       }

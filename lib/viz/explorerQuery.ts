@@ -96,6 +96,11 @@ export function parseExplorerQuery(params: Params): ExplorerQuery {
   if (o3 === "solved" || o3 === "held") condition.ozone = o3;
   const sad = num("sad", 0, 10000);
   if (sad !== undefined) condition.aerosolSurface_um2cm3 = sad;
+  const cloud = q.get("cloud");
+  if (cloud === "none" || cloud === "NAT" || cloud === "ice" || cloud === "auto") condition.cloud = cloud;
+  else if (cloud !== undefined) warnings.push(`cloud=${cloud} ignored: expected none, NAT, ice or auto`);
+  const csad = num("csad", 0, 10000);
+  if (csad !== undefined) condition.cloudSurface_um2cm3 = csad;
   const albedo = num("alb", 0, 1);
   if (albedo !== undefined) condition.albedo = albedo;
   const aod = num("aod", 0, 10);
@@ -133,6 +138,8 @@ export function explorerQueryString(q: Omit<ExplorerQuery, "warnings">): string 
   out.set("mode", c.mode ?? EXPLORER_DEFAULTS.mode);
   if (c.ozone) out.set("o3", c.ozone);
   if (c.aerosolSurface_um2cm3 !== undefined) out.set("sad", String(c.aerosolSurface_um2cm3));
+  if (c.cloud !== undefined) out.set("cloud", c.cloud);
+  if (c.cloudSurface_um2cm3 !== undefined) out.set("csad", String(c.cloudSurface_um2cm3));
   if (c.albedo !== undefined) out.set("alb", String(c.albedo));
   if (c.aerosolOpticalDepth !== undefined) out.set("aod", String(c.aerosolOpticalDepth));
   for (const [k, v] of Object.entries(c.poolTotals ?? {}).sort(([a], [b]) => a.localeCompare(b)))

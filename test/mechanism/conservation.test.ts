@@ -56,7 +56,9 @@ describe("conservation relations of the reference mechanism", () => {
   };
 
   it("finds the chlorine balance with every chlorine species weighted by its atoms", () => {
-    expect(poolExpression(rel("Cl"))).toBe("Cl atoms: Cl + ClO + 2 Cl2O2 + OClO + 2 Cl2 + HCl + HOCl + ClONO2 + BrCl");
+    expect(poolExpression(rel("Cl"))).toBe(
+      "Cl atoms: Cl + ClO + 2 Cl2O2 + ClOO + OClO + 2 Cl2 + HCl + HOCl + ClONO2 + BrCl",
+    );
   });
 
   it("finds the bromine balance and the nitrogen of NOy (N2 and N2O are held, so not in it)", () => {

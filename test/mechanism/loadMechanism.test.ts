@@ -53,15 +53,15 @@ describe("loadMechanism", () => {
     expectClose((r.rate as { molarMass_gmol: number }).molarMass_gmol, 108.009, { rel: 1e-9 });
   });
 
-  it("rejects an uptake reaction with two reactants or a γ above 1, naming the entry", () => {
+  it("rejects an uptake reaction with three reactants or a γ above 1, naming the entry", () => {
     const base = minimal.replace(
       "  - { id: O3, role: solved }",
       "  - { id: O3, role: solved }\n  - { id: N2O5, role: solved }\n  - { id: HNO3, role: held, mixingRatio: 1e-9 }",
     );
     const two = problems(
-      `${base}  - id: H1\n    equation: N2O5 + O -> 2 HNO3\n    rate: { law: uptake, gamma: 0.1 }\n    unbalanced: test\n`,
+      `${base}  - id: H1\n    equation: N2O5 + O + O3 -> 2 HNO3\n    rate: { law: uptake, gamma: 0.1 }\n    unbalanced: test\n`,
     );
-    expect(two.some((p) => p.code === "uptake" && /exactly one reactant/.test(p.message))).toBe(true);
+    expect(two.some((p) => p.code === "uptake" && /at most one gas-phase partner/.test(p.message))).toBe(true);
     const big = problems(
       `${base}  - id: H1\n    equation: N2O5 -> 2 HNO3\n    rate: { law: uptake, gamma: 1.5 }\n    unbalanced: test\n`,
     );
