@@ -169,6 +169,102 @@ const profilePaths = {
   },
 };
 
+// Runs over days (issue 17).
+const runCsv = (what: string) => profileCsv(what, "run");
+const runPaths = {
+  "/api/runs": {
+    get: {
+      summary: "The invented demo runs offered on the runs page, each with its request",
+      responses: { 200: { description: "{ demos: [{ id, title, note, request }] }" } },
+    },
+    post: {
+      summary:
+        "Start a run: the mechanism integrated over 1–60 days at a fixed place or along a trajectory, with hourly output and each day's Ox loss by family and cycle",
+      requestBody: {
+        required: true,
+        content: { "application/json": { schema: { $ref: "#/components/schemas/RunRequest" } } },
+      },
+      responses: { ...job202, ...errors(400, 404, 413) },
+    },
+  },
+  "/api/runs/{id}": {
+    get: {
+      summary:
+        "A stored run: { id, createdAt, engineVersion, body: { request, result } }; a failed integration has status failed, failedAt_h and the hours up to then",
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  "/api/runs/{id}.json": {
+    get: {
+      summary: "The full stored run as a JSON download",
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  "/api/runs/{id}/hours.csv": runCsv("The hourly state (T, [M], zenith angle, O3 in ppbv, every number density)"),
+  "/api/runs/{id}/rates.csv": runCsv("The hourly rate of every reaction"),
+  "/api/runs/{id}/daily.csv": runCsv("Each day's O3 change, Ox budget and closure, loss by family and pool totals"),
+};
+
+const runSchemas = {
+  RunRequest: {
+    type: "object",
+    required: ["mechanismId", "condition", "days"],
+    additionalProperties: false,
+    properties: {
+      mechanismId: { type: "string", examples: ["reference"] },
+      condition: {
+        type: "object",
+        description:
+          "the AnalysisRequest condition of the place (or the base of every trajectory row: date, held, poolTotals, …); the run starts at local midnight of its date, O3 solved unless ozone is held",
+      },
+      days: { type: "integer", minimum: 1, maximum: 60 },
+      start: {
+        oneOf: [
+          { type: "object", required: ["kind"], properties: { kind: { const: "periodic" } } },
+          {
+            type: "object",
+            required: ["kind", "analysisId"],
+            properties: { kind: { const: "analysis" }, analysisId: { type: "string" } },
+          },
+          {
+            type: "object",
+            required: ["kind", "mixingRatios"],
+            properties: {
+              kind: { const: "amounts" },
+              mixingRatios: { type: "object", additionalProperties: { type: "number", minimum: 0, maximum: 1 } },
+            },
+          },
+        ],
+        description: "default periodic: the 24-hour periodic solution at the first condition, at local midnight",
+      },
+      trajectory: {
+        type: "object",
+        required: ["csv"],
+        properties: {
+          csv: {
+            type: "string",
+            description:
+              "time_h,T_K,p_hPa,latitude_deg[,altitude_km][,aerosolSurface_um2cm3][,other condition fields]; at most 10,000 rows and 1 MiB; see docs/runs.md",
+          },
+          name: { type: "string" },
+        },
+      },
+      title: { type: "string" },
+      options: {
+        type: "object",
+        additionalProperties: false,
+        properties: {
+          fminRelative: { type: "number", default: 1e-4 },
+          oxDefinition: { enum: ["standard", "extended"], default: "standard" },
+          sunFollowsDate: { type: "boolean", default: true },
+        },
+      },
+    },
+  },
+};
+
 const storedSweep = { type: "object", required: ["sweepId"], properties: { sweepId: { type: "string" } } };
 
 const profileSchemas = {
@@ -451,6 +547,7 @@ export const openApiDocument = {
       },
     },
     ...profilePaths,
+    ...runPaths,
     "/api/analyses/{id}/uncertainty.csv": csv("Monte Carlo central value, median and 5–95 % range of each output"),
     "/api/analyses/{id}/sensitivities.csv": csv("Sensitivity coefficients, one row per output and rate constant"),
     "/api/uncertainty": {
@@ -487,6 +584,7 @@ export const openApiDocument = {
     },
     schemas: {
       ...profileSchemas,
+      ...runSchemas,
       Error: error,
       Diagnostic: {
         type: "object",
