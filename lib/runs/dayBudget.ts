@@ -7,7 +7,8 @@
  * (lib/analysis `findPathways`). The analysis runs on the day-mean rates and
  * number densities (lifetimes); the amounts it returns are multiplied by the
  * day's length. The budget is checked against the Ox change of the
- * integrated state (`closure`). Units: cm⁻³ per day.
+ * integrated state less what compression along a trajectory changed
+ * (`closure`). Units: cm⁻³ per day.
  */
 import { analyseCycles, oxWeights } from "../analysis";
 import type { CompiledMechanism } from "../mechanism/types";
@@ -33,6 +34,8 @@ export interface DayBudgetInput {
   /** day-mean number densities and reaction rates by mechanism index */
   meanState_cm3: number[];
   meanRates_cm3s: number[];
+  /** ∫ x·d ln[M]/dt dt over the day by mechanism index, cm⁻³: the change by compression, not chemistry (0 at a fixed place) */
+  compression_cm3?: ArrayLike<number>;
   /** species held for the run (not branching points) */
   heldSpecies: string[];
   options: Required<Pick<RunOptions, "fminRelative" | "oxDefinition">>;
@@ -64,7 +67,8 @@ export function dayBudget(mech: CompiledMechanism, input: DayBudgetInput): RunDa
   const { weights } = oxWeights(mech, input.options.oxDefinition);
   let oxChange = 0;
   for (let s = 0; s < weights.length; s++)
-    if (weights[s]) oxChange += weights[s] * (input.end_cm3[s] - input.start_cm3[s]);
+    if (weights[s])
+      oxChange += weights[s] * (input.end_cm3[s] - input.start_cm3[s] - (input.compression_cm3?.[s] ?? 0));
   const production = report.budget.production_cm3s * dt;
   const loss = report.budget.loss_cm3s * dt;
   const closure = loss > 0 ? Math.abs(oxChange - (production - loss)) / loss : 0;
@@ -78,7 +82,8 @@ export function dayBudget(mech: CompiledMechanism, input: DayBudgetInput): RunDa
     o3Start_cm3: o3Start,
     o3End_cm3: o3End,
     o3Change_ppbv: 1e9 * (o3End / input.endM_cm3 - o3Start / input.startM_cm3),
-    o3Change_percent: o3Start > 0 ? (100 * (o3End - o3Start)) / o3Start : 0,
+    o3Change_percent:
+      o3Start > 0 ? (100 * (o3End / input.endM_cm3 - o3Start / input.startM_cm3)) / (o3Start / input.startM_cm3) : 0,
     oxProduction_cm3: production,
     oxLoss_cm3: loss,
     oxChange_cm3: oxChange,
@@ -90,6 +95,8 @@ export function dayBudget(mech: CompiledMechanism, input: DayBudgetInput): RunDa
       family: c.family,
       oxLoss_cm3: c.oxLoss_cm3s * dt,
     })),
+    meanState_cm3: input.meanState_cm3,
+    meanRates_cm3s: input.meanRates_cm3s,
     poolTotals_cm3: poolTotalsOf(mech, input.end_cm3),
     warnings,
   };

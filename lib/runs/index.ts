@@ -11,5 +11,5 @@ export { compactRun, runDailyCsv, runFamilies, runHoursCsv, runRatesCsv } from "
 export { RUN_IN_THREAD_DEFAULTS, runInThread } from "./runInThread";
 export { type RunChartSeries, type RunLine, runChartSeries } from "./runSeries";
 export { type RunDaysTask, type RunStartTask, runDaysTask, runStartTask, type StartSpec } from "./runTasks";
-export { periodicStart, type StartState } from "./startState";
+export { periodicStart, START_DEFAULTS, type StartState } from "./startState";
 export type * from "./types";

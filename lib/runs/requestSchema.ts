@@ -18,7 +18,7 @@ const finite = z.number().refine(Number.isFinite, "expected a finite number");
 const id = z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected an id");
 
 export const runStartSchema = z.discriminatedUnion("kind", [
-  z.object({ kind: z.literal("periodic") }).strict(),
+  z.object({ kind: z.literal("periodic"), ozone: z.enum(["held", "solved"]).optional() }).strict(),
   z.object({ kind: z.literal("analysis"), analysisId: id }).strict(),
   z
     .object({
@@ -27,6 +27,7 @@ export const runStartSchema = z.discriminatedUnion("kind", [
         z.string(),
         finite.refine((v) => v >= 0 && v <= 1, "expected a mixing ratio between 0 and 1"),
       ),
+      ozone: z.enum(["held", "solved"]).optional(),
     })
     .strict(),
 ]);

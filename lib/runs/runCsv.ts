@@ -81,6 +81,11 @@ export function compactRun(r: RunResult): RunResult {
   const h = r.hours;
   return {
     ...r,
+    daily: r.daily.map((d) => ({
+      ...d,
+      meanState_cm3: d.meanState_cm3.map(round),
+      meanRates_cm3s: d.meanRates_cm3s.map(round),
+    })),
     hours: {
       t_h: h.t_h.map(round),
       T_K: h.T_K.map(round),

@@ -12,8 +12,8 @@ import type { JCache, RunPlan, RunSegment } from "./types";
 
 /** How the start state is made (a stored analysis arrives as its state). */
 export type StartSpec =
-  | { kind: "periodic" }
-  | { kind: "amounts"; mixingRatios: Record<string, number> }
+  | { kind: "periodic"; ozone?: "held" | "solved" }
+  | { kind: "amounts"; mixingRatios: Record<string, number>; ozone?: "held" | "solved" }
   /** a state by mechanism index at air density M_cm3, scaled to the first condition's [M] */
   | { kind: "state"; state_cm3: number[]; M_cm3: number };
 
@@ -32,8 +32,8 @@ export interface RunDaysTask {
 
 export function runStartTask(mech: CompiledMechanism, task: RunStartTask): StartState {
   const s = task.start;
-  if (s.kind === "periodic") return periodicStart(mech, task.plan);
-  if (s.kind === "amounts") return periodicStart(mech, task.plan, s.mixingRatios);
+  if (s.kind === "periodic") return periodicStart(mech, task.plan, {}, s.ozone);
+  if (s.kind === "amounts") return periodicStart(mech, task.plan, s.mixingRatios, s.ozone);
   if (s.state_cm3.length !== mech.species.length || !(s.M_cm3 > 0))
     throw new InputError(
       "start",

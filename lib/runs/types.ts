@@ -27,12 +27,15 @@ export interface TrajectoryPoint {
 
 /** Where a run's chemistry starts. */
 export type RunStart =
-  /** the 24-hour periodic solution at the first condition, its state at local midnight (default) */
-  | { kind: "periodic" }
+  /**
+   * the 24-hour periodic solution at the first condition, its state at local midnight (default); O3 held at the
+   * condition's amount (the climatology unless given) while it is found (default "held"), or solved with the rest
+   */
+  | { kind: "periodic"; ozone?: "held" | "solved" }
   /** a stored analysis: its state (at its local time in the 24-hour mode), scaled to the first condition's [M] */
   | { kind: "analysis"; analysisId: string }
   /** mixing ratios (mol/mol) by species id over the 24-hour periodic state at midnight */
-  | { kind: "amounts"; mixingRatios: Record<string, number> };
+  | { kind: "amounts"; mixingRatios: Record<string, number>; ozone?: "held" | "solved" };
 
 export interface RunOptions {
   /** pathway significance threshold as a fraction of the gross Ox destruction; default 1e-4 */
@@ -82,13 +85,13 @@ export interface RunDay {
   o3End_cm3: number;
   /** change of the O3 mixing ratio over the day, ppbv per day */
   o3Change_ppbv: number;
-  /** change of O3 relative to its start, % per day */
+  /** change of the O3 mixing ratio relative to its start, % per day */
   o3Change_percent: number;
   /** Ox produced over the day by the pathways (and the deleted share), cm⁻³ per day */
   oxProduction_cm3: number;
   /** Ox destroyed over the day, cm⁻³ per day */
   oxLoss_cm3: number;
-  /** Ox change from the integrated state, cm⁻³ per day */
+  /** Ox change by chemistry from the integrated state (what compression along a trajectory changed left out), cm⁻³ per day */
   oxChange_cm3: number;
   /** |Ox change − (production − loss)| / loss: how well the day's budget closes */
   closure: number;
@@ -96,6 +99,10 @@ export interface RunDay {
   byFamily: { family: string; oxLoss_cm3: number }[];
   /** the largest catalytic cycles of the day, cm⁻³ per day */
   cycles: { id: string; netEquation: string; family: string; oxLoss_cm3: number }[];
+  /** the day-mean number densities by mechanism index, cm⁻³ (the lifetimes of the pathway analysis) */
+  meanState_cm3: number[];
+  /** the day's integrated rate of every reaction over its length, molecules cm⁻³ s⁻¹ (the rates the analysis splits) */
+  meanRates_cm3s: number[];
   /** pool totals at the day's end, cm⁻³ (the chemistry changes them only through held sources) */
   poolTotals_cm3: Record<string, number>;
   warnings: string[];
