@@ -9,7 +9,7 @@
  * resolved by lib/engine's `resolveCondition`, so every condition field the
  * engine knows flows through unchanged. Units: h, s, K, hPa, cm⁻³, degrees.
  */
-import { airNumberDensity_cm3, dayOfYear, solarZenithAngle } from "../atmosphere";
+import { airNumberDensity_cm3, BOLTZMANN_J_K, dayOfYear, solarZenithAngle } from "../atmosphere";
 import { jAt, resolveCondition, solveConditionsOf, yearOf } from "../engine/resolve-condition";
 import type { ConditionInput, ResolvedCondition } from "../engine/types";
 import { InputError } from "../errors";
@@ -37,6 +37,8 @@ export interface RunConditions {
   /** the resolved condition at t = 0 */
   first: ResolvedCondition;
   at(t_h: number): RunConditionAt;
+  /** the resolved condition in force at t_h with that time's T, p, [M], latitude, date, local time, sun and J */
+  resolvedAt(t_h: number): ResolvedCondition;
 }
 
 /** The calendar date `days` after "YYYY-MM-DD". */
@@ -150,5 +152,23 @@ export function runConditions(mech: CompiledMechanism, plan: RunPlan, jCache: JC
     return { cond, zenith_deg };
   };
 
-  return { first, at };
+  const resolvedAt = (t_h: number): ResolvedCondition => {
+    const { cond, zenith_deg } = at(t_h);
+    const row = rowAt(rowIndex(t_h));
+    const day = Math.floor(t_h / 24 + 1e-9);
+    const date = plan.options.sunFollowsDate ? dateAfter(first.date, day) : first.date;
+    return {
+      ...row,
+      T_K: cond.T_K,
+      M_cm3: cond.M_cm3,
+      p_hPa: (cond.M_cm3 * 1e6 * BOLTZMANN_J_K * cond.T_K) / 100,
+      date,
+      dayOfYear: dayOfYear(date),
+      localSolarTime_h: t_h - 24 * day,
+      zenith_deg,
+      J_s: { ...cond.J_s },
+    };
+  };
+
+  return { first, at, resolvedAt };
 }

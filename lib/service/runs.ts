@@ -17,6 +17,7 @@ import {
   assembleRun,
   compactRun,
   DEMO_RUNS,
+  hourSnapshot,
   type JCache,
   type PlannedRun,
   parseRunRequest,
@@ -238,4 +239,29 @@ export async function runExport(
 /** The invented demo runs offered on the page. */
 export function runCatalogue() {
   return { demos: DEMO_RUNS.map((d) => ({ id: d.id, title: d.title, note: d.note, request: d.request })) };
+}
+
+/** Hour `hour` of a stored run as a stored-analysis view for the explorer (not a steady state). */
+export async function runHourAnalysis(id: string, hour: number) {
+  const record = await getRunRecord(id);
+  const request = record.body.request;
+  const mech = compileSource(await mechanismSource(request.mechanismId));
+  const result = hourSnapshot(mech, request, record.body.result, hour);
+  const condition = {
+    ...request.condition,
+    T_K: result.condition.T_K,
+    p_hPa: result.condition.p_hPa,
+    latitude_deg: result.condition.latitude_deg,
+    date: result.condition.date,
+    localSolarTime_h: result.condition.localSolarTime_h,
+    altitude_km: result.condition.altitude_km,
+  };
+  return {
+    id: `${id}-h${hour}`,
+    createdAt: record.createdAt,
+    engineVersion: record.engineVersion,
+    currentEngineVersion: ENGINE_VERSION,
+    request: { mechanismId: request.mechanismId, condition },
+    result,
+  };
 }
