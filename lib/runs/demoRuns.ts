@@ -1,6 +1,6 @@
 /**
  * Invented demonstration runs (not measurements, not a model of any real
- * event). The cold-vortex parcel: a parcel near 18.5 km (55 hPa) at
+ * event). The cold-vortex parcel: a parcel at 55 hPa (about 20 km) at
  * 66–72°N in late winter, started with most of its chlorine activated
  * (as Cl2 after the winter's cloud chemistry, which the reference mechanism
  * does not itself contain), 10 days cold (192 K), then warming to 212 K over
@@ -43,7 +43,7 @@ export const DEMO_RUNS: readonly DemoRun[] = [
     request: {
       mechanismId: "reference",
       title: "Invented cold-vortex parcel (invented demo data)",
-      condition: { altitude_km: 18.5, date: "2027-02-20", latitude_deg: 69 },
+      condition: { altitude_km: 20, date: "2027-02-20", latitude_deg: 69 },
       days: VORTEX_DAYS,
       start: {
         kind: "amounts",

@@ -52,7 +52,8 @@ export function rowInput(base: ConditionInput, p: TrajectoryPoint): ConditionInp
   return {
     ...base,
     ...(p.extra ?? {}),
-    altitude_km: p.altitude_km ?? pressureAltitude_km(p.p_hPa),
+    // to the metre: the altitude only sets the light and the climatology
+    altitude_km: p.altitude_km ?? Math.round(1000 * pressureAltitude_km(p.p_hPa)) / 1000,
     T_K: p.T_K,
     p_hPa: p.p_hPa,
     latitude_deg: p.latitude_deg,

@@ -241,27 +241,42 @@ export function runCatalogue() {
   return { demos: DEMO_RUNS.map((d) => ({ id: d.id, title: d.title, note: d.note, request: d.request })) };
 }
 
-/** Hour `hour` of a stored run as a stored-analysis view for the explorer (not a steady state). */
-export async function runHourAnalysis(id: string, hour: number) {
+/**
+ * Hour `hour` of a stored run as a stored analysis (status "instant", not a steady state), so that the explorer,
+ * its permalink and its CSV exports work on it as on any analysis. Its id is the run's id and the hour, so
+ * opening the same hour again finds the same record.
+ */
+export async function storeRunHour(id: string, hour: number): Promise<string> {
+  const analysisId = `${id}-h${hour}`;
+  if (!ID_PATTERN.test(id) || !Number.isInteger(hour)) throw notFound("run hour", analysisId);
+  if (await getStore().getAnalysis(analysisId)) return analysisId;
   const record = await getRunRecord(id);
   const request = record.body.request;
   const mech = compileSource(await mechanismSource(request.mechanismId));
   const result = hourSnapshot(mech, request, record.body.result, hour);
+  const c = result.condition;
   const condition = {
     ...request.condition,
-    T_K: result.condition.T_K,
-    p_hPa: result.condition.p_hPa,
-    latitude_deg: result.condition.latitude_deg,
-    date: result.condition.date,
-    localSolarTime_h: result.condition.localSolarTime_h,
-    altitude_km: result.condition.altitude_km,
+    altitude_km: c.altitude_km,
+    T_K: c.T_K,
+    p_hPa: c.p_hPa,
+    latitude_deg: c.latitude_deg,
+    date: c.date,
+    localSolarTime_h: c.localSolarTime_h,
+    ozone: "solved" as const,
   };
-  return {
-    id: `${id}-h${hour}`,
-    createdAt: record.createdAt,
-    engineVersion: record.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    request: { mechanismId: request.mechanismId, condition },
-    result,
-  };
+  try {
+    await getStore().putAnalysis({
+      id: analysisId,
+      mechanismId: request.mechanismId,
+      engineVersion: record.engineVersion,
+      request: { mechanismId: request.mechanismId, condition },
+      result,
+      createdAt: new Date().toISOString(),
+    });
+  } catch (e) {
+    // opened twice at once: the other request stored it
+    if (!(await getStore().getAnalysis(analysisId))) throw e;
+  }
+  return analysisId;
 }

@@ -47,8 +47,14 @@ test.describe("run routes", () => {
 
     const page = await request.get(`/runs/${done.resultId}`);
     expect(page.status()).toBe(200);
+    // an hour opens as a stored analysis of that instant (not a steady state), with its own exports
     const hourPage = await request.get(`/runs/${done.resultId}/at/12`);
     expect(hourPage.status()).toBe(200);
+    expect(hourPage.url()).toContain(`/a/${done.resultId}-h12`);
+    const hour = await (await request.get(`/api/analyses/${done.resultId}-h12`)).json();
+    expect(hour.result.steadyState.status).toBe("instant");
+    expect(hour.result.steadyState.rate_cm3s).toEqual(result.hours.rate_cm3s[12]);
+    expect((await request.get(`/api/analyses/${done.resultId}-h12/rates.csv`)).status()).toBe(200);
     expect((await request.get(`/runs/${done.resultId}/at/999`)).status()).toBe(404);
   });
 

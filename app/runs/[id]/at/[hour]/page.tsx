@@ -1,44 +1,16 @@
-import type { Metadata } from "next";
-import { notFound } from "next/navigation";
-import { Explorer } from "@/components/explorer";
-import { listMechanisms, mechanismDetail } from "@/lib/service/mechanisms";
-import { runHourAnalysis } from "@/lib/service/runs";
-import { parseExplorerQuery } from "@/lib/viz/explorerQuery";
-import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
+import { notFound, redirect } from "next/navigation";
+import { storeRunHour } from "@/lib/service/runs";
 
 export const dynamic = "force-dynamic";
-export const metadata: Metadata = { title: "A run at one hour · Ozone Loss Cycles" };
 
-type Params = Promise<{ id: string; hour: string }>;
-type Search = Promise<Record<string, string | string[] | undefined>>;
-
-/** The explorer at one hour of a stored run: that instant's rates and network, not a steady state. */
-export default async function RunHourPage({ params, searchParams }: { params: Params; searchParams: Search }) {
+/** One hour of a stored run opens in the explorer as a stored analysis of that instant (not a steady state). */
+export default async function RunHourPage({ params }: { params: Promise<{ id: string; hour: string }> }) {
   const { id, hour } = await params;
-  let stored: Awaited<ReturnType<typeof runHourAnalysis>>;
+  let analysisId: string;
   try {
-    stored = await runHourAnalysis(id, Number(hour));
+    analysisId = await storeRunHour(id, Number(hour));
   } catch {
     notFound();
   }
-  const view = parseExplorerQuery(await searchParams).view;
-  const mechanismId = stored.request.mechanismId;
-  let mechanisms: MechanismSummary[] = [];
-  let mechanism: MechanismView | null = null;
-  try {
-    mechanisms = (await listMechanisms()).mechanisms;
-    mechanism = { ...(await mechanismDetail(mechanismId)), text: undefined } as MechanismView;
-  } catch {
-    mechanism = null;
-  }
-  return (
-    <Explorer
-      mechanisms={mechanisms}
-      initialMechanism={mechanism}
-      mechanismId={mechanismId}
-      condition={stored.request.condition}
-      view={view}
-      stored={stored}
-    />
-  );
+  redirect(`/a/${analysisId}`);
 }
