@@ -87,32 +87,10 @@ export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title
               ))}
             </select>
           </label>
-          <label className="flex flex-col">
-            Altitude (km)
-            <input
-              className={field}
-              inputMode="decimal"
-              value={altitude}
-              onChange={(e) => setAltitude(e.target.value)}
-            />
-          </label>
-          <label className="flex flex-col">
-            Latitude (°N)
-            <input
-              className={field}
-              inputMode="decimal"
-              value={latitude}
-              onChange={(e) => setLatitude(e.target.value)}
-            />
-          </label>
-          <label className="flex flex-col">
-            Start date
-            <input className={field} value={date} onChange={(e) => setDate(e.target.value)} />
-          </label>
-          <label className="flex flex-col">
-            Days (1–60)
-            <input className={field} inputMode="numeric" value={days} onChange={(e) => setDays(e.target.value)} />
-          </label>
+          <TextField label="Altitude (km)" value={altitude} onChange={setAltitude} />
+          <TextField label="Latitude (°N)" value={latitude} onChange={setLatitude} />
+          <TextField label="Start date" value={date} onChange={setDate} />
+          <TextField label="Days (1–60)" value={days} onChange={setDays} />
         </div>
         <label className="flex flex-col text-[13px]">
           Trajectory CSV (optional; leave empty for a fixed place)
@@ -138,5 +116,14 @@ export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title
       ) : null}
       {jobId ? <JobProgress jobId={jobId} what="Run" onEnd={onEnd} unit="days" /> : null}
     </div>
+  );
+}
+
+function TextField({ label, value, onChange }: { label: string; value: string; onChange(v: string): void }) {
+  return (
+    <label className="flex flex-col">
+      {label}
+      <input className={field} value={value} onChange={(e) => onChange(e.target.value)} />
+    </label>
   );
 }

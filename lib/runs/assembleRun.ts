@@ -5,6 +5,7 @@
  */
 import type { CompiledMechanism } from "../mechanism/types";
 import { poolTotalsOf } from "./dayBudget";
+import { emptyHours } from "./integrateDays";
 import type { RunPlan, RunResult, RunSegment } from "./types";
 
 export interface RunMeta {
@@ -16,14 +17,7 @@ export interface RunMeta {
 }
 
 export function assembleRun(mech: CompiledMechanism, plan: RunPlan, segments: RunSegment[], meta: RunMeta): RunResult {
-  const hours: RunResult["hours"] = {
-    t_h: [],
-    T_K: [],
-    M_cm3: [],
-    zenith_deg: [],
-    numberDensity_cm3: [],
-    rate_cm3s: [],
-  };
+  const hours = emptyHours();
   const daily: RunResult["daily"] = [];
   const warnings = [...meta.warnings];
   let status: RunResult["status"] = "ok";

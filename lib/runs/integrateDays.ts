@@ -64,7 +64,7 @@ function withCompression(ode: OdeSystem, g: (t: number) => number): OdeSystem {
   };
 }
 
-const emptyHours = (): RunHours => ({
+export const emptyHours = (): RunHours => ({
   t_h: [],
   T_K: [],
   M_cm3: [],

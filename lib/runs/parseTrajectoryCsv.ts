@@ -8,6 +8,7 @@
  * file) and the column, e.g. `trajectory.csv row 7, column "T_K"`.
  */
 import { InputError } from "../errors";
+import { skipCommentLine } from "../profiles/skipCommentLine";
 import { splitCsvLine } from "../profiles/splitCsvLine";
 import type { TrajectoryPoint } from "./types";
 
@@ -52,12 +53,7 @@ export function parseTrajectoryCsv(text: string, options: ParseTrajectoryOptions
   for (let li = 0; li < lines.length; li++) {
     const row = li + 1;
     const line = lines[li];
-    if (line.trim() === "") continue;
-    if (line.trimStart().startsWith("#")) {
-      const m = /^\s*#\s*([A-Za-z][\w-]*)\s*:\s*(.*)$/.exec(line);
-      if (m && !header) meta[m[1].toLowerCase()] = m[2].trim();
-      continue;
-    }
+    if (skipCommentLine(line, meta, !header)) continue;
     const cells = splitCsvLine(line);
     if (!header) {
       header = cells;

@@ -73,6 +73,24 @@ const profileCsv = (what: string, kind: string) => ({
 
 const jobId = { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{16}$" } };
 
+/** GET {base}/{id} (the record) and GET {base}/{id}.json (its download). */
+const recordPaths = (base: string, record: string, what: string) => ({
+  [`${base}/{id}`]: {
+    get: {
+      summary: record,
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  [`${base}/{id}.json`]: {
+    get: {
+      summary: `The full stored ${what} as a JSON download`,
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+});
+
 const profilePaths = {
   "/api/profiles": {
     get: {
@@ -89,21 +107,11 @@ const profilePaths = {
       responses: { ...job202, ...errors(400, 404, 413) },
     },
   },
-  "/api/profiles/{id}": {
-    get: {
-      summary:
-        "A stored sweep: { id, createdAt, engineVersion, body: { request, profile, result } }; failed levels carry status and message",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
-  "/api/profiles/{id}.json": {
-    get: {
-      summary: "The full stored sweep as a JSON download",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
+  ...recordPaths(
+    "/api/profiles",
+    "A stored sweep: { id, createdAt, engineVersion, body: { request, profile, result } }; failed levels carry status and message",
+    "sweep",
+  ),
   "/api/profiles/{id}/levels.csv": profileCsv(
     "Condition, status, Ox production and loss, and loss and fraction by family at every level",
     "sweep",
@@ -121,20 +129,11 @@ const profilePaths = {
       responses: { ...job202, ...errors(400, 404, 413) },
     },
   },
-  "/api/comparisons/{id}": {
-    get: {
-      summary: "A stored comparison: { id, createdAt, engineVersion, body: { request, result } }",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
-  "/api/comparisons/{id}.json": {
-    get: {
-      summary: "The full stored comparison as a JSON download",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
+  ...recordPaths(
+    "/api/comparisons",
+    "A stored comparison: { id, createdAt, engineVersion, body: { request, result } }",
+    "comparison",
+  ),
   "/api/comparisons/{id}/comparison.csv": profileCsv(
     "A, B and B − A at every altitude, by family, with the cycles explaining B − A",
     "comparison",
@@ -187,21 +186,11 @@ const runPaths = {
       responses: { ...job202, ...errors(400, 404, 413) },
     },
   },
-  "/api/runs/{id}": {
-    get: {
-      summary:
-        "A stored run: { id, createdAt, engineVersion, body: { request, result } }; a failed integration has status failed, failedAt_h and the hours up to then",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
-  "/api/runs/{id}.json": {
-    get: {
-      summary: "The full stored run as a JSON download",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
+  ...recordPaths(
+    "/api/runs",
+    "A stored run: { id, createdAt, engineVersion, body: { request, result } }; a failed integration has status failed, failedAt_h and the hours up to then",
+    "run",
+  ),
   "/api/runs/{id}/hours.csv": runCsv("The hourly state (T, [M], zenith angle, O3 in ppbv, every number density)"),
   "/api/runs/{id}/rates.csv": runCsv("The hourly rate of every reaction"),
   "/api/runs/{id}/daily.csv": runCsv("Each day's O3 change, Ox budget and closure, loss by family and pool totals"),
