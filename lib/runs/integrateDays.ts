@@ -262,7 +262,7 @@ export function integrateDays(mech: CompiledMechanism, plan: RunPlan, span: DayS
     hours,
     days,
     final_cm3: fullState(y, t0 + days.length * DAY_s),
-    jCache,
+    jCache: conditions.cacheFrom((t0 + days.length * DAY_s) / HOUR_s),
     steps,
   };
 }

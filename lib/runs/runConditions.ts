@@ -39,6 +39,8 @@ export interface RunConditions {
   at(t_h: number): RunConditionAt;
   /** the resolved condition in force at t_h with that time's T, p, [M], latitude, date, local time, sun and J */
   resolvedAt(t_h: number): ResolvedCondition;
+  /** the photolysis frequencies still needed from t_h on (a trajectory's earlier rows dropped) */
+  cacheFrom(t_h: number): JCache;
 }
 
 /** The calendar date `days` after "YYYY-MM-DD". */
@@ -171,5 +173,10 @@ export function runConditions(mech: CompiledMechanism, plan: RunPlan, jCache: JC
     };
   };
 
-  return { first, at, resolvedAt };
+  const cacheFrom = (t_h: number): JCache => {
+    const row = rowIndex(t_h);
+    return Object.fromEntries(Object.entries(jCache).filter(([key]) => Number(key.split("|")[0]) >= row));
+  };
+
+  return { first, at, resolvedAt, cacheFrom };
 }
