@@ -74,7 +74,7 @@ export function dayBudget(mech: CompiledMechanism, input: DayBudgetInput): RunDa
   const closure = loss > 0 ? Math.abs(oxChange - (production - loss)) / loss : 0;
   const o3Start = o3 === undefined ? 0 : input.start_cm3[o3];
   const o3End = o3 === undefined ? 0 : input.end_cm3[o3];
-  const warnings = [...report.warnings];
+  const warnings = report.warnings.map((w) => `day ${input.day}: ${w}`);
   if (closure > DAY_BUDGET_DEFAULTS.closureWarning)
     warnings.push(`day ${input.day}: the Ox budget closes to ${(100 * closure).toFixed(2)} % only`);
   return {
