@@ -43,7 +43,7 @@ describe("the ROS3 integrator of a run", () => {
     expectClose(res.y[0] + res.y[1] + res.y[2], A0, { rel: 1e-12 }, "A + B + C (identity)");
   });
 
-  it("relaxes the Chapman system at 40 km, sun fixed at 30°, with τ = [Ox]∞/(2P) to 5 % (Chapman 1930)", () => {
+  it("relaxes the Chapman system at 40 km, sun fixed at 30°, with τ = [Ox]∞/(2P) to 1 % (Chapman 1930)", () => {
     const mech = loadBuiltinMechanism("oxygen").mechanism;
     const condition = { altitude_km: 40, latitude_deg: 45, date: "2026-03-20", zenith_deg: 30 };
     const base = { condition, days: 8, options: RUN_DEFAULTS };
@@ -70,6 +70,7 @@ describe("the ROS3 integrator of a run", () => {
     const h2 = Math.min(run.hours.t_h.length - 1, h1 + Math.round(2 * tau_h));
     const fitted_h = (h2 - h1) / Math.log(rho(h1) / rho(h2));
     expect(tau_h).toBeGreaterThan(10);
-    expectClose(fitted_h, tau_h, { rel: 0.05 }, "relaxation time, h");
+    // measured: τ = 12.30 h, fitted 12.34 h; O and O(1D) in Ox and the hourly sampling make up the rest
+    expectClose(fitted_h, tau_h, { rel: 0.01 }, "relaxation time, h");
   });
 });
