@@ -73,6 +73,16 @@ const profileCsv = (what: string, kind: string) => ({
 
 const jobId = { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{16}$" } };
 
+/** POST that queues a job with a JSON body of `schema`: 202 with the job to poll. */
+const jobPost = (summary: string, schema: string) => ({
+  summary,
+  requestBody: {
+    required: true,
+    content: { "application/json": { schema: { $ref: `#/components/schemas/${schema}` } } },
+  },
+  responses: { ...job202, ...errors(400, 404, 413) },
+});
+
 /** GET {base}/{id} (the record) and GET {base}/{id}.json (its download). */
 const recordPaths = (base: string, record: string, what: string) => ({
   [`${base}/{id}`]: {
@@ -98,14 +108,10 @@ const profilePaths = {
         "The profiles offered without an upload: the default (standard atmosphere, default climatology) and the invented demo profiles, each with its CSV",
       responses: { 200: { description: "{ profiles: [{ id, title, source, demo, note, levels, range_km, csv }] }" } },
     },
-    post: {
-      summary: "Start a profile sweep: steady state and cycle analysis at every level, warm-started from the neighbour",
-      requestBody: {
-        required: true,
-        content: { "application/json": { schema: { $ref: "#/components/schemas/SweepRequest" } } },
-      },
-      responses: { ...job202, ...errors(400, 404, 413) },
-    },
+    post: jobPost(
+      "Start a profile sweep: steady state and cycle analysis at every level, warm-started from the neighbour",
+      "SweepRequest",
+    ),
   },
   ...recordPaths(
     "/api/profiles",
@@ -119,15 +125,10 @@ const profilePaths = {
   "/api/profiles/{id}/cycles.csv": profileCsv("Every cycle at every level", "sweep"),
   "/api/profiles/{id}/profile.csv": profileCsv("The input profile in the upload format", "sweep"),
   "/api/comparisons": {
-    post: {
-      summary:
-        "Start a comparison of two sweeps (stored ones by id, or sweeps to run): Ox loss and its family split for A and B, B − A, and the cycles explaining it",
-      requestBody: {
-        required: true,
-        content: { "application/json": { schema: { $ref: "#/components/schemas/ComparisonRequest" } } },
-      },
-      responses: { ...job202, ...errors(400, 404, 413) },
-    },
+    post: jobPost(
+      "Start a comparison of two sweeps (stored ones by id, or sweeps to run): Ox loss and its family split for A and B, B − A, and the cycles explaining it",
+      "ComparisonRequest",
+    ),
   },
   ...recordPaths(
     "/api/comparisons",
@@ -176,15 +177,10 @@ const runPaths = {
       summary: "The invented demo runs offered on the runs page, each with its request",
       responses: { 200: { description: "{ demos: [{ id, title, note, request }] }" } },
     },
-    post: {
-      summary:
-        "Start a run: the mechanism integrated over 1–60 days at a fixed place or along a trajectory, with hourly output and each day's Ox loss by family and cycle",
-      requestBody: {
-        required: true,
-        content: { "application/json": { schema: { $ref: "#/components/schemas/RunRequest" } } },
-      },
-      responses: { ...job202, ...errors(400, 404, 413) },
-    },
+    post: jobPost(
+      "Start a run: the mechanism integrated over 1–60 days at a fixed place or along a trajectory, with hourly output and each day's Ox loss by family and cycle",
+      "RunRequest",
+    ),
   },
   ...recordPaths(
     "/api/runs",
