@@ -16,6 +16,8 @@ const LAYERS = [
   ["viz", "^lib/viz/"],
   ["profiles", "^lib/profiles/"],
   ["assessment", "^lib/assessment/"],
+  // runs over days (at a place or along a trajectory), their daily budgets
+  ["runs", "^lib/runs/"],
   // the worker threads run every kind of engine task (profile levels, Monte Carlo samples)
   ["engine-workers", "^lib/engine/(jobs|pool|worker-entry)\\.ts$"],
   ["service", "^lib/service/"],

@@ -3,6 +3,7 @@ import Link from "next/link";
 const LINKS = [
   { href: "/explore", label: "Explorer" },
   { href: "/profiles", label: "Profiles" },
+  { href: "/runs", label: "Runs" },
   { href: "/compare", label: "Compare" },
   { href: "/assess", label: "Assessments" },
 ] as const;

@@ -281,7 +281,15 @@ export function Explorer(props: Props) {
                   {(mechError ?? bannerError)!.message}
                 </div>
               ) : null}
-              {ss && ss.status !== "converged" ? (
+              {ss && ss.status === "instant" ? (
+                <div
+                  data-testid="instant-notice"
+                  className="pointer-events-auto max-w-[560px] rounded border border-sky-300 bg-sky-50 px-3 py-1.5 text-[12px] text-sky-950 shadow-sm"
+                >
+                  <b className="font-semibold">An instant of a run, not a steady state.</b> {ss.message}
+                </div>
+              ) : null}
+              {ss && ss.status !== "converged" && ss.status !== "instant" ? (
                 <div
                   role="alert"
                   data-testid="steady-state-warning"

@@ -18,7 +18,18 @@ interface JobView {
 
 export const POLL_MS = 400;
 
-export function JobProgress({ jobId, what, onEnd }: { jobId: string; what: string; onEnd?(state: string): void }) {
+export function JobProgress({
+  jobId,
+  what,
+  onEnd,
+  unit = "levels",
+}: {
+  jobId: string;
+  what: string;
+  onEnd?(state: string): void;
+  /** what `done` and `total` count; default "levels" */
+  unit?: string;
+}) {
   const router = useRouter();
   const [job, setJob] = useState<JobView | null>(null);
   const [netError, setNetError] = useState<string | null>(null);
@@ -67,7 +78,7 @@ export function JobProgress({ jobId, what, onEnd }: { jobId: string; what: strin
           {what}: {job ? job.state : "starting"}
           {job?.stage && job.state === "running" ? ` — ${job.stage}` : ""}
         </span>
-        <span className="tabular-nums text-stone-600">{job ? `${job.done} of ${job.total} levels` : ""}</span>
+        <span className="tabular-nums text-stone-600">{job ? `${job.done} of ${job.total} ${unit}` : ""}</span>
       </div>
       <div
         role="progressbar"

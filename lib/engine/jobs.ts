@@ -4,6 +4,9 @@
  */
 import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
+import { type RunDaysTask, type RunStartTask, runDaysTask, runStartTask } from "../runs/runTasks";
+import type { StartState } from "../runs/startState";
+import type { RunSegment } from "../runs/types";
 import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
 import type { SampleBatchResult } from "../uncertainty/types";
 import { compileSource, type MechanismSource } from "./mechanism-source";
@@ -15,12 +18,18 @@ export type EngineJob =
   /** neighbouring levels of a profile sweep, each warm-started from the one before (lib/profiles) */
   | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch }
   /** a batch of Monte Carlo samples around a central steady state (lib/uncertainty) */
-  | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch };
+  | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch }
+  /** the state a run starts from (lib/runs) */
+  | { kind: "run-start"; mechanism: MechanismSource; task: RunStartTask }
+  /** a span of days of a run from a state (lib/runs) */
+  | { kind: "run-days"; mechanism: MechanismSource; task: RunDaysTask };
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
   | { kind: "profile-levels"; result: LevelBatchResult }
-  | { kind: "uncertainty-samples"; result: SampleBatchResult };
+  | { kind: "uncertainty-samples"; result: SampleBatchResult }
+  | { kind: "run-start"; result: StartState }
+  | { kind: "run-days"; result: RunSegment };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -44,6 +53,10 @@ export function runJob(job: EngineJob): EngineJobResult {
       const mech = compileSource(job.mechanism);
       return { kind: "uncertainty-samples", result: runSampleBatch(mech, job.batch) };
     }
+    case "run-start":
+      return { kind: "run-start", result: runStartTask(compileSource(job.mechanism), job.task) };
+    case "run-days":
+      return { kind: "run-days", result: runDaysTask(compileSource(job.mechanism), job.task) };
     default:
       throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);
   }

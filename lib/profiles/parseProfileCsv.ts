@@ -7,6 +7,7 @@
  */
 import { InputError } from "../errors";
 import { parseColumnHeader } from "./parseColumnHeader";
+import { skipCommentLine } from "./skipCommentLine";
 import { splitCsvLine } from "./splitCsvLine";
 import type { Profile, ProfileColumn, ProfileLevel } from "./types";
 import { ALTITUDE_UNITS, airDensityOf_cm3, toHectopascal, toMixingRatio } from "./units";
@@ -35,12 +36,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions = {})
   for (let li = 0; li < lines.length; li++) {
     const row = li + 1;
     const line = lines[li];
-    if (line.trim() === "") continue;
-    if (line.trimStart().startsWith("#")) {
-      const m = /^\s*#\s*([A-Za-z][\w-]*)\s*:\s*(.*)$/.exec(line);
-      if (m && headerRow < 0) meta[m[1].toLowerCase()] = m[2].trim();
-      continue;
-    }
+    if (skipCommentLine(line, meta, headerRow < 0)) continue;
     const cells = splitCsvLine(line);
     if (headerRow < 0) {
       headerRow = row;

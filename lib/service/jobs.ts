@@ -10,6 +10,7 @@ import { createJobBackend } from "../jobs/createJobBackend";
 import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
 import { notFound } from "./http";
 import { comparisonJob, comparisonPath, profilePath, sweepJob, validateComparison, validateSweep } from "./profiles";
+import { RUN_KIND, runJob, runPath, validateRun } from "./runs";
 import { uncertaintyJob } from "./uncertainty";
 
 /** The handler of every job kind (also run by the queue workers). */
@@ -17,6 +18,7 @@ export const JOB_HANDLERS: Record<string, JobHandler<never>> = {
   "profile-sweep": sweepJob as JobHandler<never>,
   comparison: comparisonJob as JobHandler<never>,
   uncertainty: uncertaintyJob as JobHandler<never>,
+  run: runJob as JobHandler<never>,
 };
 
 const KEY = Symbol.for("ozone.jobBackend");
@@ -41,15 +43,24 @@ export interface JobView extends JobStatus {
 export function jobView(s: JobStatus): JobView {
   const view: JobView = { ...s, statusUrl: `/api/jobs/${s.id}` };
   if (s.state === "done" && s.resultId) {
-    view.resultUrl = s.resultKind === "comparison" ? comparisonPath(s.resultId) : profilePath(s.resultId);
-    view.resultApiUrl =
-      s.resultKind === "comparison" ? `/api/comparisons/${s.resultId}` : `/api/profiles/${s.resultId}`;
+    if (s.resultKind === RUN_KIND) {
+      view.resultUrl = runPath(s.resultId);
+      view.resultApiUrl = `/api/runs/${s.resultId}`;
+    } else {
+      view.resultUrl = s.resultKind === "comparison" ? comparisonPath(s.resultId) : profilePath(s.resultId);
+      view.resultApiUrl =
+        s.resultKind === "comparison" ? `/api/comparisons/${s.resultId}` : `/api/profiles/${s.resultId}`;
+    }
   }
   return view;
 }
 
 export async function startSweep(body: unknown): Promise<JobView> {
   return jobView(await jobBackend().submit("profile-sweep", await validateSweep(body)));
+}
+
+export async function startRun(body: unknown): Promise<JobView> {
+  return jobView(await jobBackend().submit("run", await validateRun(body)));
 }
 
 export async function startComparison(body: unknown): Promise<JobView> {

@@ -73,6 +73,34 @@ const profileCsv = (what: string, kind: string) => ({
 
 const jobId = { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{16}$" } };
 
+/** POST that queues a job with a JSON body of `schema`: 202 with the job to poll. */
+const jobPost = (summary: string, schema: string) => ({
+  summary,
+  requestBody: {
+    required: true,
+    content: { "application/json": { schema: { $ref: `#/components/schemas/${schema}` } } },
+  },
+  responses: { ...job202, ...errors(400, 404, 413) },
+});
+
+/** GET {base}/{id} (the record) and GET {base}/{id}.json (its download). */
+const recordPaths = (base: string, record: string, what: string) => ({
+  [`${base}/{id}`]: {
+    get: {
+      summary: record,
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+  [`${base}/{id}.json`]: {
+    get: {
+      summary: `The full stored ${what} as a JSON download`,
+      parameters: [{ $ref: "#/components/parameters/id" }],
+      responses: { 200: { description: "record" }, ...errors(404) },
+    },
+  },
+});
+
 const profilePaths = {
   "/api/profiles": {
     get: {
@@ -80,30 +108,16 @@ const profilePaths = {
         "The profiles offered without an upload: the default (standard atmosphere, default climatology) and the invented demo profiles, each with its CSV",
       responses: { 200: { description: "{ profiles: [{ id, title, source, demo, note, levels, range_km, csv }] }" } },
     },
-    post: {
-      summary: "Start a profile sweep: steady state and cycle analysis at every level, warm-started from the neighbour",
-      requestBody: {
-        required: true,
-        content: { "application/json": { schema: { $ref: "#/components/schemas/SweepRequest" } } },
-      },
-      responses: { ...job202, ...errors(400, 404, 413) },
-    },
+    post: jobPost(
+      "Start a profile sweep: steady state and cycle analysis at every level, warm-started from the neighbour",
+      "SweepRequest",
+    ),
   },
-  "/api/profiles/{id}": {
-    get: {
-      summary:
-        "A stored sweep: { id, createdAt, engineVersion, body: { request, profile, result } }; failed levels carry status and message",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
-  "/api/profiles/{id}.json": {
-    get: {
-      summary: "The full stored sweep as a JSON download",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
+  ...recordPaths(
+    "/api/profiles",
+    "A stored sweep: { id, createdAt, engineVersion, body: { request, profile, result } }; failed levels carry status and message",
+    "sweep",
+  ),
   "/api/profiles/{id}/levels.csv": profileCsv(
     "Condition, status, Ox production and loss, and loss and fraction by family at every level",
     "sweep",
@@ -111,30 +125,16 @@ const profilePaths = {
   "/api/profiles/{id}/cycles.csv": profileCsv("Every cycle at every level", "sweep"),
   "/api/profiles/{id}/profile.csv": profileCsv("The input profile in the upload format", "sweep"),
   "/api/comparisons": {
-    post: {
-      summary:
-        "Start a comparison of two sweeps (stored ones by id, or sweeps to run): Ox loss and its family split for A and B, B − A, and the cycles explaining it",
-      requestBody: {
-        required: true,
-        content: { "application/json": { schema: { $ref: "#/components/schemas/ComparisonRequest" } } },
-      },
-      responses: { ...job202, ...errors(400, 404, 413) },
-    },
+    post: jobPost(
+      "Start a comparison of two sweeps (stored ones by id, or sweeps to run): Ox loss and its family split for A and B, B − A, and the cycles explaining it",
+      "ComparisonRequest",
+    ),
   },
-  "/api/comparisons/{id}": {
-    get: {
-      summary: "A stored comparison: { id, createdAt, engineVersion, body: { request, result } }",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
-  "/api/comparisons/{id}.json": {
-    get: {
-      summary: "The full stored comparison as a JSON download",
-      parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
-    },
-  },
+  ...recordPaths(
+    "/api/comparisons",
+    "A stored comparison: { id, createdAt, engineVersion, body: { request, result } }",
+    "comparison",
+  ),
   "/api/comparisons/{id}/comparison.csv": profileCsv(
     "A, B and B − A at every altitude, by family, with the cycles explaining B − A",
     "comparison",
@@ -164,6 +164,87 @@ const profilePaths = {
       parameters: [jobId],
       responses: {
         200: { description: "text/event-stream", content: { "text/event-stream": { schema: { type: "string" } } } },
+      },
+    },
+  },
+};
+
+// Runs over days (issue 17).
+const runCsv = (what: string) => profileCsv(what, "run");
+const runPaths = {
+  "/api/runs": {
+    get: {
+      summary: "The invented demo runs offered on the runs page, each with its request",
+      responses: { 200: { description: "{ demos: [{ id, title, note, request }] }" } },
+    },
+    post: jobPost(
+      "Start a run: the mechanism integrated over 1–60 days at a fixed place or along a trajectory, with hourly output and each day's Ox loss by family and cycle",
+      "RunRequest",
+    ),
+  },
+  ...recordPaths(
+    "/api/runs",
+    "A stored run: { id, createdAt, engineVersion, body: { request, result } }; a failed integration has status failed, failedAt_h and the hours up to then",
+    "run",
+  ),
+  "/api/runs/{id}/hours.csv": runCsv("The hourly state (T, [M], zenith angle, O3 in ppbv, every number density)"),
+  "/api/runs/{id}/rates.csv": runCsv("The hourly rate of every reaction"),
+  "/api/runs/{id}/daily.csv": runCsv("Each day's O3 change, Ox budget and closure, loss by family and pool totals"),
+};
+
+const runSchemas = {
+  RunRequest: {
+    type: "object",
+    required: ["mechanismId", "condition", "days"],
+    additionalProperties: false,
+    properties: {
+      mechanismId: { type: "string", examples: ["reference"] },
+      condition: {
+        type: "object",
+        description:
+          "the AnalysisRequest condition of the place (or the base of every trajectory row: date, held, poolTotals, …); the run starts at local midnight of its date, O3 solved unless ozone is held",
+      },
+      days: { type: "integer", minimum: 1, maximum: 60 },
+      start: {
+        oneOf: [
+          { type: "object", required: ["kind"], properties: { kind: { const: "periodic" } } },
+          {
+            type: "object",
+            required: ["kind", "analysisId"],
+            properties: { kind: { const: "analysis" }, analysisId: { type: "string" } },
+          },
+          {
+            type: "object",
+            required: ["kind", "mixingRatios"],
+            properties: {
+              kind: { const: "amounts" },
+              mixingRatios: { type: "object", additionalProperties: { type: "number", minimum: 0, maximum: 1 } },
+            },
+          },
+        ],
+        description: "default periodic: the 24-hour periodic solution at the first condition, at local midnight",
+      },
+      trajectory: {
+        type: "object",
+        required: ["csv"],
+        properties: {
+          csv: {
+            type: "string",
+            description:
+              "time_h,T_K,p_hPa,latitude_deg[,altitude_km][,aerosolSurface_um2cm3][,other condition fields]; at most 10,000 rows and 1 MiB; see docs/runs.md",
+          },
+          name: { type: "string" },
+        },
+      },
+      title: { type: "string" },
+      options: {
+        type: "object",
+        additionalProperties: false,
+        properties: {
+          fminRelative: { type: "number", default: 1e-4 },
+          oxDefinition: { enum: ["standard", "extended"], default: "standard" },
+          sunFollowsDate: { type: "boolean", default: true },
+        },
       },
     },
   },
@@ -451,6 +532,7 @@ export const openApiDocument = {
       },
     },
     ...profilePaths,
+    ...runPaths,
     "/api/analyses/{id}/uncertainty.csv": csv("Monte Carlo central value, median and 5–95 % range of each output"),
     "/api/analyses/{id}/sensitivities.csv": csv("Sensitivity coefficients, one row per output and rate constant"),
     "/api/uncertainty": {
@@ -487,6 +569,7 @@ export const openApiDocument = {
     },
     schemas: {
       ...profileSchemas,
+      ...runSchemas,
       Error: error,
       Diagnostic: {
         type: "object",

@@ -33,7 +33,9 @@ export type SolveStatus =
   | "no-steady-state"
   | "diverged"
   | "max-iterations"
-  | "invalid-input";
+  | "invalid-input"
+  /** not a steady state: one instant of a time integration (a run's hour), the species changing at their net rates */
+  | "instant";
 
 export interface SpeciesState {
   id: string;

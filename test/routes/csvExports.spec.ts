@@ -174,4 +174,25 @@ test.describe("CSV exports", () => {
     expect(rows[0].slice(0, 3)).toEqual(["student", "variant", "q1"]);
     expect(rows[1][0]).toBe("Student 01");
   });
+
+  test("a run's CSVs carry the mechanism, the condition, the request and the run's status", async ({ request }) => {
+    const job = await (
+      await request.post("/api/runs", {
+        data: { mechanismId: "oxygen-chlorine", condition: { altitude_km: 35 }, days: 1 },
+      })
+    ).json();
+    const done = await finish(request, job.id);
+    expect(done.state).toBe("done");
+    for (const file of ["hours.csv", "rates.csv", "daily.csv"]) {
+      const { entries } = await checkExport(request, `/api/runs/${done.resultId}/${file}`, [
+        "mechanism-id",
+        "mechanism-version",
+        "condition",
+        "request",
+        "record",
+        "run-status",
+      ]);
+      expect(entries.get("permalink")?.endsWith(`/runs/${done.resultId}`)).toBe(true);
+    }
+  });
 });

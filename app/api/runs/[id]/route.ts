@@ -1,0 +1,21 @@
+import { respond } from "@/lib/service/http";
+import { getRunRecord } from "@/lib/service/runs";
+
+export const dynamic = "force-dynamic";
+
+export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => {
+    // "/api/runs/{id}.json" arrives here with the suffix: the full JSON download.
+    const json = id.endsWith(".json");
+    const record = await getRunRecord(json ? id.slice(0, -5) : id);
+    return json
+      ? new Response(JSON.stringify(record), {
+          headers: {
+            "content-type": "application/json",
+            "content-disposition": `attachment; filename="run-${record.id}.json"`,
+          },
+        })
+      : Response.json(record);
+  });
+}

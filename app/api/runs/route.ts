@@ -1,0 +1,17 @@
+import { readJsonBody, respond } from "@/lib/service/http";
+import { startRun } from "@/lib/service/jobs";
+import { MAX_RUN_BODY, runCatalogue } from "@/lib/service/runs";
+
+export const dynamic = "force-dynamic";
+
+export function GET() {
+  return respond(() => Response.json(runCatalogue()));
+}
+
+/** Starts a run: 202 with the job to poll. */
+export function POST(req: Request) {
+  return respond(async () => {
+    const job = await startRun(await readJsonBody(req, MAX_RUN_BODY));
+    return Response.json(job, { status: 202, headers: { location: job.statusUrl } });
+  });
+}
