@@ -15,7 +15,7 @@ import { conditionEntries } from "../service/provenanceBlock";
 import { analysisSummary } from "./analysisSummary";
 import { cliCsv, csvChoice } from "./cliCsv";
 import { conditionFromFlags, optionsFromFlags } from "./conditionFlags";
-import { type CliIo, EXIT, writeOutput } from "./io";
+import { CliError, type CliIo, EXIT, writeOutput } from "./io";
 import { mechanismArgument } from "./mechanismArgument";
 
 export interface AnalyseFlags extends Record<string, unknown> {
@@ -32,9 +32,13 @@ export function analyseCommand(io: CliIo, flags: AnalyseFlags): number {
   const table = flags.csv === undefined ? undefined : csvChoice(ANALYSIS_CSV_TABLES, flags.csv);
   const src = mechanismArgument(io, flags.mechanism);
   const options = optionsFromFlags(flags);
+  const condition = conditionFromFlags(io, flags, flags.conditionFile);
+  if (condition.altitude_km === undefined) {
+    throw new CliError("no altitude: give --altitude <km>, or altitude_km in the condition file", EXIT.usage);
+  }
   const request = parseAnalysisRequest({
     mechanismId: src.id,
-    condition: conditionFromFlags(io, flags, flags.conditionFile),
+    condition,
     ...(Object.keys(options).length ? { options } : {}),
   });
   const out = runJob({ kind: "analysis", mechanism: src, request });

@@ -33,7 +33,6 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
   const program = new Command(CLI_NAME)
     .description("Photochemical steady states, odd-oxygen budgets and catalytic cycles, from the command line.")
     .option("--debug", "print the stack of an error")
-    .showHelpAfterError("(add --help for usage)")
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
     .exitOverride();
   program.addHelpText(
