@@ -19,6 +19,8 @@ const LAYERS = [
   // the worker threads run every kind of engine task (profile levels, Monte Carlo samples)
   ["engine-workers", "^lib/engine/(jobs|pool|worker-entry)\\.ts$"],
   ["service", "^lib/service/"],
+  // the command line (bin/ozone-cycles.mjs): the engine and the service's store-free parts, in one process
+  ["cli", "^lib/cli/"],
 ];
 
 const upward = LAYERS.slice(0, -1).map(([name, path], i) => ({

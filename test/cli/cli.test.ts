@@ -3,6 +3,9 @@
  * practice), --help on every command, one line on stderr for bad input, and
  * a malformed document's problems with their line and column.
  */
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { runCli } from "./runCli";
 
@@ -49,19 +52,25 @@ describe("ozone-cycles", () => {
   it("exits 2 for an analysis without an altitude", async () => {
     const r = await runCli(["analyse"]);
     expect(r.code).toBe(2);
-    expect(r.stderr.trim()).toBe("ozone-cycles: no altitude: give --altitude <km>, or altitude_km in the condition file");
+    expect(r.stderr.trim()).toBe(
+      "ozone-cycles: no altitude: give --altitude <km>, or altitude_km in the condition file",
+    );
   });
 
   it("exits 1 with one line naming the field for a value out of range", async () => {
     const r = await runCli(["analyse", "--altitude", "99"]);
     expect(r.code).toBe(1);
-    expect(r.stderr.trim().split("\n")).toEqual(["ozone-cycles: condition.altitude_km: expected an altitude between 0 and 86 km"]);
+    expect(r.stderr.trim().split("\n")).toEqual([
+      "ozone-cycles: condition.altitude_km: expected an altitude between 0 and 86 km",
+    ]);
   });
 
   it("exits 1 with one line, without a stack, for a missing file", async () => {
     const r = await runCli(["check", "no-such-document.yaml"]);
     expect(r.code).toBe(1);
-    expect(r.stderr.trim().split("\n")).toEqual(["ozone-cycles: cannot read mechanism document no-such-document.yaml: no such file"]);
+    expect(r.stderr.trim().split("\n")).toEqual([
+      "ozone-cycles: cannot read mechanism document no-such-document.yaml: no such file",
+    ]);
   });
 
   it("prints the stack of an error only with --debug", async () => {
@@ -90,9 +99,14 @@ describe("ozone-cycles", () => {
   });
 
   it("reports a YAML syntax error at its line and column", async () => {
-    const r = await runCli(["check", "bad-syntax.yaml"]);
+    // written here, not kept as a fixture: the formatter would refuse the malformed file
+    const dir = mkdtempSync(path.join(tmpdir(), "cli-check-"));
+    const lines = ["title: Invented document with a YAML syntax error", 'version: "1"', "reactions:", "  - id: R1"];
+    // an unclosed flow sequence, its "}" on line 5 at column 17
+    writeFileSync(path.join(dir, "bad-syntax.yaml"), [...lines, "    rate: {A: [1}", ""].join("\n"));
+    const r = await runCli(["check", "bad-syntax.yaml"], dir);
     expect(r.code).toBe(1);
-    expect(r.stdout).toMatch(/^bad-syntax\.yaml:9:17: error: malformed YAML: /m);
+    expect(r.stdout).toMatch(/^bad-syntax\.yaml:5:17: error: malformed YAML: /m);
   });
 
   it("exits 0 for a valid document and counts its species and reactions", async () => {
