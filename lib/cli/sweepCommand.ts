@@ -10,6 +10,7 @@ import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
 import { compileSource } from "../engine/mechanism-source";
 import { prepareSweep, runPreparedSweep } from "../profiles/prepareSweep";
 import { parseSweepRequest } from "../profiles/requestSchema";
+import { useParallel } from "../profiles/runSweep";
 import { STANDARD_PROFILE_ID } from "../profiles/standardProfile";
 import type { ProfileSpec, SweepRequest } from "../profiles/types";
 import { SWEEP_CSV_TABLES, sweepCondition } from "../service/sweepCsvTables";
@@ -75,7 +76,8 @@ export async function sweepCommand(io: CliIo, flags: SweepFlags): Promise<number
     ...(options ? { options } : {}),
   });
   const prepared = prepareSweep(request, src, DEMO_PROFILES);
-  const executor = sweepExecutor(src, io.workerScript);
+  const severalChains = useParallel(request.options?.parallel ?? "auto", prepared.plan.mode);
+  const executor = sweepExecutor(src, io.workerScript, severalChains);
   const bar = progressBar(io);
   let result: Awaited<ReturnType<typeof runPreparedSweep>>;
   try {

@@ -73,6 +73,20 @@ describe("ozone-cycles sweep and compare", () => {
     expect(withoutRunFields(b)).toEqual(withoutRunFields(want));
   });
 
+  it("runs several chains in worker threads with the service's result (--parallel parallel)", async () => {
+    const r = await runCli([...args, "--to", "30", "--parallel", "parallel", "--json"], dir);
+    expect(r.code).toBe(0);
+    const want = await inProcess({
+      mechanismId: "oxygen-chlorine",
+      profile: { kind: "standard" },
+      grid: { from_km: 20, to_km: 30, step_km: 5 },
+      options: { parallel: "parallel" },
+    });
+    const out = JSON.parse(r.stdout) as SweepResult;
+    expect(out.timing.chains).toBe(Math.min(3, POOL_DEFAULTS.size));
+    expect(withoutRunFields(out)).toEqual(withoutRunFields(want));
+  });
+
   it("writes the levels table after its provenance block by default", async () => {
     const r = await runCli([...args, "--to", "25"], dir);
     expect(r.code).toBe(0);
