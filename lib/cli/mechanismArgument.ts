@@ -13,8 +13,6 @@ import { mechanismContentId } from "../store/ids";
 import { diagnosticLine } from "./diagnosticLine";
 import { CliError, type CliIo, readTextFile } from "./io";
 
-export const DEFAULT_MECHANISM = "reference";
-
 /** The source of a built-in id or of a document file; a document's errors throw MechanismError. */
 export function mechanismArgument(io: CliIo, value: string): MechanismSource {
   const builtin = BUILTIN_MECHANISMS.find((m) => m.id === value);

@@ -1,17 +1,17 @@
 /**
  * The command line's commands and flags (commander 14). Each action returns
- * an exit code; main() maps errors to one line on stderr.
+ * an exit code; main() maps errors to one line on stderr. The commands are
+ * imported when they run, so that --help and usage errors do not load the
+ * engine (its photolysis tables alone take ~150 ms of CPU to set up).
  */
 import { Command, InvalidArgumentError, Option } from "commander";
 import { BUILTIN_MECHANISMS } from "../mechanisms";
-import { type AnalyseFlags, analyseCommand } from "./analyseCommand";
+import type { AnalyseFlags } from "./analyseCommand";
 import { SUMMARY_DEFAULTS } from "./analysisSummary";
-import { checkCommand } from "./checkCommand";
-import { type CompareFlags, compareCommand } from "./compareCommand";
+import type { CompareFlags } from "./compareCommand";
 import { addConditionFlags, addUncertaintyFlags } from "./conditionFlags";
 import type { CliIo } from "./io";
-import { DEFAULT_MECHANISM } from "./mechanismArgument";
-import { type SweepFlags, sweepCommand } from "./sweepCommand";
+import type { SweepFlags } from "./sweepCommand";
 
 export const CLI_NAME = "ozone-cycles";
 
@@ -25,6 +25,9 @@ const integer = (v: string): number => {
   if (!Number.isInteger(x)) throw new InvalidArgumentError(`expected a whole number, got "${v}"`);
   return x;
 };
+
+/** the built-in mechanism used when none is named */
+const DEFAULT_MECHANISM = "reference";
 
 const mechanismHelp = `built-in id (${BUILTIN_MECHANISMS.map((m) => m.id).join(", ")}) or a YAML/JSON document file`;
 
@@ -44,7 +47,7 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
     .command("check")
     .description("check a mechanism document: every problem with its line and column; exit 1 on errors")
     .argument("<file>", "mechanism document, YAML or JSON")
-    .action((file: string) => done(checkCommand(io, file)));
+    .action(async (file: string) => done((await import("./checkCommand")).checkCommand(io, file)));
 
   const analyse = program
     .command("analyse")
@@ -59,7 +62,7 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
     .option("--no-comments", "CSV without its # provenance lines")
     .option("--top <n>", "cycles in the summary", integer, SUMMARY_DEFAULTS.topCycles)
     .option("-o, --output <file>", "write to a file instead of stdout")
-    .action((flags: AnalyseFlags) => done(analyseCommand(io, flags)));
+    .action(async (flags: AnalyseFlags) => done((await import("./analyseCommand")).analyseCommand(io, flags)));
 
   const sweep = program
     .command("sweep")
@@ -84,7 +87,7 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
     .option("--csv <table>", "levels, cycles or profile", "levels")
     .option("--no-comments", "CSV without its # provenance lines")
     .option("-o, --output <file>", "write to a file instead of stdout")
-    .action(async (flags: SweepFlags) => done(await sweepCommand(io, flags)));
+    .action(async (flags: SweepFlags) => done(await (await import("./sweepCommand")).sweepCommand(io, flags)));
 
   program
     .command("compare")
@@ -97,7 +100,9 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
     .option("--json", "the whole comparison as JSON")
     .option("--no-comments", "CSV without its # provenance lines")
     .option("-o, --output <file>", "write to a file instead of stdout")
-    .action((a: string, b: string, flags: CompareFlags) => done(compareCommand(io, a, b, flags)));
+    .action(async (a: string, b: string, flags: CompareFlags) =>
+      done((await import("./compareCommand")).compareCommand(io, a, b, flags)),
+    );
 
   return program;
 }
