@@ -7,19 +7,8 @@
 import { type Command, InvalidArgumentError, Option } from "commander";
 import { parse as parseYaml } from "yaml";
 import type { AnalysisOptions, ConditionInput } from "../engine/types";
+import { integer, number } from "./argParsers";
 import { CliError, type CliIo, readTextFile } from "./io";
-
-const number = (v: string): number => {
-  const x = Number(v);
-  if (v.trim() === "" || !Number.isFinite(x)) throw new InvalidArgumentError(`expected a number, got "${v}"`);
-  return x;
-};
-
-const integer = (v: string): number => {
-  const x = number(v);
-  if (!Number.isInteger(x)) throw new InvalidArgumentError(`expected a whole number, got "${v}"`);
-  return x;
-};
 
 /** `id=value` pairs, repeatable: --pool Cly=3.3e-9 --pool Bry=2e-11 */
 const pairs = (v: string, previous: Record<string, number> = {}): Record<string, number> => {

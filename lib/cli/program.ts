@@ -4,27 +4,17 @@
  * imported when they run, so that --help and usage errors do not load the
  * engine (its photolysis tables alone take ~150 ms of CPU to set up).
  */
-import { Command, InvalidArgumentError, Option } from "commander";
+import { Command, Option } from "commander";
 import { BUILTIN_MECHANISMS } from "../mechanisms";
 import type { AnalyseFlags } from "./analyseCommand";
 import { SUMMARY_DEFAULTS } from "./analysisSummary";
+import { integer, number } from "./argParsers";
 import type { CompareFlags } from "./compareCommand";
 import { addConditionFlags, addUncertaintyFlags } from "./conditionFlags";
 import type { CliIo } from "./io";
 import type { SweepFlags } from "./sweepCommand";
 
 export const CLI_NAME = "ozone-cycles";
-
-const number = (v: string): number => {
-  const x = Number(v);
-  if (v.trim() === "" || !Number.isFinite(x)) throw new InvalidArgumentError(`expected a number, got "${v}"`);
-  return x;
-};
-const integer = (v: string): number => {
-  const x = number(v);
-  if (!Number.isInteger(x)) throw new InvalidArgumentError(`expected a whole number, got "${v}"`);
-  return x;
-};
 
 /** the built-in mechanism used when none is named */
 const DEFAULT_MECHANISM = "reference";
