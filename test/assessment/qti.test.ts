@@ -12,6 +12,7 @@ import { DOMParser, type Element } from "@xmldom/xmldom";
 import { strFromU8, unzipSync } from "fflate";
 import { beforeAll, describe, expect, test } from "vitest";
 import { type InstructorAssessment, qtiPackage, withinTolerance } from "@/lib/assessment";
+import { qtiItem } from "@/lib/assessment/qti";
 import { instructorRecord } from "./instructorRecord";
 
 const QTI = "http://www.imsglobal.org/xsd/imsqti_v2p1";
@@ -159,6 +160,22 @@ describe("the QTI 2.1 package", () => {
     const f = unzipSync(qtiPackage(b));
     const item = parse(strFromU8(f["items/v1-q1.xml"]), "item");
     expect(item.getAttribute("title")).toBe('Quiz <1> & "two": variant 1, question 1');
+  });
+
+  test("writes a relative tolerance as a plain percentage", () => {
+    const k = a.key.find((x) => typeof x.value === "number") as (typeof a.key)[number];
+    const sheet = a.sheets.find((x) => x.variant === k.variant);
+    const q = sheet?.questions.find((x) => x.number === k.question);
+    if (!sheet || !q) throw new Error("no sheet question for the key entry");
+    const xml = qtiItem({
+      identifier: "x",
+      title: "t",
+      variant: k.variant,
+      conditions: sheet.conditions,
+      question: q,
+      key: { ...k, tolerance: { kind: "relative", rel: 0.07 } },
+    });
+    expect(all(parse(xml, "item"), "equal")[0].getAttribute("tolerance")).toBe("7 7");
   });
 
   test("throws when a question of a sheet has no key", () => {

@@ -37,7 +37,8 @@ function numericMatch(key: KeyEntry): string {
   const t = key.tolerance;
   const cmp = '<variable identifier="RESPONSE"/><correct identifier="RESPONSE"/>';
   if (t.kind === "relative") {
-    const pct = String(t.rel * 100);
+    // as a percentage, without the binary rounding of ×100 (0.07 → "7", not "7.000000000000001")
+    const pct = String(Number((t.rel * 100).toPrecision(12)));
     return `<equal toleranceMode="relative" tolerance="${pct} ${pct}">${cmp}</equal>`;
   }
   if (t.kind === "absolute") return `<equal toleranceMode="absolute" tolerance="${t.abs} ${t.abs}">${cmp}</equal>`;
