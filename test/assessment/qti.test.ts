@@ -32,7 +32,7 @@ const children = (e: Element) => Array.from(e.childNodes).filter((n): n is Eleme
 const child = (e: Element, name: string) => children(e).find((c) => c.localName === name);
 const all = (e: Element, name: string) => Array.from(e.getElementsByTagNameNS(QTI, name));
 
-/** QTI 2.1 `equal` with toleranceMode relative (t in percent) or absolute, as the specification defines it. */
+/** QTI 2.1 `equal` with toleranceMode relative (t in percent) or absolute, as the specification defines it (from memory: the specification could not be fetched here). */
 function qtiEqual(x: number, y: number, mode: string, t: number): boolean {
   if (mode === "relative") return y * (1 - t / 100) <= x && x <= y * (1 + t / 100);
   if (mode === "absolute") return y - t <= x && x <= y + t;
