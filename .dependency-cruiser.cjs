@@ -21,6 +21,10 @@ const LAYERS = [
   // the worker threads run every kind of engine task (profile levels, Monte Carlo samples)
   ["engine-workers", "^lib/engine/(jobs|pool|worker-entry)\\.ts$"],
   ["service", "^lib/service/"],
+  // the command line (bin/ozone-cycles.mjs): the engine and the service's store-free parts, in one process
+  // the typed client of the routes (its types come from the layers below, the service's included)
+  ["client", "^lib/client/"],
+  ["cli", "^lib/cli/"],
 ];
 
 const upward = LAYERS.slice(0, -1).map(([name, path], i) => ({

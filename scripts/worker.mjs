@@ -9,6 +9,7 @@ import { existsSync, readdirSync, renameSync, rmSync } from "node:fs";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import { build } from "esbuild";
+import { requireBanner, serverOnlyStub } from "./node-bundle.mjs";
 
 if (!process.env.REDIS_URL) {
   console.error("npm run worker: set REDIS_URL (redis://host:port) to the Redis that the web instances use");
@@ -16,15 +17,8 @@ if (!process.env.REDIS_URL) {
 }
 
 const root = process.cwd();
-const banner = { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" };
-// "server-only" guards modules against client bundles; in a plain Node process it has nothing to guard
-const serverOnly = {
-  name: "server-only",
-  setup(b) {
-    b.onResolve({ filter: /^server-only$/ }, () => ({ path: "server-only", namespace: "empty" }));
-    b.onLoad({ filter: /.*/, namespace: "empty" }, () => ({ contents: "", loader: "js" }));
-  },
-};
+const banner = requireBanner;
+const serverOnly = serverOnlyStub;
 
 // the engine's worker-thread bundle, built when missing (to a temporary name first: several workers may start at once)
 const engineBundle = path.join(root, ".engine", "worker.mjs");

@@ -8,6 +8,7 @@ export { DEFAULTS as GENERATE_DEFAULTS, distinctStarts, generateAssessment, ques
 export { markAnswer, withinTolerance } from "./markAnswer";
 export { LIMITS as MARKING_LIMITS, markClass } from "./markClass";
 export { normaliseName, parseNumberAnswer } from "./parseAnswer";
+export { qtiFiles, qtiPackage } from "./qti";
 export { formatMixingRatio, sheetConditions } from "./sheetConditions";
 export { formatSignificant, roundToSignificant } from "./significant";
 export type { MechanismOffer } from "./specSchema";

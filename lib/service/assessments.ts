@@ -19,6 +19,7 @@ import {
   markClass,
   marksCsv,
   parseAssessmentSpec,
+  qtiPackage,
   type StudentAssessment,
   sheetConditions,
   studentView,
@@ -239,4 +240,10 @@ export async function assessmentCsvExport(
     csv: csvExport(answerTemplateCsv(a.questions.length, a.variants.length), p, o),
     filename: `assessment-${id}-answers.csv`,
   };
+}
+
+/** The assessment as an IMS QTI 2.1 content package: instructor link only, as its items carry the answers for marking. */
+export async function assessmentQtiExport(id: string): Promise<{ zip: Uint8Array; filename: string }> {
+  const a = await getInstructorAssessment(id);
+  return { zip: qtiPackage(a), filename: `assessment-${id}-qti.zip` };
 }

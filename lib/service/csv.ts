@@ -110,3 +110,41 @@ export function sensitivitiesNotes(r: AnalysisResult): CsvCommentEntry[] {
   const s = r.uncertainty?.sensitivity;
   return s ? sensitivityNotes(s) : [["note", "no sensitivities: request options.sensitivity = true"]];
 }
+
+/** One CSV table of an analysis: the table, its one-line description, and entries of its own for the provenance block. */
+export interface AnalysisCsvTable {
+  make: (r: AnalysisResult) => string;
+  table: string;
+  notes: (r: AnalysisResult) => CsvCommentEntry[];
+}
+
+const none = (): CsvCommentEntry[] => [];
+
+/** The CSV tables of an analysis by file name, as the routes and the command line serve them. */
+export const ANALYSIS_CSV_TABLES: Record<string, AnalysisCsvTable> = {
+  "rates.csv": {
+    make: ratesCsv,
+    table: "rates.csv: every reaction's rate constant, rate and odd-oxygen effect at the steady state",
+    notes: none,
+  },
+  "species.csv": {
+    make: speciesCsv,
+    table: "species.csv: every species' amount, production, loss and lifetime at the steady state",
+    notes: none,
+  },
+  "cycles.csv": {
+    make: cyclesCsv,
+    table: "cycles.csv: the catalytic cycles with rate, share of the Ox loss and chain length",
+    notes: none,
+  },
+  "uncertainty.csv": {
+    make: uncertaintyCsv,
+    table: "uncertainty.csv: Monte Carlo medians and 5–95 % ranges of the outputs",
+    notes: uncertaintyNotes,
+  },
+  "sensitivities.csv": {
+    make: sensitivitiesCsv,
+    table: "sensitivities.csv: normalised sensitivities d ln(output) / d ln(k)",
+    notes: sensitivitiesNotes,
+  },
+};

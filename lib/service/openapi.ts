@@ -508,6 +508,17 @@ export const openApiDocument = {
         },
       },
     },
+    "/api/assessments/{id}/qti.zip": {
+      get: {
+        summary:
+          "The assessment as an IMS QTI 2.1 content package (instructor id only): one item per question and variant, numeric answers with the marking tolerance, choice answers for family and step questions",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: {
+          200: { description: "zip", content: { "application/zip": { schema: { type: "string", format: "binary" } } } },
+          ...errors(404),
+        },
+      },
+    },
     "/api/assessments/{id}/marks": {
       post: {
         summary:

@@ -8,26 +8,33 @@
 import "server-only";
 import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
 import type { DemoProfile } from "../atmosphere/types";
-import type { CsvCommentEntry } from "../csv";
-import { compileSource, type MechanismSource } from "../engine/mechanism-source";
+import type { MechanismSource } from "../engine/mechanism-source";
 import { enginePool, POOL_DEFAULTS } from "../engine/pool";
-import { resolveCondition } from "../engine/resolve-condition";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
 import type { JobContext, TaskRunner } from "../jobs/types";
-import { builtinProfiles, resolveProfileSpec } from "../profiles/builtinProfiles";
+import { builtinProfiles } from "../profiles/builtinProfiles";
 import { compareSweeps } from "../profiles/compareSweeps";
-import { comparisonCsv, sweepCyclesCsv, sweepLevelsCsv } from "../profiles/csvTables";
-import { planSweep, type SweepPlan } from "../profiles/planSweep";
+import { comparisonCsv } from "../profiles/csvTables";
+import { type PreparedSweep, prepareSweep, runPreparedSweep } from "../profiles/prepareSweep";
 import { profileToCsv } from "../profiles/profileToCsv";
 import { parseComparisonRequest, parseSweepRequest } from "../profiles/requestSchema";
 import type { LevelBatchResult } from "../profiles/runLevelBatch";
-import { runSweep, type SweepExecutor, type SweepProgress } from "../profiles/runSweep";
+import type { SweepExecutor, SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { notFound } from "./http";
 import { listMechanisms, mechanismSource } from "./mechanisms";
+import {
+  COMPARISON_TABLE,
+  comparisonSide,
+  type ProfileRecordBody,
+  SWEEP_CSV_TABLES,
+  sweepCondition,
+} from "./sweepCsvTables";
+
+export type { ProfileRecordBody } from "./sweepCsvTables";
 
 export const PROFILE_KIND = "profile";
 export const COMPARISON_KIND = "comparison";
@@ -48,43 +55,16 @@ export function demoProfiles(): readonly DemoProfile[] {
   return DEMOS;
 }
 
-interface Prepared {
-  request: SweepRequest;
-  src: MechanismSource;
-  profile: Profile;
-  plan: SweepPlan;
-}
-
 /** Checks everything a sweep needs before it is queued; `path` prefixes error paths (e.g. "a"). */
-async function prepareSweep(request: SweepRequest, path = ""): Promise<Prepared> {
-  const at = (p: string) => (path ? `${path}.${p}` : p);
+async function prepare(request: SweepRequest, path = ""): Promise<PreparedSweep> {
   let src: MechanismSource;
   try {
     src = await mechanismSource(request.mechanismId);
   } catch {
-    throw new InputError(at("mechanismId"), `unknown mechanism ${request.mechanismId}`, "unknown-mechanism");
+    const at = path ? `${path}.mechanismId` : "mechanismId";
+    throw new InputError(at, `unknown mechanism ${request.mechanismId}`, "unknown-mechanism");
   }
-  const mech = compileSource(src);
-  const profile = resolveProfileSpec(request.profile, DEMOS, at("profile"));
-  let plan: SweepPlan;
-  try {
-    plan = planSweep(request, profile, mech);
-  } catch (e) {
-    if (e instanceof InputError && path)
-      throw new InputError(at(e.path ?? ""), e.message.slice((e.path ?? "").length + 2));
-    throw e;
-  }
-  // request-wide overrides (held, poolTotals, J) are checked once here, not failed at every level
-  try {
-    resolveCondition(mech, plan.tasks[0].request.condition);
-  } catch (e) {
-    if (e instanceof InputError) {
-      const p = (e.path ?? "").replace(/^condition\./, "condition.");
-      throw new InputError(at(p), e.message.slice((e.path ?? "").length + 2));
-    }
-    throw e;
-  }
-  return { request, src, profile, plan };
+  return prepareSweep(request, src, DEMOS, path);
 }
 
 /** The process's engine pool, or the job back end's task runner when it distributes tasks (BullMQ). */
@@ -102,45 +82,18 @@ function poolExecutor(src: MechanismSource, tasks?: TaskRunner): SweepExecutor {
   };
 }
 
-async function runPrepared(
-  p: Prepared,
+function runPrepared(
+  p: PreparedSweep,
   signal: AbortSignal,
   onProgress: (q: SweepProgress) => void,
   tasks?: TaskRunner,
 ): Promise<SweepResult> {
-  return runSweep(
-    p.plan,
-    poolExecutor(p.src, tasks),
-    {
-      engineVersion: ENGINE_VERSION,
-      mechanism: { id: p.src.id, title: p.src.title },
-      profile: {
-        id: p.profile.id,
-        title: p.profile.title,
-        source: p.profile.source,
-        demo: p.profile.demo,
-        note: p.profile.note,
-      },
-    },
-    {
-      parallel: p.request.options?.parallel,
-      maxColumnPasses: p.request.options?.maxColumnPasses,
-      columnTolerance: p.request.options?.columnTolerance,
-      signal,
-      onProgress,
-    },
-  );
+  return runPreparedSweep(p, poolExecutor(p.src, tasks), { signal, onProgress });
 }
 
 const stageOf = (q: SweepProgress) => (q.pass > 1 ? `levels, pass ${q.pass} (overhead O3 column)` : "levels");
 
-export interface ProfileRecordBody {
-  request: SweepRequest;
-  profile: Profile;
-  result: SweepResult;
-}
-
-async function storeSweep(p: Prepared, result: SweepResult): Promise<string> {
+async function storeSweep(p: PreparedSweep, result: SweepResult): Promise<string> {
   const id = newRecordId();
   // the CSV text is kept once, as the parsed profile
   const request: SweepRequest =
@@ -161,13 +114,13 @@ async function storeSweep(p: Prepared, result: SweepResult): Promise<string> {
 /** Parses and checks a sweep request; throws InputError (400) before anything is queued. */
 export async function validateSweep(body: unknown): Promise<SweepRequest> {
   const request = parseSweepRequest(body);
-  await prepareSweep(request);
+  await prepare(request);
   return request;
 }
 
 /** Job handler "profile-sweep". */
 export async function sweepJob(input: SweepRequest, ctx: JobContext) {
-  const p = await prepareSweep(input);
+  const p = await prepare(input);
   const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)), ctx.tasks);
   if (ctx.signal.aborted) throw ctx.signal.reason;
   return { resultId: await storeSweep(p, result), resultKind: PROFILE_KIND };
@@ -179,7 +132,7 @@ export async function validateComparison(body: unknown): Promise<ComparisonReque
   for (const key of ["a", "b"] as const) {
     const side = request[key];
     if ("sweepId" in side) await getProfileRecord(side.sweepId, `${key}.sweepId`);
-    else await prepareSweep(side, key);
+    else await prepare(side, key);
   }
   return request;
 }
@@ -194,7 +147,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
   const prepared = await Promise.all(
     (["a", "b"] as const).map((key) => {
       const side = input[key];
-      return "sweepId" in side ? null : prepareSweep(side, key);
+      return "sweepId" in side ? null : prepare(side, key);
     }),
   );
   const done = [0, 0];
@@ -302,43 +255,14 @@ export function profileCatalogue() {
   };
 }
 
-const PROFILE_EXPORTS = {
-  "levels.csv": [
-    (b: ProfileRecordBody) => sweepLevelsCsv(b.result),
-    "levels.csv: every level of a stored profile sweep with its condition, Ox budget and family shares",
-  ],
-  "cycles.csv": [
-    (b: ProfileRecordBody) => sweepCyclesCsv(b.result),
-    "cycles.csv: the catalytic cycles at every level of a stored profile sweep",
-  ],
-  "profile.csv": [
-    (b: ProfileRecordBody) => profileToCsv(b.profile),
-    "profile.csv: the profile the sweep used, in the upload format (docs/profile-format.md)",
-  ],
-} as const;
-
-/** The settings every level of a sweep shares (the per-level condition is in the table). */
-function sweepCondition(r: SweepResult, request: SweepRequest): CsvCommentEntry[] {
-  const { profile: _profile, mechanismId: _mechanism, ...settings } = request;
-  return [
-    [
-      "profile",
-      `${r.profile.title} (${r.profile.source}${r.profile.demo ? "; invented demo data, not a measurement" : ""})`,
-    ],
-    ["condition", `per level in the table; mode=${r.mode}; ozone=${r.ozone}; o3-column=${r.columnSource}`],
-    ["request", JSON.stringify(settings)],
-  ];
-}
-
 /** A CSV export of a stored sweep (levels.csv, cycles.csv, profile.csv) after its provenance block; null for an unknown file. */
 export async function profileExport(
   id: string,
   file: string,
   o: CsvExportOptions,
 ): Promise<{ csv: string; filename: string } | null> {
-  if (!Object.hasOwn(PROFILE_EXPORTS, file)) return null;
-  const entry = PROFILE_EXPORTS[file as keyof typeof PROFILE_EXPORTS];
-  const [make, table] = entry;
+  if (!Object.hasOwn(SWEEP_CSV_TABLES, file)) return null;
+  const { make, table } = SWEEP_CSV_TABLES[file];
   const record = await getProfileRecord(id);
   const r = record.body.result;
   const csv = csvExport(
@@ -366,20 +290,11 @@ export async function comparisonExport(
   if (file !== "comparison.csv") return null;
   const record = await getComparisonRecord(id);
   const r = record.body.result;
-  const side = (k: "a" | "b"): CsvCommentEntry[] => [
-    [`${k}-label`, r.labels[k]],
-    [`${k}-sweep`, `${o.origin}${profilePath(r[k].sweepId)}`],
-    [
-      `${k}-profile`,
-      `${r[k].profile.title} (${r[k].profile.source}${r[k].profile.demo ? "; invented demo data" : ""})`,
-    ],
-    [`${k}-mode`, r[k].mode],
-  ];
+  const side = (k: "a" | "b") => comparisonSide(r, k, `${o.origin}${profilePath(r[k].sweepId)}`);
   const csv = csvExport(
     comparisonCsv(r),
     {
-      table:
-        "comparison.csv: Ox loss of two profile sweeps A and B against altitude, the difference B − A and the cycles that explain it",
+      table: COMPARISON_TABLE,
       mechanisms: [
         { ...(await csvMechanism(r.a.mechanism)), side: "a" },
         { ...(await csvMechanism(r.b.mechanism)), side: "b" },

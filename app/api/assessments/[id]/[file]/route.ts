@@ -1,11 +1,11 @@
 import { keyJson } from "@/lib/assessment";
-import { assessmentCsvExport, getInstructorAssessment } from "@/lib/service/assessments";
+import { assessmentCsvExport, assessmentQtiExport, getInstructorAssessment } from "@/lib/service/assessments";
 import { csvExportOptions } from "@/lib/service/csvProvenance";
 import { csvResponse, notFound, respond } from "@/lib/service/http";
 
 export const dynamic = "force-dynamic";
 
-/** key.csv, answers-template.csv (`?comments=none` for the bare table) and key.json. */
+/** key.csv, answers-template.csv (`?comments=none` for the bare table), key.json and qti.zip (IMS QTI 2.1 package). */
 export async function GET(req: Request, ctx: { params: Promise<{ id: string; file: string }> }) {
   const { id, file } = await ctx.params;
   return respond(async () => {
@@ -16,6 +16,12 @@ export async function GET(req: Request, ctx: { params: Promise<{ id: string; fil
           "content-type": "application/json",
           "content-disposition": `attachment; filename="assessment-${id}-key.json"`,
         },
+      });
+    }
+    if (file === "qti.zip") {
+      const q = await assessmentQtiExport(id);
+      return new Response(Buffer.from(q.zip), {
+        headers: { "content-type": "application/zip", "content-disposition": `attachment; filename="${q.filename}"` },
       });
     }
     const out = await assessmentCsvExport(id, file, csvExportOptions(req));

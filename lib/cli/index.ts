@@ -1,0 +1,3 @@
+export { CliError, type CliIo, EXIT } from "./io";
+export { main } from "./main";
+export { buildProgram, CLI_NAME } from "./program";

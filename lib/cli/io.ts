@@ -1,0 +1,64 @@
+/**
+ * What the command line reads and writes, passed in so that the commands run
+ * the same in the real binary and in-process: the caller's working folder,
+ * the two output streams, whether stderr is a terminal (progress is drawn only
+ * then), and the engine's worker-thread script for sweeps.
+ */
+import fs from "node:fs";
+import path from "node:path";
+
+export interface CliIo {
+  /** folder relative file names are read and written in (the caller's, not the package's) */
+  cwd: string;
+  stdout: (text: string) => void;
+  stderr: (text: string) => void;
+  /** true when stderr is a terminal: progress bars are drawn on it */
+  stderrIsTTY: boolean;
+  /** the bundled engine worker (lib/engine/worker-entry.ts) for sweeps; absent: levels run in this thread */
+  workerScript?: string;
+}
+
+/** Exit codes, as common command-line practice has them. */
+export const EXIT = { ok: 0, failure: 1, usage: 2 } as const;
+
+/** A failure the user can act on, printed as one line without a stack; `exitCode` 1 or 2. */
+export class CliError extends Error {
+  readonly exitCode: number;
+  constructor(message: string, exitCode: number = EXIT.failure) {
+    super(message);
+    this.name = "CliError";
+    this.exitCode = exitCode;
+  }
+}
+
+/** The text of a file named relative to the caller; a missing or unreadable file is a CliError naming it. */
+export function readTextFile(io: CliIo, file: string, what: string): string {
+  const full = path.resolve(io.cwd, file);
+  try {
+    return fs.readFileSync(full, "utf8");
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    const why =
+      code === "ENOENT"
+        ? "no such file"
+        : code === "EISDIR"
+          ? "it is a folder"
+          : code === "EACCES"
+            ? "permission denied"
+            : (e as Error).message;
+    throw new CliError(`cannot read ${what} ${file}: ${why}`);
+  }
+}
+
+/** Writes `text` to `file` (relative to the caller), or to stdout when no file is given. */
+export function writeOutput(io: CliIo, text: string, file: string | undefined): void {
+  if (!file) {
+    io.stdout(text);
+    return;
+  }
+  try {
+    fs.writeFileSync(path.resolve(io.cwd, file), text);
+  } catch (e) {
+    throw new CliError(`cannot write ${file}: ${(e as Error).message}`);
+  }
+}
