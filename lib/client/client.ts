@@ -8,9 +8,11 @@ import type { AssessmentSpec, InstructorAssessment, StudentAssessment } from "..
 import type { Health } from "../engine/health";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import type { ComparisonRequest, SweepRequest } from "../profiles/types";
+import type { RunRequest } from "../runs/types";
 import type { AnalysisRecord } from "../service/analyses";
 import type { JobView } from "../service/jobs";
 import type { StoredComparisonRecord, StoredProfileRecord } from "../service/profiles";
+import type { StoredRunRecord } from "../service/runs";
 import { type CLIENT_FILES, CLIENT_ROUTES, type ClientMethod } from "./routes";
 
 export const CLIENT_DEFAULTS = {
@@ -158,6 +160,20 @@ export class OzoneCyclesClient {
   }
   async comparisonCsv(id: string, comments = true) {
     return (await this.call("comparisonCsv", { params: { id }, query: comments ? {} : { comments: "none" } })).text();
+  }
+  /** The invented demo runs, each with the request that starts it. */
+  listRunDemos() {
+    return this.json<{ demos: { id: string; title: string; note: string; request: RunRequest }[] }>("listRunDemos");
+  }
+  /** Starts a run over days as a job; follow it with waitForJob. */
+  startRun(request: RunRequest) {
+    return this.json<JobView>("startRun", { body: request });
+  }
+  getRun(id: string) {
+    return this.json<StoredRunRecord>("getRun", { params: { id } });
+  }
+  async runCsv(id: string, file: (typeof CLIENT_FILES.runCsv)[number], comments = true) {
+    return (await this.call("runCsv", { params: { id, file }, query: comments ? {} : { comments: "none" } })).text();
   }
   getJob(id: string) {
     return this.json<JobView>("getJob", { params: { id } });

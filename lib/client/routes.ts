@@ -20,6 +20,10 @@ export const CLIENT_ROUTES = {
   startComparison: { method: "post", path: "/api/comparisons" },
   getComparison: { method: "get", path: "/api/comparisons/{id}" },
   comparisonCsv: { method: "get", path: "/api/comparisons/{id}/comparison.csv" },
+  listRunDemos: { method: "get", path: "/api/runs" },
+  startRun: { method: "post", path: "/api/runs" },
+  getRun: { method: "get", path: "/api/runs/{id}" },
+  runCsv: { method: "get", path: "/api/runs/{id}/{file}" },
   getJob: { method: "get", path: "/api/jobs/{id}" },
   cancelJob: { method: "delete", path: "/api/jobs/{id}" },
   createAssessment: { method: "post", path: "/api/assessments" },
@@ -34,4 +38,5 @@ export type ClientMethod = keyof typeof CLIENT_ROUTES;
 export const CLIENT_FILES = {
   analysisCsv: ["rates.csv", "species.csv", "cycles.csv", "uncertainty.csv", "sensitivities.csv"],
   sweepCsv: ["levels.csv", "cycles.csv", "profile.csv"],
+  runCsv: ["hours.csv", "rates.csv", "daily.csv"],
 } as const;

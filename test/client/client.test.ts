@@ -16,6 +16,7 @@ const LEFT_OUT = new Set([
   "get /api/analyses/{id}.json", // the same record as GET /api/analyses/{id}, as a download
   "get /api/profiles/{id}.json",
   "get /api/comparisons/{id}.json",
+  "get /api/runs/{id}.json",
   "post /api/assessments/preview", // the builder page's helper
   "get /api/assessments/{id}/key.csv", // the instructor's downloads: open them in a browser
   "get /api/assessments/{id}/key.json",
