@@ -6,6 +6,7 @@ import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
 import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
 import type { SampleBatchResult } from "../uncertainty/types";
+import { checkUpload, type UploadCheck } from "./check-upload";
 import { compileSource, type MechanismSource } from "./mechanism-source";
 import { runAnalysis } from "./run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "./types";
@@ -15,12 +16,15 @@ export type EngineJob =
   /** neighbouring levels of a profile sweep, each warm-started from the one before (lib/profiles) */
   | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch }
   /** a batch of Monte Carlo samples around a central steady state (lib/uncertainty) */
-  | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch };
+  | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch }
+  /** parse and check an uploaded document off the main thread (lib/engine/check-upload.ts) */
+  | { kind: "check-upload"; text: string; format?: "yaml" | "json" };
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
   | { kind: "profile-levels"; result: LevelBatchResult }
-  | { kind: "uncertainty-samples"; result: SampleBatchResult };
+  | { kind: "uncertainty-samples"; result: SampleBatchResult }
+  | { kind: "check-upload"; result: UploadCheck };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -44,6 +48,8 @@ export function runJob(job: EngineJob): EngineJobResult {
       const mech = compileSource(job.mechanism);
       return { kind: "uncertainty-samples", result: runSampleBatch(mech, job.batch) };
     }
+    case "check-upload":
+      return { kind: "check-upload", result: checkUpload(job.text, job.format) };
     default:
       throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);
   }

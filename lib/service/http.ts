@@ -2,7 +2,8 @@
  * The one place where errors become HTTP responses, and request bodies are
  * read under a size limit. Every error body is { error: { code, message, path } }.
  */
-import { EngineError, MechanismError } from "../errors";
+import { EngineError, jsonParseMessage, MechanismError, safeExcerpt } from "../errors";
+import { jsonTooDeep, NESTING_DEFAULTS } from "../mechanism/nestingDepth";
 
 export class HttpError extends EngineError {
   constructor(
@@ -20,7 +21,13 @@ const STATUS_BY_CODE: Record<string, number> = {
   "invalid-request": 400,
   "invalid-input": 400,
   "invalid-json": 400,
-  "body-too-large": 413,
+  "too-large": 413,
+  "too-deep": 400,
+  "invalid-token": 400,
+  forbidden: 403,
+  gone: 410,
+  "rate-limited": 429,
+  "storage-full": 507,
   "not-found": 404,
   "unknown-mechanism": 404,
   timeout: 422,
@@ -33,8 +40,11 @@ export function errorResponse(e: unknown): Response {
   if (e instanceof HttpError) return Response.json({ error: e.toJSON() }, { status: e.status });
   if (e instanceof MechanismError || (e instanceof EngineError && e.name === "MechanismError")) {
     const problems = (e as MechanismError).problems;
-    const tooBig = problems?.some((p) => p.code.startsWith("limit"));
-    return Response.json({ error: { ...e.toJSON(), problems } }, { status: tooBig ? 413 : 400 });
+    // every document over a limit is one refusal: 413 "too-large", as the OpenAPI document says
+    if (problems?.some((p) => p.code === "too-large")) {
+      return Response.json({ error: { ...e.toJSON(), code: "too-large", problems } }, { status: 413 });
+    }
+    return Response.json({ error: { ...e.toJSON(), problems } }, { status: 400 });
   }
   if (e instanceof EngineError) {
     return Response.json({ error: e.toJSON() }, { status: STATUS_BY_CODE[e.code] ?? 400 });
@@ -77,16 +87,38 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
 }
 
 export async function readJsonBody(req: Request, maxBytes: number): Promise<unknown> {
-  const text = await readBodyText(req, maxBytes);
+  return parseJsonBody(await readBodyText(req, maxBytes));
+}
+
+/** JSON.parse after a linear nesting pre-scan; errors quote only a short, escaped excerpt. */
+export function parseJsonBody(text: string): unknown {
+  refuseDeepJson(text);
   try {
     return JSON.parse(text);
   } catch (e) {
-    throw new HttpError(400, "invalid-json", `the body is not valid JSON: ${(e as Error).message}`, "(body)");
+    throw new HttpError(
+      400,
+      "invalid-json",
+      `the body is not valid JSON: ${jsonParseMessage(e)} (it starts ${safeExcerpt(text.trimStart())})`,
+      "(body)",
+    );
   }
 }
 
+/** 400 "too-deep" for a JSON body nested beyond NESTING_DEFAULTS.maxDepth, naming the line. */
+export function refuseDeepJson(text: string): void {
+  const deep = jsonTooDeep(text, NESTING_DEFAULTS.maxDepth);
+  if (!deep) return;
+  throw new HttpError(
+    400,
+    "too-deep",
+    `the body is nested too deeply: more than ${NESTING_DEFAULTS.maxDepth} levels of brackets (line ${deep.line}, column ${deep.column})`,
+    "(body)",
+  );
+}
+
 function tooLarge(maxBytes: number): HttpError {
-  return new HttpError(413, "body-too-large", `the body is larger than the limit of ${maxBytes} bytes`, "(body)");
+  return new HttpError(413, "too-large", `the body is larger than the limit of ${maxBytes} bytes`, "(body)");
 }
 
 export function notFound(what: string, id: string): HttpError {
