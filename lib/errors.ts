@@ -95,8 +95,9 @@ export function printable(text: string): string {
 export function jsonParseMessage(e: unknown): string {
   const msg = e instanceof Error ? e.message : String(e);
   const cleaned = msg
-    .replace(/^Unexpected token (.+?), "[\s\S]*?(?:"\.\.\.|") is not valid JSON$/, (_m, tok: string) =>
-      `unexpected character ${safeExcerpt(tok.replace(/^'|'$/g, ""), 4)}`,
+    .replace(
+      /^Unexpected token (.+?), "[\s\S]*?(?:"\.\.\.|") is not valid JSON$/,
+      (_m, tok: string) => `unexpected character ${safeExcerpt(tok.replace(/^'|'$/g, ""), 4)}`,
     )
     .split("\n")[0];
   return printable(cleaned).slice(0, 120);

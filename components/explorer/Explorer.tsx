@@ -230,7 +230,8 @@ export function Explorer(props: Props) {
               className="rounded border border-sky-300 bg-sky-50 px-3 py-1 text-[12px] text-sky-900"
             >
               Stored analysis of {new Date(props.stored!.createdAt).toUTCString()}: these are the stored numbers. Change
-              any condition to recompute.
+              any condition to recompute.{" "}
+              <span data-testid="permanent-link">This link is permanent: the analysis is kept for good.</span>
               {props.stored!.engineVersion !== props.stored!.currentEngineVersion ? (
                 <strong data-testid="engine-version-warning" className="ml-1 font-semibold text-amber-900">
                   Computed with engine {props.stored!.engineVersion}; the current engine is{" "}

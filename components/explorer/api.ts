@@ -71,10 +71,15 @@ export const uploadMechanism = (text: string) =>
     body: JSON.stringify({ text, format: /^\s*[{[]/.test(text) ? "json" : "yaml" }),
   });
 
+/** An explorer recompute is a draft: it expires unless its permalink is copied, opened or exported. */
 export const postAnalysis = (request: AnalysisRequest, signal?: AbortSignal) =>
-  call<{ id: string; result: AnalysisResult }>("/api/analyses", {
+  call<{ id: string; result: AnalysisResult }>("/api/analyses?draft=1", {
     method: "POST",
     headers: { "content-type": "application/json" },
     body: JSON.stringify(request),
     signal,
   });
+
+/** Keeps an analysis for good (its permalink was copied). */
+export const pinAnalysis = (id: string) =>
+  call<{ id: string; pinned: boolean }>(`/api/analyses/${encodeURIComponent(id)}/pin`, { method: "POST" });

@@ -9,9 +9,14 @@ export {
   searchConservation,
 } from "./findConservationRelations";
 export { leftNullSpace } from "./leftNullSpace";
+export {
+  DEFAULTS as MECHANISM_LIMITS,
+  type LoadMechanismOptions,
+  loadMechanism,
+  tooDeepDiagnostic,
+} from "./loadMechanism";
 export { missingContent } from "./missingContent";
 export { jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
-export { DEFAULTS as MECHANISM_LIMITS, type LoadMechanismOptions, loadMechanism, tooDeepDiagnostic } from "./loadMechanism";
 export { type EquationTerm, type ParsedEquation, parseEquation } from "./parseEquation";
 export { parseFormula } from "./parseFormula";
 export { poolExpression, weightedSum } from "./poolExpression";

@@ -117,8 +117,7 @@ export function yamlTooDeep(text: string, maxDepth = NESTING_DEFAULTS.maxDepth):
       else if (c === HASH && (prev === SPACE || prev === TAB)) {
         contentEnd = i;
         break;
-      }
-      else if (c === OPEN_SQUARE || c === OPEN_CURLY) {
+      } else if (c === OPEN_SQUARE || c === OPEN_CURLY) {
         flow++;
         if (indents.length + lineDepth + flow > maxDepth) return { depth: maxDepth + 1, line, column: i - pos + 1 };
       } else if ((c === CLOSE_SQUARE || c === CLOSE_CURLY) && flow > 0) flow--;

@@ -11,6 +11,8 @@ export class HttpError extends EngineError {
     code: string,
     message: string,
     path?: string,
+    /** extra response headers, e.g. Retry-After of a 429 */
+    readonly headers: Record<string, string> = {},
   ) {
     super(code, message, { path });
     this.name = "HttpError";
@@ -37,7 +39,7 @@ const STATUS_BY_CODE: Record<string, number> = {
 };
 
 export function errorResponse(e: unknown): Response {
-  if (e instanceof HttpError) return Response.json({ error: e.toJSON() }, { status: e.status });
+  if (e instanceof HttpError) return Response.json({ error: e.toJSON() }, { status: e.status, headers: e.headers });
   if (e instanceof MechanismError || (e instanceof EngineError && e.name === "MechanismError")) {
     const problems = (e as MechanismError).problems;
     // every document over a limit is one refusal: 413 "too-large", as the OpenAPI document says

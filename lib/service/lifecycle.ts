@@ -57,7 +57,8 @@ export async function deleteWithToken(refs: RecordRef[], token: string | null, w
   const stored = life.deleteHash ? Buffer.from(life.deleteHash, "hex") : randomBytes(32);
   const match = timingSafeEqual(given, stored.length === 32 ? stored : randomBytes(32)) && life.deleteHash !== null;
   if (life.deletedAt) throw gone(what, first.id);
-  if (!match) throw new HttpError(403, "forbidden", `the deletion token does not belong to this ${what}`, DELETION_HEADER);
+  if (!match)
+    throw new HttpError(403, "forbidden", `the deletion token does not belong to this ${what}`, DELETION_HEADER);
   const at = new Date().toISOString();
   for (const ref of refs) await getStore().tombstone(ref, at);
 }

@@ -395,11 +395,11 @@ export async function comparisonExport(
   return { csv, filename: `comparison-${id}.csv` };
 }
 
-/** What the profile forms offer: mechanisms (id, title) and the built-in profiles (without their levels). */
-export async function profileFormOptions() {
+/** What the profile forms offer: mechanisms (id, title; uploads of this owner cookie only) and the built-in profiles (without their levels). */
+export async function profileFormOptions(owner?: string) {
   let mechanisms: { id: string; title: string }[] = [];
   try {
-    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({
+    mechanisms = (await listMechanisms(owner)).mechanisms.map((m) => ({
       id: m.id,
       title: m.builtin ? m.title : `${m.title} (upload)`,
     }));

@@ -1,16 +1,22 @@
 import { readBodyText, respond } from "@/lib/service/http";
 import { listMechanisms, MAX_MECHANISM_BODY, uploadMechanism } from "@/lib/service/mechanisms";
+import { ownerFromCookieHeader, ownerOf } from "@/lib/service/owner";
+import { limitRequest } from "@/lib/service/rateLimit";
 
 export const dynamic = "force-dynamic";
 
-export function GET() {
-  return respond(async () => Response.json(await listMechanisms()));
+/** The built-ins, and this client's own uploads (owner cookie). */
+export function GET(req: Request) {
+  return respond(async () => Response.json(await listMechanisms(ownerFromCookieHeader(req.headers.get("cookie")))));
 }
 
 export function POST(req: Request) {
   return respond(async () => {
+    await limitRequest(req);
     const text = await readBodyText(req, MAX_MECHANISM_BODY);
-    const out = await uploadMechanism(text, req.headers.get("content-type") ?? "");
-    return Response.json(out, { status: out.created ? 201 : 200 });
+    const { owner, setCookie } = ownerOf(req);
+    const out = await uploadMechanism(text, req.headers.get("content-type") ?? "", owner);
+    const headers: HeadersInit = setCookie ? { "set-cookie": setCookie } : {};
+    return Response.json(out, { status: 201, headers });
   });
 }
