@@ -9,7 +9,17 @@ import "server-only";
 import { createJobBackend } from "../jobs/createJobBackend";
 import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
 import { notFound } from "./http";
-import { comparisonJob, comparisonPath, profilePath, sweepJob, validateComparison, validateSweep } from "./profiles";
+import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
+import {
+  COMPARISON_KIND,
+  comparisonJob,
+  comparisonPath,
+  PROFILE_KIND,
+  profilePath,
+  sweepJob,
+  validateComparison,
+  validateSweep,
+} from "./profiles";
 import { uncertaintyJob } from "./uncertainty";
 
 /** The handler of every job kind (also run by the queue workers). */
@@ -48,12 +58,30 @@ export function jobView(s: JobStatus): JobView {
   return view;
 }
 
-export async function startSweep(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("profile-sweep", await validateSweep(body)));
+/** A started job with the deletion token of the record it will store (shown once). */
+export interface StartedJob extends JobView {
+  deletionToken: string;
+  deletionNote: string;
 }
 
-export async function startComparison(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("comparison", await validateComparison(body)));
+async function submitDeletable(kind: string, input: object): Promise<StartedJob> {
+  const deletion = newDeletionToken();
+  const view = jobView(await jobBackend().submit(kind, { ...input, deleteHash: deletion.hash }));
+  return { ...view, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
+}
+
+export async function startSweep(body: unknown): Promise<StartedJob> {
+  return submitDeletable("profile-sweep", await validateSweep(body));
+}
+
+export async function startComparison(body: unknown): Promise<StartedJob> {
+  return submitDeletable("comparison", await validateComparison(body));
+}
+
+/** DELETE of a stored sweep or comparison with the token its job was started with. */
+export async function deleteSweepRecord(kind: "profile" | "comparison", id: string, token: string | null) {
+  const what = kind === "profile" ? "profile sweep" : "comparison";
+  await deleteWithToken([{ kind: kind === "profile" ? PROFILE_KIND : COMPARISON_KIND, id }], token, what);
 }
 
 const JOB_ID = /^[A-Za-z0-9_-]{16}$/;

@@ -27,7 +27,9 @@ import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepR
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { notFound } from "./http";
+import { liveOrThrow } from "./lifecycle";
 import { listMechanisms, mechanismSource } from "./mechanisms";
+import { keepWithinBudget } from "./retention";
 
 export const PROFILE_KIND = "profile";
 export const COMPARISON_KIND = "comparison";
@@ -140,7 +142,12 @@ export interface ProfileRecordBody {
   result: SweepResult;
 }
 
-async function storeSweep(p: Prepared, result: SweepResult): Promise<string> {
+/** What a job's input carries besides the request: the hash of the deletion token handed to the client. */
+export interface Deletable {
+  deleteHash?: string;
+}
+
+async function storeSweep(p: Prepared, result: SweepResult, deleteHash?: string): Promise<string> {
   const id = newRecordId();
   // the CSV text is kept once, as the parsed profile
   const request: SweepRequest =
@@ -148,12 +155,14 @@ async function storeSweep(p: Prepared, result: SweepResult): Promise<string> {
       ? { ...p.request, profile: { kind: "csv", csv: "", name: p.request.profile.name } }
       : p.request;
   const body: ProfileRecordBody = { request, profile: p.profile, result };
+  await keepWithinBudget();
   await getStore().putRecord({
     id,
     kind: PROFILE_KIND,
     engineVersion: ENGINE_VERSION,
     body,
     createdAt: new Date().toISOString(),
+    deleteHash,
   });
   return id;
 }
@@ -166,11 +175,12 @@ export async function validateSweep(body: unknown): Promise<SweepRequest> {
 }
 
 /** Job handler "profile-sweep". */
-export async function sweepJob(input: SweepRequest, ctx: JobContext) {
+export async function sweepJob(job: SweepRequest & Deletable, ctx: JobContext) {
+  const { deleteHash, ...input } = job;
   const p = await prepareSweep(input);
   const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)), ctx.tasks);
   if (ctx.signal.aborted) throw ctx.signal.reason;
-  return { resultId: await storeSweep(p, result), resultKind: PROFILE_KIND };
+  return { resultId: await storeSweep(p, result, deleteHash), resultKind: PROFILE_KIND };
 }
 
 /** Parses and checks a comparison request; stored sides must exist. */
@@ -190,7 +200,9 @@ export interface ComparisonRecordBody {
 }
 
 /** Job handler "comparison": runs the sides that are not stored yet (each stored as a sweep), then compares. */
-export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
+export async function comparisonJob(job: ComparisonRequest & Deletable, ctx: JobContext) {
+  // the sweeps computed for the comparison take its deletion token too
+  const { deleteHash, ...input } = job;
   const prepared = await Promise.all(
     (["a", "b"] as const).map((key) => {
       const side = input[key];
@@ -219,7 +231,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
       ctx.tasks,
     );
     if (ctx.signal.aborted) throw ctx.signal.reason;
-    sides.push({ id: await storeSweep(p, result), result });
+    sides.push({ id: await storeSweep(p, result, deleteHash), result });
   }
   const result = compareSweeps(sides[0].result, sides[1].result, {
     labels: input.labels,
@@ -238,6 +250,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
     engineVersion: ENGINE_VERSION,
     body,
     createdAt: new Date().toISOString(),
+    deleteHash,
   });
   return { resultId: id, resultKind: COMPARISON_KIND };
 }
@@ -251,12 +264,11 @@ export interface StoredProfileRecord {
 }
 
 export async function getProfileRecord(id: string, path = "id"): Promise<StoredProfileRecord> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(PROFILE_KIND, id) : null;
-  if (!r) {
-    const e = notFound("profile sweep", id);
-    if (path !== "id") throw new InputError(path, `no stored profile sweep with id ${id}`, "not-found");
-    throw e;
+  const found = ID_PATTERN.test(id) ? await getStore().getRecord(PROFILE_KIND, id) : null;
+  if (path !== "id" && (!found || found.deletedAt)) {
+    throw new InputError(path, `no stored profile sweep with id ${id}${found ? " (it was deleted)" : ""}`, "not-found");
   }
+  const r = liveOrThrow(found, "profile sweep", id);
   return {
     id: r.id,
     createdAt: r.createdAt,
@@ -275,8 +287,7 @@ export interface StoredComparisonRecord {
 }
 
 export async function getComparisonRecord(id: string): Promise<StoredComparisonRecord> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(COMPARISON_KIND, id) : null;
-  if (!r) throw notFound("comparison", id);
+  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(COMPARISON_KIND, id) : null, "comparison", id);
   return {
     id: r.id,
     createdAt: r.createdAt,

@@ -1,4 +1,5 @@
 import { readJsonBody, respond } from "@/lib/service/http";
+import { limitRequest } from "@/lib/service/rateLimit";
 import { MAX_UNCERTAINTY_BODY } from "@/lib/service/uncertainty";
 import { startUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 
@@ -7,6 +8,7 @@ export const dynamic = "force-dynamic";
 /** Queues Monte Carlo ranges of one analysis ({ analysis }) or of a stored profile sweep ({ profileId, samples }). */
 export function POST(req: Request) {
   return respond(async () => {
+    await limitRequest(req);
     const job = await startUncertaintyJob(await readJsonBody(req, MAX_UNCERTAINTY_BODY));
     return Response.json(job, { status: 202 });
   });
