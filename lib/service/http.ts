@@ -111,11 +111,10 @@ export function parseJsonBody(text: string): unknown {
 export function refuseDeepJson(text: string): void {
   const deep = jsonTooDeep(text, NESTING_DEFAULTS.maxDepth);
   if (!deep) return;
-  throw new HttpError(
-    400,
+  throw new EngineError(
     "too-deep",
     `the body is nested too deeply: more than ${NESTING_DEFAULTS.maxDepth} levels of brackets (line ${deep.line}, column ${deep.column})`,
-    "(body)",
+    { path: "(body)", line: deep.line, column: deep.column },
   );
 }
 

@@ -17,6 +17,8 @@ export const RETENTION_DEFAULTS = {
   maxStore_MB: 2000,
   /** least time between two expiry passes, ms; default 60 s */
   sweepEvery_ms: 60_000,
+  /** drafts evicted at a time while over budget (the stored size is summed again after each batch); default 10 */
+  evictBatch: 10,
 };
 
 export type RetentionConfig = typeof RETENTION_DEFAULTS;
@@ -60,7 +62,7 @@ export async function retentionPass(store: Store, config: RetentionConfig, now_m
   let bytes = await store.storedBytes();
   const budget = config.maxStore_MB * 1e6;
   while (bytes > budget) {
-    const n = await store.expireDrafts(at, at, 100);
+    const n = await store.expireDrafts(at, at, config.evictBatch);
     if (n === 0) {
       throw new HttpError(
         507,

@@ -9,12 +9,20 @@
  * Plain strings, no server-only import: next.config.ts reads it too.
  */
 
+/**
+ * The one inline style element a library adds: cytoscape (3.x) inserts
+ * `<style>.__________cytoscape_container { position: relative; }</style>` into
+ * the head; it is allowed by the SHA-256 of that exact text (the CSP browser
+ * test fails if a new version changes it).
+ */
+export const CYTOSCAPE_STYLE_HASH = "sha256-pgvDUBa4IjFA2yuSJ2cqcyxmNYJMborsd0ORcRv9vw8=";
+
 /** The CSP of a page rendered with `nonce`; `dev` adds 'unsafe-eval' for React's development build. */
 export function pageCsp(nonce: string, dev = false): string {
   return [
     "default-src 'self'",
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
-    `style-src 'self' 'nonce-${nonce}'`,
+    `style-src 'self' 'nonce-${nonce}' '${CYTOSCAPE_STYLE_HASH}'`,
     "style-src-attr 'unsafe-inline'",
     // PNG and SVG exports are drawn to data: and blob: URLs
     "img-src 'self' data: blob:",
