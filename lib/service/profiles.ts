@@ -26,7 +26,6 @@ import { runSweep, type SweepExecutor, type SweepProgress } from "../profiles/ru
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
-import { notFound } from "./http";
 import { liveOrThrow } from "./lifecycle";
 import { listMechanisms, mechanismSource } from "./mechanisms";
 import { keepWithinBudget } from "./retention";

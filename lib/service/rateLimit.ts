@@ -35,7 +35,7 @@ const int = (v: string | undefined, name: string, min: number, d: number): numbe
   return n;
 };
 
-export function rateConfigFromEnv(env: NodeJS.ProcessEnv = process.env): RateConfig {
+export function rateConfigFromEnv(env: Record<string, string | undefined> = process.env): RateConfig {
   return {
     points: int(env.OZONE_RATE_LIMIT, "OZONE_RATE_LIMIT", 1, RATE_DEFAULTS.points),
     window_s: int(env.OZONE_RATE_WINDOW_S, "OZONE_RATE_WINDOW_S", 1, RATE_DEFAULTS.window_s),

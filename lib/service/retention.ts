@@ -30,7 +30,7 @@ const positive = (v: string | undefined, name: string, d: number): number => {
   return n;
 };
 
-export function retentionConfigFromEnv(env: NodeJS.ProcessEnv = process.env): RetentionConfig {
+export function retentionConfigFromEnv(env: Record<string, string | undefined> = process.env): RetentionConfig {
   return {
     ...RETENTION_DEFAULTS,
     draftTtl_days: positive(env.OZONE_DRAFT_TTL_DAYS, "OZONE_DRAFT_TTL_DAYS", RETENTION_DEFAULTS.draftTtl_days),

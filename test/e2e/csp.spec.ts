@@ -52,7 +52,9 @@ for (const path of ["/", "/profiles", "/compare", "/assess"]) {
     await page.goto(path);
     await page.waitForLoadState("networkidle");
     await expect(page.locator("main")).toBeVisible();
-    await page.screenshot({ path: `test-results/screenshots/csp${path === "/" ? "-home" : path.replace("/", "-")}.png` });
+    await page.screenshot({
+      path: `test-results/screenshots/csp${path === "/" ? "-home" : path.replace("/", "-")}.png`,
+    });
     expect(await violations(page, console)).toEqual([]);
   });
 }

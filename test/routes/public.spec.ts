@@ -1,5 +1,5 @@
 import { readFileSync } from "node:fs";
-import { expect, request as apiRequest, test } from "@playwright/test";
+import { request as apiRequest, expect, test } from "@playwright/test";
 import { finish } from "./finishJob";
 
 // Running in public: deletion with tokens and 410 tombstones, private uploads, refusals of hostile and
@@ -219,7 +219,9 @@ test.describe("refusals of hostile and over-limit documents", () => {
   test("a document with no solved species or no reactions is refused at upload, naming what is missing", async ({
     request,
   }) => {
-    const r = await request.post("/api/mechanisms", { data: { text: "title: empty\nversion: \"1\"\nspecies: []\nreactions: []\n" } });
+    const r = await request.post("/api/mechanisms", {
+      data: { text: 'title: empty\nversion: "1"\nspecies: []\nreactions: []\n' },
+    });
     expect(r.status()).toBe(400);
     const { error } = await r.json();
     expect(error.code).toBe("empty-mechanism");
