@@ -6,7 +6,7 @@ import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
 import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
 import type { SampleBatchResult } from "../uncertainty/types";
-import { checkUpload, type UploadCheck } from "./check-upload";
+import { checkUploadBody, type UploadCheck } from "./check-upload";
 import { compileSource, type MechanismSource } from "./mechanism-source";
 import { runAnalysis } from "./run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "./types";
@@ -17,14 +17,14 @@ export type EngineJob =
   | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch }
   /** a batch of Monte Carlo samples around a central steady state (lib/uncertainty) */
   | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch }
-  /** parse and check an uploaded document off the main thread (lib/engine/check-upload.ts) */
-  | { kind: "check-upload"; text: string; format?: "yaml" | "json" };
+  /** parse and check an upload's raw body off the main thread (lib/engine/check-upload.ts); `body` is transferred */
+  | { kind: "check-upload"; body: Uint8Array; contentType: string };
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
   | { kind: "profile-levels"; result: LevelBatchResult }
   | { kind: "uncertainty-samples"; result: SampleBatchResult }
-  | { kind: "check-upload"; result: UploadCheck };
+  | { kind: "check-upload"; result: UploadCheck & { text: string } };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -49,7 +49,7 @@ export function runJob(job: EngineJob): EngineJobResult {
       return { kind: "uncertainty-samples", result: runSampleBatch(mech, job.batch) };
     }
     case "check-upload":
-      return { kind: "check-upload", result: checkUpload(job.text, job.format) };
+      return { kind: "check-upload", result: checkUploadBody(job.body, job.contentType) };
     default:
       throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);
   }

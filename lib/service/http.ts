@@ -69,9 +69,18 @@ export async function respond(fn: () => Promise<Response> | Response): Promise<R
 
 /** Reads the body as text, refusing more than maxBytes without reading it all. */
 export async function readBodyText(req: Request, maxBytes: number): Promise<string> {
+  return Buffer.from(await readBodyBytes(req, maxBytes)).toString("utf8");
+}
+
+/**
+ * Reads the body into one buffer of its own (never a slice of Node's shared
+ * pool, so that it can be transferred to a worker), refusing more than
+ * maxBytes without reading it all.
+ */
+export async function readBodyBytes(req: Request, maxBytes: number): Promise<Uint8Array> {
   const declared = Number(req.headers.get("content-length") ?? "NaN");
   if (declared > maxBytes) throw tooLarge(maxBytes);
-  if (!req.body) return "";
+  if (!req.body) return new Uint8Array(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;
@@ -85,7 +94,13 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
     }
     chunks.push(value);
   }
-  return Buffer.concat(chunks).toString("utf8");
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
 }
 
 export async function readJsonBody(req: Request, maxBytes: number): Promise<unknown> {

@@ -7,24 +7,18 @@
  * stored before that keep working.
  */
 import "server-only";
-import { z } from "zod";
 import type { MechanismSource } from "../engine/mechanism-source";
 import { compileSource } from "../engine/mechanism-source";
 import { enginePool } from "../engine/pool";
-import { parseWith } from "../engine/request-schema";
 import { builtinMechanisms, loadBuiltinMechanism } from "../mechanism";
 import type { CompiledMechanism } from "../mechanism/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
-import { notFound, refuseDeepJson } from "./http";
+import { notFound } from "./http";
 import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
 import { ownerHash } from "./owner";
 
 /** Largest mechanism upload accepted, bytes (the loader's own text limit is 2 MiB). */
 export const MAX_MECHANISM_BODY = 4 * 1024 * 1024;
-
-const uploadSchema = z
-  .object({ text: z.string().min(1, "expected the document text"), format: z.enum(["yaml", "json"]).optional() })
-  .strict();
 
 export function summarise(id: string, builtin: boolean, mech: CompiledMechanism, text: string) {
   return {
@@ -53,26 +47,15 @@ export function summarise(id: string, builtin: boolean, mech: CompiledMechanism,
 /** A new upload id: "u-" + 96 random bits. */
 const newUploadId = () => `u-${newRecordId()}`;
 
-/** Body is { text, format? } as JSON, or the document itself (YAML or JSON). `owner` is the uploader's cookie value. */
-export async function uploadMechanism(body: string, contentType: string, owner: string) {
-  let text = body;
-  let format: "yaml" | "json" | undefined;
-  if (contentType.includes("json")) {
-    // a body too deep for the wrapper is refused here; other JSON goes to the loader as the document
-    refuseDeepJson(body);
-    let parsed: unknown;
-    try {
-      parsed = JSON.parse(body);
-    } catch {
-      parsed = undefined;
-    }
-    if (parsed && typeof parsed === "object" && "text" in parsed) {
-      const u = parseWith(uploadSchema, parsed);
-      text = u.text;
-      format = u.format;
-    }
-  }
-  const checked = (await enginePool().run({ kind: "check-upload", text, format })).result;
+/**
+ * Body is { text, format? } as JSON, or the document itself (YAML or JSON),
+ * as raw bytes: they are moved to an engine worker, which decodes, pre-scans,
+ * parses and checks them. `owner` is the uploader's cookie value.
+ */
+export async function uploadMechanism(body: Uint8Array, contentType: string, owner: string) {
+  const job = { kind: "check-upload" as const, body, contentType };
+  const checked = (await enginePool().run(job, undefined, [body.buffer as ArrayBuffer])).result;
+  const text = checked.text;
   const id = newUploadId();
   const deletion = newDeletionToken();
   await getStore().putMechanism({

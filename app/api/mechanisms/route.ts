@@ -1,4 +1,4 @@
-import { readBodyText, respond } from "@/lib/service/http";
+import { readBodyBytes, respond } from "@/lib/service/http";
 import { listMechanisms, MAX_MECHANISM_BODY, uploadMechanism } from "@/lib/service/mechanisms";
 import { ownerFromCookieHeader, ownerOf } from "@/lib/service/owner";
 import { limitRequest } from "@/lib/service/rateLimit";
@@ -13,9 +13,9 @@ export function GET(req: Request) {
 export function POST(req: Request) {
   return respond(async () => {
     await limitRequest(req);
-    const text = await readBodyText(req, MAX_MECHANISM_BODY);
+    const body = await readBodyBytes(req, MAX_MECHANISM_BODY);
     const { owner, setCookie } = ownerOf(req);
-    const out = await uploadMechanism(text, req.headers.get("content-type") ?? "", owner);
+    const out = await uploadMechanism(body, req.headers.get("content-type") ?? "", owner);
     const headers: HeadersInit = setCookie ? { "set-cookie": setCookie } : {};
     return Response.json(out, { status: 201, headers });
   });
