@@ -16,7 +16,7 @@ export {
   tooDeepDiagnostic,
 } from "./loadMechanism";
 export { missingContent } from "./missingContent";
-export { jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
+export { JsonDepthScanner, jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
 export { type EquationTerm, type ParsedEquation, parseEquation } from "./parseEquation";
 export { parseFormula } from "./parseFormula";
 export { poolExpression, weightedSum } from "./poolExpression";

@@ -130,3 +130,39 @@ export function yamlTooDeep(text: string, maxDepth = NESTING_DEFAULTS.maxDepth):
   }
   return null;
 }
+
+/**
+ * The JSON scan of `jsonTooDeep` fed chunk by chunk as a body arrives, on its
+ * UTF-8 bytes (brackets, quotes and backslashes are single bytes, never part
+ * of a longer character), so that a hostile body is refused after its first
+ * chunk instead of after all 4 MB. Columns count bytes.
+ */
+export class JsonDepthScanner {
+  private depth = 0;
+  private inString = false;
+  private escaped = false;
+  private line = 1;
+  private column = 0;
+
+  constructor(private readonly maxDepth = NESTING_DEFAULTS.maxDepth) {}
+
+  /** Scans the next chunk; the first place too deep, or null. */
+  feed(chunk: Uint8Array): TooDeep | null {
+    for (let i = 0; i < chunk.length; i++) {
+      const c = chunk[i];
+      this.column++;
+      if (c === NEWLINE) {
+        this.line++;
+        this.column = 0;
+      } else if (this.inString) {
+        if (this.escaped) this.escaped = false;
+        else if (c === BACKSLASH) this.escaped = true;
+        else if (c === QUOTE) this.inString = false;
+      } else if (c === QUOTE) this.inString = true;
+      else if (c === OPEN_SQUARE || c === OPEN_CURLY) {
+        if (++this.depth > this.maxDepth) return { depth: this.depth, line: this.line, column: this.column };
+      } else if (c === CLOSE_SQUARE || c === CLOSE_CURLY) this.depth = Math.max(0, this.depth - 1);
+    }
+    return null;
+  }
+}

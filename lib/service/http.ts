@@ -3,7 +3,7 @@
  * read under a size limit. Every error body is { error: { code, message, path } }.
  */
 import { EngineError, jsonParseMessage, MechanismError, safeExcerpt } from "../errors";
-import { jsonTooDeep, NESTING_DEFAULTS } from "../mechanism/nestingDepth";
+import { JsonDepthScanner, jsonTooDeep, NESTING_DEFAULTS, type TooDeep } from "../mechanism/nestingDepth";
 
 export class HttpError extends EngineError {
   constructor(
@@ -77,7 +77,12 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
  * pool, so that it can be transferred to a worker), refusing more than
  * maxBytes without reading it all.
  */
-export async function readBodyBytes(req: Request, maxBytes: number): Promise<Uint8Array> {
+export async function readBodyBytes(
+  req: Request,
+  maxBytes: number,
+  /** sees each chunk as it arrives and may throw to refuse the body early (the reader is then cancelled) */
+  inspect?: (chunk: Uint8Array) => void,
+): Promise<Uint8Array> {
   const declared = Number(req.headers.get("content-length") ?? "NaN");
   if (declared > maxBytes) throw tooLarge(maxBytes);
   if (!req.body) return new Uint8Array(0);
@@ -92,6 +97,14 @@ export async function readBodyBytes(req: Request, maxBytes: number): Promise<Uin
       await reader.cancel();
       throw tooLarge(maxBytes);
     }
+    if (inspect) {
+      try {
+        inspect(value);
+      } catch (e) {
+        await reader.cancel();
+        throw e;
+      }
+    }
     chunks.push(value);
   }
   const out = new Uint8Array(total);
@@ -103,13 +116,19 @@ export async function readBodyBytes(req: Request, maxBytes: number): Promise<Uin
   return out;
 }
 
+/** Reads and parses a JSON body; nesting beyond the limit is refused while the body arrives. */
 export async function readJsonBody(req: Request, maxBytes: number): Promise<unknown> {
-  return parseJsonBody(await readBodyText(req, maxBytes));
+  const bytes = await readBodyBytes(req, maxBytes, jsonDepthGuard());
+  return parseScannedJson(Buffer.from(bytes).toString("utf8"));
 }
 
 /** JSON.parse after a linear nesting pre-scan; errors quote only a short, escaped excerpt. */
 export function parseJsonBody(text: string): unknown {
   refuseDeepJson(text);
+  return parseScannedJson(text);
+}
+
+function parseScannedJson(text: string): unknown {
   try {
     return JSON.parse(text);
   } catch (e) {
@@ -125,8 +144,20 @@ export function parseJsonBody(text: string): unknown {
 /** 400 "too-deep" for a JSON body nested beyond NESTING_DEFAULTS.maxDepth, naming the line. */
 export function refuseDeepJson(text: string): void {
   const deep = jsonTooDeep(text, NESTING_DEFAULTS.maxDepth);
-  if (!deep) return;
-  throw new EngineError(
+  if (deep) throw tooDeepBody(deep);
+}
+
+/** A chunk inspector for readBodyBytes that refuses a JSON body as soon as it nests too deeply. */
+export function jsonDepthGuard(): (chunk: Uint8Array) => void {
+  const scanner = new JsonDepthScanner(NESTING_DEFAULTS.maxDepth);
+  return (chunk) => {
+    const deep = scanner.feed(chunk);
+    if (deep) throw tooDeepBody(deep);
+  };
+}
+
+function tooDeepBody(deep: TooDeep): EngineError {
+  return new EngineError(
     "too-deep",
     `the body is nested too deeply: more than ${NESTING_DEFAULTS.maxDepth} levels of brackets (line ${deep.line}, column ${deep.column})`,
     { path: "(body)", line: deep.line, column: deep.column },

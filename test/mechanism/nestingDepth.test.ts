@@ -2,7 +2,14 @@ import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { MechanismError } from "../../lib/errors";
-import { builtinMechanisms, jsonTooDeep, loadBuiltinMechanism, loadMechanism, yamlTooDeep } from "../../lib/mechanism";
+import {
+  builtinMechanisms,
+  JsonDepthScanner,
+  jsonTooDeep,
+  loadBuiltinMechanism,
+  loadMechanism,
+  yamlTooDeep,
+} from "../../lib/mechanism";
 
 const fixture = (f: string) => fs.readFileSync(path.join(process.cwd(), "test", "fixtures", "mechanisms", f), "utf8");
 
@@ -57,5 +64,26 @@ describe("the nesting pre-scan", () => {
     expect(jsonTooDeep("[".repeat(2_000_000) + "]".repeat(2_000_000))?.depth).toBe(65);
     expect(yamlTooDeep(`a:\n${" x: y\n".repeat(600_000)}`)).toBeNull();
     expect(performance.now() - t0).toBeLessThan(5_000);
+  });
+});
+
+describe("the chunked JSON scan", () => {
+  const bytes = (s: string) => new TextEncoder().encode(s);
+
+  it("agrees with the whole-text scan however the body is cut, strings and escapes included", () => {
+    const text = `{"a": "\\"[[[[", "b": ${"[".repeat(70)}`;
+    const whole = jsonTooDeep(text);
+    for (const cut of [1, 2, 3, 7, 16]) {
+      const s = new JsonDepthScanner();
+      let found = null;
+      const b = bytes(text);
+      for (let i = 0; i < b.length && !found; i += cut) found = s.feed(b.subarray(i, i + cut));
+      expect(found, `chunks of ${cut}`).toEqual(whole);
+    }
+  });
+
+  it("refuses 2,000,000 brackets on the first 64 KiB chunk", () => {
+    const s = new JsonDepthScanner();
+    expect(s.feed(bytes("[".repeat(65_536)))).toMatchObject({ depth: 65, line: 1, column: 65 });
   });
 });
