@@ -65,7 +65,7 @@ export const fetchMechanism = (id: string, signal?: AbortSignal) =>
   call<MechanismView>(`/api/mechanisms/${encodeURIComponent(id)}`, { signal });
 
 export const uploadMechanism = (text: string) =>
-  call<{ id: string; title: string; warnings: Problem[] }>("/api/mechanisms", {
+  call<{ id: string; title: string; warnings: Problem[]; deletionToken: string }>("/api/mechanisms", {
     method: "POST",
     headers: { "content-type": "application/json" },
     body: JSON.stringify({ text, format: /^\s*[{[]/.test(text) ? "json" : "yaml" }),

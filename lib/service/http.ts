@@ -80,7 +80,7 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
 export async function readBodyBytes(
   req: Request,
   maxBytes: number,
-  /** sees each chunk as it arrives and may throw to refuse the body early (the reader is then cancelled) */
+  /** sees each chunk as it arrives and may throw to refuse the body: the rest is then read and dropped */
   inspect?: (chunk: Uint8Array) => void,
 ): Promise<Uint8Array> {
   const declared = Number(req.headers.get("content-length") ?? "NaN");
@@ -88,6 +88,7 @@ export async function readBodyBytes(
   if (!req.body) return new Uint8Array(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
+  let refused: unknown = null;
   let total = 0;
   for (;;) {
     const { done, value } = await reader.read();
@@ -97,16 +98,19 @@ export async function readBodyBytes(
       await reader.cancel();
       throw tooLarge(maxBytes);
     }
-    if (inspect) {
-      try {
-        inspect(value);
-      } catch (e) {
-        await reader.cancel();
-        throw e;
-      }
+    if (refused) continue;
+    try {
+      inspect?.(value);
+    } catch (e) {
+      // the rest is read and dropped, not kept: cutting the connection would reset it under the client,
+      // which then never sees the refusal
+      refused = e;
+      chunks.length = 0;
+      continue;
     }
     chunks.push(value);
   }
+  if (refused) throw refused;
   const out = new Uint8Array(total);
   let at = 0;
   for (const c of chunks) {
