@@ -13,7 +13,7 @@ import { type ChildProcess, spawn } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import { jsonTooDeep } from "../../lib/mechanism/nestingDepth";
+import { JsonDepthScanner, jsonTooDeep } from "../../lib/mechanism/nestingDepth";
 import type { BenchCase } from "../types";
 
 const PORT = Number(process.env.BENCH_PORT ?? 3293);
@@ -67,7 +67,18 @@ async function health(): Promise<number> {
   return dt;
 }
 
+const flatBytes = new TextEncoder().encode(flat);
+const chunked = (bytes: Uint8Array) => {
+  const s = new JsonDepthScanner();
+  for (let i = 0; i < bytes.length; i += 65_536) if (s.feed(bytes.subarray(i, i + 65_536))) return true;
+  return false;
+};
+
 const inProcess: BenchCase[] = [
+  {
+    name: "hostile (main thread): chunked nesting scan of a flat 4 MB JSON body as it arrives (64 KiB chunks)",
+    run: () => chunked(flatBytes),
+  },
   { name: "hostile (in the worker): nesting pre-scan of 4 MB nested brackets", run: () => jsonTooDeep(nested) },
   { name: "hostile (in the worker): nesting pre-scan of a flat 4 MB JSON body", run: () => jsonTooDeep(flat) },
   {
