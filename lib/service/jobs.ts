@@ -9,6 +9,7 @@ import "server-only";
 import { createJobBackend } from "../jobs/createJobBackend";
 import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
 import { notFound } from "./http";
+import { jobLedger, jobLimitFromEnv, submitWithinLimit } from "./jobLimit";
 import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
 import {
   COMPARISON_KIND,
@@ -64,18 +65,25 @@ export interface StartedJob extends JobView {
   deletionNote: string;
 }
 
-async function submitDeletable(kind: string, input: object): Promise<StartedJob> {
+/** Submits a job for a client address, within its limit of jobs at once (jobLimit.ts). */
+export function submitForClient(client: string, kind: string, input: unknown): Promise<JobStatus> {
+  const backend = jobBackend();
+  return submitWithinLimit(jobLedger(), backend, client, jobLimitFromEnv(), () => backend.submit(kind, input));
+}
+
+async function submitDeletable(kind: string, input: object, client: string): Promise<StartedJob> {
   const deletion = newDeletionToken();
-  const view = jobView(await jobBackend().submit(kind, { ...input, deleteHash: deletion.hash }));
+  const view = jobView(await submitForClient(client, kind, { ...input, deleteHash: deletion.hash }));
   return { ...view, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
 }
 
-export async function startSweep(body: unknown): Promise<StartedJob> {
-  return submitDeletable("profile-sweep", await validateSweep(body));
+/** `client`: the address the rate limits count by (rateLimit.ts `clientOf`); "local" for callers inside the process. */
+export async function startSweep(body: unknown, client = "local"): Promise<StartedJob> {
+  return submitDeletable("profile-sweep", await validateSweep(body), client);
 }
 
-export async function startComparison(body: unknown): Promise<StartedJob> {
-  return submitDeletable("comparison", await validateComparison(body));
+export async function startComparison(body: unknown, client = "local"): Promise<StartedJob> {
+  return submitDeletable("comparison", await validateComparison(body), client);
 }
 
 /** DELETE of a stored sweep or comparison with the token its job was started with. */

@@ -81,6 +81,9 @@ function limiter(): Limiter {
   return made;
 }
 
+/** The client address of a request under the configured proxies. */
+export const clientOf = (req: Request): string => clientAddress(req, limiter().config.trustedProxies);
+
 /** Counts one request of the client against its limit; 429 with Retry-After when over it. */
 export async function limitRequest(req: Request): Promise<void> {
   const { config, limiter: l } = limiter();

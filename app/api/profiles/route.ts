@@ -1,7 +1,7 @@
 import { readJsonBody, respond } from "@/lib/service/http";
 import { startSweep } from "@/lib/service/jobs";
 import { MAX_PROFILE_BODY, profileCatalogue } from "@/lib/service/profiles";
-import { limitRequest } from "@/lib/service/rateLimit";
+import { clientOf, limitRequest } from "@/lib/service/rateLimit";
 
 export const dynamic = "force-dynamic";
 
@@ -13,7 +13,7 @@ export function GET() {
 export function POST(req: Request) {
   return respond(async () => {
     await limitRequest(req);
-    const job = await startSweep(await readJsonBody(req, MAX_PROFILE_BODY));
+    const job = await startSweep(await readJsonBody(req, MAX_PROFILE_BODY), clientOf(req));
     return Response.json(job, { status: 202, headers: { location: job.statusUrl } });
   });
 }

@@ -1,5 +1,5 @@
 import { readJsonBody, respond } from "@/lib/service/http";
-import { limitRequest } from "@/lib/service/rateLimit";
+import { clientOf, limitRequest } from "@/lib/service/rateLimit";
 import { MAX_UNCERTAINTY_BODY } from "@/lib/service/uncertainty";
 import { startUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 
@@ -9,7 +9,7 @@ export const dynamic = "force-dynamic";
 export function POST(req: Request) {
   return respond(async () => {
     await limitRequest(req);
-    const job = await startUncertaintyJob(await readJsonBody(req, MAX_UNCERTAINTY_BODY));
+    const job = await startUncertaintyJob(await readJsonBody(req, MAX_UNCERTAINTY_BODY), clientOf(req));
     return Response.json(job, { status: 202 });
   });
 }
