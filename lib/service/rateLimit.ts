@@ -52,41 +52,49 @@ export function clientAddress(req: Request, trustedProxies: number): string {
   return hops[hops.length - 1 - trustedProxies] ?? hops[0] ?? "unknown";
 }
 
-interface Limiter {
+export interface Limiter {
   config: RateConfig;
   limiter: RateLimiterMemory | RateLimiterRedis;
+  /** the Redis connection of a shared limiter */
+  redis?: Redis;
 }
 
 const KEY = Symbol.for("ozone.rateLimiter");
 
+/**
+ * A limiter of this configuration: in memory, or counting in Redis at
+ * `redisUrl` under `prefix` (each web instance makes its own, and they share
+ * the count).
+ */
+export function createLimiter(config: RateConfig, redisUrl?: string, prefix = "ozone"): Limiter {
+  const opts = { points: config.points, duration: config.window_s, keyPrefix: "ozone-rate" };
+  if (!redisUrl) return { config, limiter: new RateLimiterMemory(opts) };
+  // commands fail at once while Redis is away (also before the first connection); the insurance limiter counts meanwhile
+  const redis = new Redis(redisUrl, { enableOfflineQueue: false, maxRetriesPerRequest: 1 });
+  return {
+    config,
+    redis,
+    limiter: new RateLimiterRedis({
+      ...opts,
+      keyPrefix: `${prefix}:rate`,
+      storeClient: redis,
+      insuranceLimiter: new RateLimiterMemory(opts),
+    }),
+  };
+}
+
 function limiter(): Limiter {
   const g = globalThis as unknown as Record<symbol, Limiter | undefined>;
-  if (g[KEY]) return g[KEY];
-  const config = rateConfigFromEnv();
-  const opts = { points: config.points, duration: config.window_s, keyPrefix: "ozone-rate" };
-  const url = process.env.REDIS_URL;
-  const made: Limiter = {
-    config,
-    limiter: url
-      ? new RateLimiterRedis({
-          ...opts,
-          keyPrefix: `${process.env.OZONE_QUEUE_PREFIX || "ozone"}:rate`,
-          // commands fail at once while Redis is away; the insurance limiter counts meanwhile
-          storeClient: new Redis(url, { enableOfflineQueue: false, maxRetriesPerRequest: 1 }),
-          insuranceLimiter: new RateLimiterMemory(opts),
-        })
-      : new RateLimiterMemory(opts),
-  };
-  g[KEY] = made;
-  return made;
+  g[KEY] ??= createLimiter(rateConfigFromEnv(), process.env.REDIS_URL, process.env.OZONE_QUEUE_PREFIX || "ozone");
+  return g[KEY];
 }
 
 /** The client address of a request under the configured proxies. */
 export const clientOf = (req: Request): string => clientAddress(req, limiter().config.trustedProxies);
 
 /** Counts one request of the client against its limit; 429 with Retry-After when over it. */
-export async function limitRequest(req: Request): Promise<void> {
-  const { config, limiter: l } = limiter();
+export async function limitRequest(req: Request, using: Limiter = limiter()): Promise<void> {
+  const { config, limiter: l } = using;
   try {
     await l.consume(clientAddress(req, config.trustedProxies));
   } catch (e) {
