@@ -7,10 +7,8 @@
 //   2. sends --fuzz generated malformed requests and documents, counting every status.
 // It prints the RSS trend, every status with its count, the 5xx and the responses that contain NaN.
 // Goal: 0 responses of 5xx, flat memory after warm-up, 0 NaN. Needs a build (`npm run build`).
-import { spawn } from "node:child_process";
-import { mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
+import { readFileSync } from "node:fs";
+import { startBenchServer } from "./server.mjs";
 
 const arg = (name, d) => {
   const i = process.argv.indexOf(`--${name}`);
@@ -31,20 +29,12 @@ const rand = () => {
 };
 const pick = (xs) => xs[Math.floor(rand() * xs.length)];
 
-const dataDir = mkdtempSync(path.join(tmpdir(), "ozone-soak-"));
-const server = spawn("node", ["scripts/serve.mjs", String(PORT)], {
-  env: {
-    ...process.env,
-    OZONE_DATA_DIR: dataDir,
-    NODE_ENV: "production",
-    NEXT_TELEMETRY_DISABLED: "1",
-    OZONE_RATE_LIMIT: "100000000",
-    OZONE_JOBS_PER_CLIENT: "1000",
-  },
-  stdio: "ignore",
+const server = await startBenchServer(PORT, {
+  OZONE_RATE_LIMIT: "100000000",
+  OZONE_JOBS_PER_CLIENT: "1000",
 });
 const rss_MiB = () => {
-  const m = /VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${server.pid}/status`, "utf8"));
+  const m = /VmRSS:\s+(\d+) kB/.exec(readFileSync(`/proc/${server.proc.pid}/status`, "utf8"));
   return m ? Number(m[1]) / 1024 : Number.NaN;
 };
 
@@ -162,16 +152,6 @@ function malformedDocument() {
 }
 
 try {
-  const end = Date.now() + 60_000;
-  for (;;) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) break;
-    } catch {
-      if (Date.now() > end) throw new Error("server did not start");
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-
   console.log(`soak: ${MINUTES} min of mixed requests from 4 clients, RSS every 10 s`);
   const samples = [];
   const t0 = Date.now();
@@ -232,6 +212,5 @@ try {
   for (const x of [...fiveHundreds, ...nans].slice(0, 20)) console.log(`  ${x}`);
   console.log(`RSS at the end: ${rss_MiB().toFixed(0)} MiB`);
 } finally {
-  server.kill("SIGKILL");
-  rmSync(dataDir, { recursive: true, force: true });
+  server.stop();
 }

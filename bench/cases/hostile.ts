@@ -9,17 +9,15 @@
  * the pre-scan that now runs in the worker.
  * Needs a build; without one the server cases are skipped.
  */
-import { type ChildProcess, spawn } from "node:child_process";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { existsSync } from "node:fs";
 import path from "node:path";
 import { JsonDepthScanner, jsonTooDeep } from "../../lib/mechanism/nestingDepth";
+import { startBenchServer } from "../server.mjs";
 import type { BenchCase } from "../types";
 
 const PORT = Number(process.env.BENCH_PORT ?? 3293);
 const base = `http://127.0.0.1:${PORT}`;
-let server: ChildProcess | null = null;
-let dataDir = "";
+let server: { stop(): void } | null = null;
 
 const MB4 = 4 * 1024 * 1024 - 64;
 const chunk4mb = new Uint8Array(MB4).fill(91);
@@ -97,26 +95,7 @@ export async function setup(): Promise<BenchCase[]> {
     console.log("hostile: no build found, server cases skipped (run npm run build first)");
     return inProcess;
   }
-  dataDir = mkdtempSync(path.join(tmpdir(), "ozone-bench-hostile-"));
-  server = spawn("node", ["scripts/serve.mjs", String(PORT)], {
-    env: {
-      ...process.env,
-      OZONE_DATA_DIR: dataDir,
-      NEXT_TELEMETRY_DISABLED: "1",
-      NODE_ENV: "production",
-      OZONE_TRUSTED_PROXIES: "1",
-    },
-    stdio: "ignore",
-  });
-  const end = Date.now() + 60_000;
-  for (;;) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) break;
-    } catch {
-      if (Date.now() > end) throw new Error("server did not start");
-      await new Promise((r) => setTimeout(r, 250));
-    }
-  }
+  server = await startBenchServer(PORT, { OZONE_TRUSTED_PROXIES: "1" });
   return [
     ...inProcess,
     ...SHAPES.map(([what, type, body]) => ({
@@ -150,6 +129,5 @@ export async function teardown(): Promise<void> {
   await background;
   if (server)
     console.log(`hostile: worst GET /api/health latency during hostile uploads ${worstHealth_ms.toFixed(0)} ms`);
-  server?.kill("SIGKILL");
-  if (dataDir) rmSync(dataDir, { recursive: true, force: true });
+  server?.stop();
 }
