@@ -48,7 +48,8 @@ async function send(label, url, init = {}) {
     status = r.status;
     const text = await r.text();
     if (status >= 500) fiveHundreds.push(`${label}: ${status} ${text.slice(0, 160)}`);
-    if (/\bNaN\b/.test(text)) nans.push(`${label}: ${url}`);
+    // a NaN the server computed, not one quoted back from a document that contained the word
+    if (/\bNaN\b/.test(text) && !/\bNaN\b/.test(String(init.body ?? ""))) nans.push(`${label}: ${url}`);
     statuses.set(status, (statuses.get(status) ?? 0) + 1);
     return { status, text };
   } catch (e) {
