@@ -8,6 +8,7 @@ import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch"
 import type { SampleBatchResult } from "../uncertainty/types";
 import { checkUploadBody, type UploadCheck } from "./check-upload";
 import { compileSource, type MechanismSource } from "./mechanism-source";
+import { summarise } from "./mechanism-summary";
 import { runAnalysis } from "./run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "./types";
 
@@ -18,13 +19,16 @@ export type EngineJob =
   /** a batch of Monte Carlo samples around a central steady state (lib/uncertainty) */
   | { kind: "uncertainty-samples"; mechanism: MechanismSource; batch: SampleBatch }
   /** parse and check an upload's raw body off the main thread (lib/engine/check-upload.ts); `body` is transferred */
-  | { kind: "check-upload"; body: Uint8Array; contentType: string };
+  | { kind: "check-upload"; body: Uint8Array; contentType: string }
+  /** an uploaded mechanism's species, reactions and pools (its text stays with the caller) */
+  | { kind: "describe-mechanism"; mechanism: MechanismSource };
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
   | { kind: "profile-levels"; result: LevelBatchResult }
   | { kind: "uncertainty-samples"; result: SampleBatchResult }
-  | { kind: "check-upload"; result: UploadCheck & { text: string } };
+  | { kind: "check-upload"; result: UploadCheck & { text: string } }
+  | { kind: "describe-mechanism"; result: ReturnType<typeof summarise> };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -50,6 +54,10 @@ export function runJob(job: EngineJob): EngineJobResult {
     }
     case "check-upload":
       return { kind: "check-upload", result: checkUploadBody(job.body, job.contentType) };
+    case "describe-mechanism": {
+      const m = job.mechanism;
+      return { kind: "describe-mechanism", result: summarise(m.id, false, compileSource(m), "") };
+    }
     default:
       throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);
   }

@@ -9,6 +9,7 @@
 import "server-only";
 import type { MechanismSource } from "../engine/mechanism-source";
 import { compileSource } from "../engine/mechanism-source";
+import { summarise } from "../engine/mechanism-summary";
 import { enginePool } from "../engine/pool";
 import { builtinMechanisms, loadBuiltinMechanism } from "../mechanism";
 import type { CompiledMechanism } from "../mechanism/types";
@@ -19,30 +20,6 @@ import { ownerHash } from "./owner";
 
 /** Largest mechanism upload accepted, bytes (the loader's own text limit is 2 MiB). */
 export const MAX_MECHANISM_BODY = 4 * 1024 * 1024;
-
-export function summarise(id: string, builtin: boolean, mech: CompiledMechanism, text: string) {
-  return {
-    id,
-    title: mech.title,
-    description: mech.description,
-    version: mech.version,
-    builtin,
-    text,
-    species: mech.species.map((s) => ({ id: s.id, label: s.label, role: s.role, group: s.group, atoms: s.atoms })),
-    reactions: mech.reactions.map((r) => ({
-      id: r.id,
-      equation: r.equation,
-      rate: r.rate,
-      uncertainty: r.uncertainty,
-      source: r.source,
-      note: r.note,
-    })),
-    pools: mech.pools.map((p) => ({ id: p.id, label: p.label, expression: p.expression, total: p.total })),
-    conservation: mech.conservation.map((c) => ({ id: c.id, label: c.label, expression: c.expression })),
-    photolysisChannels: mech.photolysisChannels,
-    warnings: mech.warnings,
-  };
-}
 
 /** A new upload id: "u-" + 96 random bits. */
 const newUploadId = () => `u-${newRecordId()}`;
@@ -129,11 +106,12 @@ export async function mechanismSource(id: string): Promise<MechanismSource> {
   return { id, title: stored.title, text: stored.text };
 }
 
+/** A mechanism's text, species, reactions and pools; an upload is compiled in an engine worker, not here. */
 export async function mechanismDetail(id: string) {
   const src = await mechanismSource(id);
-  const mech = compileSource(src);
-  const text = src.text ?? loadBuiltinText(id);
-  return summarise(id, src.text === undefined, mech, text);
+  if (src.text === undefined) return summarise(id, true, compileSource(src), loadBuiltinText(id));
+  const { result } = await enginePool().run({ kind: "describe-mechanism", mechanism: src });
+  return { ...result, text: src.text };
 }
 
 function loadBuiltinText(id: string): string {

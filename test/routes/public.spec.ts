@@ -43,6 +43,22 @@ test.describe("deletion with the token handed out at creation", () => {
     expect((await request.get("/api/analyses/AAAAAAAAAAAAAAAA")).status()).toBe(404);
   });
 
+  test("an explorer draft can be pinned, idempotently; a deleted one answers 410 there too", async ({ request }) => {
+    const created = await request.post("/api/analyses?draft=1", { data: analysis });
+    expect(created.status()).toBe(201);
+    const { id, deletionToken } = await created.json();
+    for (let i = 0; i < 2; i++) {
+      const pin = await request.post(`/api/analyses/${id}/pin`);
+      expect(pin.status()).toBe(200);
+      expect(await pin.json()).toEqual({ id, pinned: true });
+    }
+    const page = await request.get(`/a/${id}`);
+    expect(page.status()).toBe(200);
+    expect(await page.text()).toContain("This link is permanent");
+    await request.delete(`/api/analyses/${id}`, { headers: { "x-deletion-token": deletionToken } });
+    expect((await request.post(`/api/analyses/${id}/pin`)).status()).toBe(410);
+  });
+
   test("a wrong token takes as long as a right one would to be checked (no timing oracle)", async ({ request }) => {
     // Both paths hash the given token and compare 32 bytes in constant time; here the wall-clock medians of
     // 30 wrong tokens against a record with a token and against one without (the same code path) agree.
