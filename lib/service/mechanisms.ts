@@ -12,7 +12,6 @@ import { compileSource } from "../engine/mechanism-source";
 import { summarise } from "../engine/mechanism-summary";
 import { enginePool } from "../engine/pool";
 import { builtinMechanisms, loadBuiltinMechanism } from "../mechanism";
-import type { CompiledMechanism } from "../mechanism/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { notFound } from "./http";
 import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
