@@ -28,11 +28,17 @@ export default defineConfig({
     },
   },
   webServer: {
-    // next start directly: through npx an orphaned next-server is left when killed.
-    command: `node_modules/.bin/next start -p ${PORT}`,
+    // the server of `npm start` directly (through npx an orphaned next-server is left when killed)
+    command: `node scripts/serve.mjs ${PORT}`,
     url: `http://127.0.0.1:${PORT}/api/health`,
     reuseExistingServer: false,
     timeout: 120_000,
-    env: { OZONE_DATA_DIR: "test-results/e2e-data", NEXT_TELEMETRY_DISABLED: "1" },
+    env: {
+      OZONE_DATA_DIR: "test-results/e2e-data",
+      NEXT_TELEMETRY_DISABLED: "1",
+      NODE_ENV: "production",
+      // one trusted hop: a route test counts as another client by sending its own X-Forwarded-For (test/routes/public.spec.ts)
+      OZONE_TRUSTED_PROXIES: "1",
+    },
   },
 });

@@ -5,6 +5,9 @@ import { SiteHeader } from "@/components/SiteHeader";
 import { ENGINE_VERSION } from "@/lib/engine/version";
 import "./globals.css";
 
+// Every page is rendered per request, so that its scripts carry the nonce of its Content-Security-Policy (proxy.ts).
+export const dynamic = "force-dynamic";
+
 export const metadata: Metadata = {
   title: "Ozone Loss Cycles",
   description: "Which catalytic cycles destroy stratospheric ozone, how fast, and why.",

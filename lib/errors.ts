@@ -67,3 +67,38 @@ export function formatDiagnostic(d: Diagnostic | undefined): string {
   const where = d.line !== undefined ? ` (line ${d.line}, column ${d.column ?? 1})` : "";
   return `${d.path ? `${d.path}: ` : ""}${d.message}${where}`;
 }
+
+/** Longest excerpt of the input an error message quotes, characters. */
+export const EXCERPT_MAX = 40;
+
+/**
+ * A short, printable excerpt of user input for an error message: at most
+ * `max` characters, control characters and backslashes escaped (\n, \u0000),
+ * an ellipsis when cut. Input bytes never reach a message raw.
+ */
+export function safeExcerpt(text: string, max = EXCERPT_MAX): string {
+  const cut = text.length > max ? text.slice(0, max) : text;
+  return `"${printable(cut.replace(/["\\]/g, (c) => `\\${c}`))}${text.length > max ? "…" : ""}"`;
+}
+
+/** Text with its control characters escaped (\n, \t, \u0000), e.g. a parser's message about user input. */
+export function printable(text: string): string {
+  // biome-ignore lint/suspicious/noControlCharactersInRegex: escaping control characters is the point
+  return text.replace(/[\u0000-\u001f\u007f-\u009f]/g, (c) => {
+    if (c === "\n") return "\\n";
+    if (c === "\t") return "\\t";
+    return `\\u${c.charCodeAt(0).toString(16).padStart(4, "0")}`;
+  });
+}
+
+/** A JSON.parse message without the input V8 echoes into it ('Unexpected token …, "<input>" is not valid JSON'). */
+export function jsonParseMessage(e: unknown): string {
+  const msg = e instanceof Error ? e.message : String(e);
+  const cleaned = msg
+    .replace(
+      /^Unexpected token (.+?), "[\s\S]*?(?:"\.\.\.|") is not valid JSON$/,
+      (_m, tok: string) => `unexpected character ${safeExcerpt(tok.replace(/^'|'$/g, ""), 4)}`,
+    )
+    .split("\n")[0];
+  return printable(cleaned).slice(0, 120);
+}

@@ -8,9 +8,10 @@ if (!existsSync(`${process.env.NEXT_DIST_DIR ?? ".next"}/BUILD_ID`) || !existsSy
   execFileSync("node", ["scripts/build.mjs"], { stdio: "inherit" });
 }
 const port = process.env.PORT ?? "3000";
-const child = spawn("node_modules/.bin/next", ["start", "-p", port], {
+// scripts/serve.mjs: next's handler with the real peer address appended to X-Forwarded-For (rate limits)
+const child = spawn("node", ["scripts/serve.mjs", port], {
   stdio: "inherit",
-  env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" },
+  env: { ...process.env, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1" },
 });
 for (const sig of ["SIGINT", "SIGTERM"]) process.on(sig, () => child.kill(sig));
 child.on("exit", (code) => process.exit(code ?? 0));

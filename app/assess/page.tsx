@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
+import { cookies } from "next/headers";
 import { AssessmentBuilder, type MechanismOption, type TemplateOption } from "@/components/assessment";
 import { QUESTION_TEMPLATES, SPEC_LIMITS } from "@/lib/assessment";
 import { listMechanisms } from "@/lib/service/mechanisms";
+import { ownerFromCookies } from "@/lib/service/owner";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Build an assessment · Ozone Loss Cycles" };
@@ -9,7 +11,7 @@ export const metadata: Metadata = { title: "Build an assessment · Ozone Loss Cy
 export default async function BuildAssessmentPage() {
   let mechanisms: MechanismOption[] = [];
   try {
-    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({
+    mechanisms = (await listMechanisms(ownerFromCookies(await cookies()))).mechanisms.map((m) => ({
       id: m.id,
       title: m.title,
       description: m.description,

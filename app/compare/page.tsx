@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
+import { cookies } from "next/headers";
 import { ComparisonForm } from "@/components/profile/ComparisonForm";
+import { ownerFromCookies } from "@/lib/service/owner";
 import { profileFormOptions } from "@/lib/service/profiles";
 
 export const dynamic = "force-dynamic";
@@ -12,7 +14,7 @@ export default async function ComparePage({
 }) {
   const q = await searchParams;
   const a = typeof q.a === "string" && /^[A-Za-z0-9_-]{1,80}$/.test(q.a) ? q.a : undefined;
-  const { mechanisms, profiles } = await profileFormOptions();
+  const { mechanisms, profiles } = await profileFormOptions(ownerFromCookies(await cookies()));
   return (
     <div className="mx-auto max-w-5xl space-y-4 px-4 py-8">
       <h1 className="text-2xl font-semibold tracking-tight">Compare two profiles</h1>

@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
+import { cookies } from "next/headers";
 import { Explorer } from "@/components/explorer";
 import { listMechanisms, mechanismDetail } from "@/lib/service/mechanisms";
+import { ownerFromCookies } from "@/lib/service/owner";
 import { parseExplorerQuery } from "@/lib/viz/explorerQuery";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 
@@ -32,7 +34,7 @@ async function loadMechanisms(
   let mechanisms: MechanismSummary[] = [];
   let mechanism: MechanismView | null = null;
   try {
-    mechanisms = (await listMechanisms()).mechanisms;
+    mechanisms = (await listMechanisms(ownerFromCookies(await cookies()))).mechanisms;
   } catch {
     mechanisms = [];
   }

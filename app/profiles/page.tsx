@@ -1,13 +1,15 @@
 import type { Metadata } from "next";
+import { cookies } from "next/headers";
 import Link from "next/link";
 import { SweepForm } from "@/components/profile/SweepForm";
+import { ownerFromCookies } from "@/lib/service/owner";
 import { profileFormOptions } from "@/lib/service/profiles";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Profile sweep · Ozone Loss Cycles" };
 
 export default async function ProfilesPage() {
-  const { mechanisms, profiles } = await profileFormOptions();
+  const { mechanisms, profiles } = await profileFormOptions(ownerFromCookies(await cookies()));
   return (
     <div className="mx-auto max-w-4xl space-y-4 px-4 py-8">
       <h1 className="text-2xl font-semibold tracking-tight">Profile sweep</h1>

@@ -213,8 +213,9 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
     setBuilding(true);
     setError(null);
     try {
-      const out = (await post("/api/assessments", spec())) as { instructorUrl: string };
-      window.location.assign(out.instructorUrl);
+      const out = (await post("/api/assessments", spec())) as { instructorUrl: string; deletionToken: string };
+      // the token rides in the fragment, which no server and no Referer sees; the page shows it once
+      window.location.assign(`${out.instructorUrl}#deletion-token=${out.deletionToken}`);
     } catch (e) {
       setError({ ...(e as ApiError), during: "build" });
       setBuilding(false);

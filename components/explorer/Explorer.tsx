@@ -15,6 +15,7 @@ import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
+import { DeletionTokenNote } from "../DeletionTokenNote";
 import { type ApiError, fetchMechanism, fetchMechanisms, type Problem } from "./api";
 import { BudgetPanel } from "./BudgetPanel";
 import { ConditionsPanel } from "./ConditionsPanel";
@@ -59,6 +60,7 @@ export function Explorer(props: Props) {
     props.initialMechanism ? { [props.initialMechanism.id]: props.initialMechanism } : {},
   );
   const [mechError, setMechError] = useState<ApiError | null>(null);
+  const [uploadToken, setUploadToken] = useState<{ id: string; token: string } | null>(null);
   const [notice, setNotice] = useState<string | null>(
     props.queryWarnings?.length ? props.queryWarnings.join("; ") : null,
   );
@@ -164,7 +166,8 @@ export function Explorer(props: Props) {
     download(new Blob([svg], { type: "image/svg+xml" }), `${fileStem}.svg`);
   };
 
-  const onUploaded = (m: { id: string; title: string; warnings: Problem[] }) => {
+  const onUploaded = (m: { id: string; title: string; warnings: Problem[]; deletionToken?: string }) => {
+    setUploadToken(m.deletionToken ? { id: m.id, token: m.deletionToken } : null);
     touched.current = true;
     fetchMechanisms().then(
       (r) => setMechanisms(r.mechanisms),
@@ -230,7 +233,8 @@ export function Explorer(props: Props) {
               className="rounded border border-sky-300 bg-sky-50 px-3 py-1 text-[12px] text-sky-900"
             >
               Stored analysis of {new Date(props.stored!.createdAt).toUTCString()}: these are the stored numbers. Change
-              any condition to recompute.
+              any condition to recompute.{" "}
+              <span data-testid="permanent-link">This link is permanent: the analysis is kept for good.</span>
               {props.stored!.engineVersion !== props.stored!.currentEngineVersion ? (
                 <strong data-testid="engine-version-warning" className="ml-1 font-semibold text-amber-900">
                   Computed with engine {props.stored!.engineVersion}; the current engine is{" "}
@@ -238,6 +242,13 @@ export function Explorer(props: Props) {
                 </strong>
               ) : null}
             </div>
+          ) : null}
+          {uploadToken ? (
+            <DeletionTokenNote
+              token={uploadToken.token}
+              what="the uploaded mechanism (its analyses then answer “gone” too)"
+              deleteUrl={`/api/mechanisms/${uploadToken.id}`}
+            />
           ) : null}
           {notice ? (
             <div className="flex items-start justify-between gap-2 rounded border border-stone-300 bg-stone-50 px-3 py-1 text-[12px] text-stone-700">

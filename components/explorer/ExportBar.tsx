@@ -1,6 +1,7 @@
 "use client";
 /** Downloads of the picture and the tables, and the permalink with a copy button. */
 import { useState } from "react";
+import { pinAnalysis } from "./api";
 
 interface Props {
   analysisId: string | null;
@@ -16,6 +17,8 @@ export function ExportBar({ analysisId, onPng, onSvg, busy }: Props) {
   const [copied, setCopied] = useState<"idle" | "ok" | "failed">("idle");
   const permalink = analysisId ? `${typeof window === "undefined" ? "" : window.location.origin}/a/${analysisId}` : "";
   const copy = async () => {
+    // a copied permalink is one the user asked for: the draft is kept for good
+    if (analysisId) void pinAnalysis(analysisId).catch(() => {});
     try {
       await navigator.clipboard.writeText(permalink);
       setCopied("ok");
@@ -69,7 +72,11 @@ export function ExportBar({ analysisId, onPng, onSvg, busy }: Props) {
           readOnly
           value={permalink}
           placeholder={busy ? "computing…" : "—"}
-          title={busy ? "the stored analysis on screen; a new one is being computed" : undefined}
+          title={
+            busy
+              ? "the stored analysis on screen; a new one is being computed"
+              : "copying, opening or exporting this link keeps the analysis for good; otherwise it expires after some days"
+          }
           onFocus={(e) => e.currentTarget.select()}
           className="min-w-[120px] flex-1 rounded border border-stone-300 bg-stone-50 px-1.5 py-0.5 font-mono text-[11px] text-stone-700"
         />

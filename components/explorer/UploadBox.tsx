@@ -7,7 +7,7 @@ import { useRef, useState } from "react";
 import { ApiError, type Problem, uploadMechanism } from "./api";
 
 interface Props {
-  onUploaded(m: { id: string; title: string; warnings: Problem[] }): void;
+  onUploaded(m: { id: string; title: string; warnings: Problem[]; deletionToken?: string }): void;
   onClose(): void;
 }
 

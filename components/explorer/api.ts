@@ -65,16 +65,21 @@ export const fetchMechanism = (id: string, signal?: AbortSignal) =>
   call<MechanismView>(`/api/mechanisms/${encodeURIComponent(id)}`, { signal });
 
 export const uploadMechanism = (text: string) =>
-  call<{ id: string; title: string; warnings: Problem[] }>("/api/mechanisms", {
+  call<{ id: string; title: string; warnings: Problem[]; deletionToken: string }>("/api/mechanisms", {
     method: "POST",
     headers: { "content-type": "application/json" },
     body: JSON.stringify({ text, format: /^\s*[{[]/.test(text) ? "json" : "yaml" }),
   });
 
+/** An explorer recompute is a draft: it expires unless its permalink is copied, opened or exported. */
 export const postAnalysis = (request: AnalysisRequest, signal?: AbortSignal) =>
-  call<{ id: string; result: AnalysisResult }>("/api/analyses", {
+  call<{ id: string; result: AnalysisResult }>("/api/analyses?draft=1", {
     method: "POST",
     headers: { "content-type": "application/json" },
     body: JSON.stringify(request),
     signal,
   });
+
+/** Keeps an analysis for good (its permalink was copied). */
+export const pinAnalysis = (id: string) =>
+  call<{ id: string; pinned: boolean }>(`/api/analyses/${encodeURIComponent(id)}/pin`, { method: "POST" });

@@ -9,7 +9,9 @@ import type { StartState } from "../runs/startState";
 import type { RunSegment } from "../runs/types";
 import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
 import type { SampleBatchResult } from "../uncertainty/types";
+import { checkUploadBody, type UploadCheck } from "./check-upload";
 import { compileSource, type MechanismSource } from "./mechanism-source";
+import { summarise } from "./mechanism-summary";
 import { runAnalysis } from "./run-analysis";
 import type { AnalysisRequest, AnalysisResult } from "./types";
 
@@ -22,14 +24,20 @@ export type EngineJob =
   /** the state a run starts from (lib/runs) */
   | { kind: "run-start"; mechanism: MechanismSource; task: RunStartTask }
   /** a span of days of a run from a state (lib/runs) */
-  | { kind: "run-days"; mechanism: MechanismSource; task: RunDaysTask };
+  | { kind: "run-days"; mechanism: MechanismSource; task: RunDaysTask }
+  /** parse and check an upload's raw body off the main thread (lib/engine/check-upload.ts); `body` is transferred */
+  | { kind: "check-upload"; body: Uint8Array; contentType: string }
+  /** an uploaded mechanism's species, reactions and pools (its text stays with the caller) */
+  | { kind: "describe-mechanism"; mechanism: MechanismSource };
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
   | { kind: "profile-levels"; result: LevelBatchResult }
   | { kind: "uncertainty-samples"; result: SampleBatchResult }
   | { kind: "run-start"; result: StartState }
-  | { kind: "run-days"; result: RunSegment };
+  | { kind: "run-days"; result: RunSegment }
+  | { kind: "check-upload"; result: UploadCheck & { text: string } }
+  | { kind: "describe-mechanism"; result: ReturnType<typeof summarise> };
 
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
@@ -57,6 +65,12 @@ export function runJob(job: EngineJob): EngineJobResult {
       return { kind: "run-start", result: runStartTask(compileSource(job.mechanism), job.task) };
     case "run-days":
       return { kind: "run-days", result: runDaysTask(compileSource(job.mechanism), job.task) };
+    case "check-upload":
+      return { kind: "check-upload", result: checkUploadBody(job.body, job.contentType) };
+    case "describe-mechanism": {
+      const m = job.mechanism;
+      return { kind: "describe-mechanism", result: summarise(m.id, false, compileSource(m), "") };
+    }
     default:
       throw new EngineError("unknown-job", `unknown engine job kind ${(job as { kind: string }).kind}`);
   }

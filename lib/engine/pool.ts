@@ -21,6 +21,8 @@ export const POOL_DEFAULTS = {
 interface Pending {
   id: number;
   job: EngineJob;
+  /** buffers moved to the worker instead of copied (a large upload body) */
+  transfer: ArrayBuffer[];
   timeout_ms: number;
   resolve: (v: EngineJobResult) => void;
   reject: (e: Error) => void;
@@ -45,11 +47,13 @@ export class EnginePool {
   run<K extends EngineJob["kind"]>(
     job: Extract<EngineJob, { kind: K }>,
     timeout_ms = this.options.timeout_ms,
+    transfer: ArrayBuffer[] = [],
   ): Promise<Extract<EngineJobResult, { kind: K }>> {
     return new Promise((resolve, reject) => {
       this.queue.push({
         id: this.nextId++,
         job,
+        transfer,
         timeout_ms,
         resolve: resolve as (v: EngineJobResult) => void,
         reject,
@@ -95,7 +99,7 @@ export class EnginePool {
           ),
         );
       }, p.timeout_ms);
-      slot.worker.postMessage({ id: p.id, job: p.job });
+      slot.worker.postMessage({ id: p.id, job: p.job }, p.transfer);
     }
   }
 

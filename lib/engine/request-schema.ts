@@ -94,13 +94,40 @@ export function parseAnalysisRequest(body: unknown): AnalysisRequest {
   return parseWith(analysisRequestSchema, body) as AnalysisRequest;
 }
 
+/**
+ * The path of the first own "__proto__" key in parsed JSON, or null. zod
+ * drops such a key without a word, so it is looked for first: like every
+ * unknown key it is a 400. (Bodies are pre-scanned to 64 levels, so the
+ * recursion is bounded.)
+ */
+export function prototypeKeyPath(value: unknown, path: (string | number)[] = []): (string | number)[] | null {
+  if (value === null || typeof value !== "object") return null;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) {
+      const found = prototypeKeyPath(value[i], [...path, i]);
+      if (found) return found;
+    }
+    return null;
+  }
+  if (Object.hasOwn(value, "__proto__")) return [...path, "__proto__"];
+  for (const [k, v] of Object.entries(value)) {
+    const found = prototypeKeyPath(v, [...path, k]);
+    if (found) return found;
+  }
+  return null;
+}
+
+const formatPath = (path: PropertyKey[]) =>
+  path
+    .map((p) => (typeof p === "number" ? `[${p}]` : String(p)))
+    .join(".")
+    .replace(/\.\[/g, "[");
+
 export function parseWith<T>(schema: z.ZodType<T>, body: unknown): T {
+  const proto = prototypeKeyPath(body);
+  if (proto) throw new InputError(formatPath(proto), 'unknown key "__proto__"', "invalid-request");
   const r = schema.safeParse(body);
   if (r.success) return r.data;
   const issue = r.error.issues[0];
-  const path = issue.path
-    .map((p) => (typeof p === "number" ? `[${p}]` : p))
-    .join(".")
-    .replace(/\.\[/g, "[");
-  throw new InputError(path || "(body)", issue.message, "invalid-request");
+  throw new InputError(formatPath(issue.path) || "(body)", issue.message, "invalid-request");
 }

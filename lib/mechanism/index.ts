@@ -9,7 +9,14 @@ export {
   searchConservation,
 } from "./findConservationRelations";
 export { leftNullSpace } from "./leftNullSpace";
-export { DEFAULTS as MECHANISM_LIMITS, type LoadMechanismOptions, loadMechanism } from "./loadMechanism";
+export {
+  DEFAULTS as MECHANISM_LIMITS,
+  type LoadMechanismOptions,
+  loadMechanism,
+  tooDeepDiagnostic,
+} from "./loadMechanism";
+export { missingContent } from "./missingContent";
+export { JsonDepthScanner, jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
 export { type EquationTerm, type ParsedEquation, parseEquation } from "./parseEquation";
 export { parseFormula } from "./parseFormula";
 export { poolExpression, weightedSum } from "./poolExpression";

@@ -5,11 +5,12 @@
  * MechanismError with all errors; returns warnings with the mechanism.
  */
 import { LineCounter, parseDocument } from "yaml";
-import { type Diagnostic, MechanismError } from "../errors";
+import { type Diagnostic, jsonParseMessage, MechanismError, printable } from "../errors";
 import { canonicalJson } from "./canonicalJson";
 import { compileMechanism } from "./compileMechanism";
 import { DiagnosticSink } from "./diagnostics";
 import { type Locator, lazyLocator, makeLocator } from "./locateInDocument";
+import { jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
 import { readDocument } from "./readDocument";
 import type { LoadedMechanism, MechanismLimits } from "./types";
 
@@ -17,12 +18,13 @@ export const DEFAULTS: MechanismLimits = {
   maxSpecies: 5_000,
   maxReactions: 20_000,
   maxTextBytes: 4 * 1024 * 1024,
+  maxDepth: NESTING_DEFAULTS.maxDepth,
 };
 
 export interface LoadMechanismOptions {
   /** "yaml" or "json"; default: JSON when the text starts with "{", else YAML */
   format?: "yaml" | "json";
-  /** size limits; default `DEFAULTS` (5,000 species, 20,000 reactions, 4 MiB) */
+  /** size limits; default `DEFAULTS` (5,000 species, 20,000 reactions, 4 MiB, 64 levels) */
   limits?: Partial<MechanismLimits>;
 }
 
@@ -44,6 +46,19 @@ function fail(problems: Diagnostic[]): never {
   throw new MechanismError(problems);
 }
 
+/** The refusal of a document nested beyond the limit, before or instead of a parser's stack overflow. */
+export function tooDeepDiagnostic(maxDepth: number, at: Pick<TooDeep, "line" | "column">): Diagnostic {
+  return {
+    severity: "error",
+    code: "too-deep",
+    message: `the document is nested too deeply: more than ${maxDepth} levels of lists or mappings (a mechanism needs about 5)`,
+    line: at.line,
+    column: at.column,
+  };
+}
+
+const isStackOverflow = (e: unknown) => e instanceof RangeError && /call stack/i.test(e.message);
+
 function lineColumnAt(text: string, offset: number): { line: number; column: number } {
   let line = 1;
   let start = 0;
@@ -61,7 +76,7 @@ function parseJson(text: string): unknown {
   try {
     return JSON.parse(text);
   } catch (e) {
-    const msg = e instanceof Error ? e.message : String(e);
+    const msg = jsonParseMessage(e);
     const m = /position (\d+)/.exec(msg);
     let at: { line: number; column: number } = { line: 1, column: 1 };
     if (m) at = lineColumnAt(text, Number(m[1]));
@@ -74,7 +89,7 @@ function parseJson(text: string): unknown {
         at = { line: p.line, column: p.col };
       }
     }
-    return fail([{ severity: "error", code: "json-syntax", message: `malformed JSON: ${msg.split("\n")[0]}`, ...at }]);
+    return fail([{ severity: "error", code: "json-syntax", message: `malformed JSON: ${msg}`, ...at }]);
   }
 }
 
@@ -97,6 +112,8 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
     ]);
   }
   const format = options.format ?? (/^\s*[{[]/.test(text) ? "json" : "yaml");
+  const deep = format === "json" ? jsonTooDeep(text, limits.maxDepth) : yamlTooDeep(text, limits.maxDepth);
+  if (deep) fail([tooDeepDiagnostic(limits.maxDepth, deep)]);
 
   let data: unknown;
   let locate: Locator;
@@ -113,7 +130,7 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
       return {
         severity: "error",
         code: "yaml-syntax",
-        message: `malformed YAML: ${first}`,
+        message: `malformed YAML: ${printable(first).slice(0, 160)}`,
         line: p.line,
         column: p.col,
       };
@@ -122,11 +139,12 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
     try {
       data = doc.toJS({ maxAliasCount: 100 });
     } catch (e) {
+      if (isStackOverflow(e)) fail([tooDeepDiagnostic(limits.maxDepth, { line: 1, column: 1 })]);
       fail([
         {
           severity: "error",
           code: "yaml-syntax",
-          message: `malformed YAML: ${e instanceof Error ? e.message : e}`,
+          message: `malformed YAML: ${printable(e instanceof Error ? e.message : String(e)).slice(0, 160)}`,
           line: 1,
           column: 1,
         },

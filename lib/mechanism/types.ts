@@ -131,6 +131,8 @@ export interface MechanismLimits {
   maxReactions: number;
   /** UTF-8 bytes of the document text; default 4,194,304 (4 MiB) */
   maxTextBytes: number;
+  /** deepest nesting of lists and mappings, levels; default 64 */
+  maxDepth: number;
 }
 
 /** What `loadMechanism` returns. */

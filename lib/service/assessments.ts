@@ -31,8 +31,9 @@ import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/
 import { ENGINE_VERSION } from "../engine/version";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { type CsvExportOptions, type CsvProvenance, csvExport, csvMechanism } from "./csvProvenance";
-import { notFound } from "./http";
+import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
 import { mechanismDetail, mechanismSource } from "./mechanisms";
+import { keepWithinBudget } from "./retention";
 
 export const ASSESSMENT_KIND = "assessment";
 export const STUDENT_KIND = "assessment-student";
@@ -100,6 +101,9 @@ export async function createAssessment(body: unknown): Promise<{
   instructorUrl: string;
   studentUrl: string;
   assessment: InstructorAssessment;
+  /** shown once: DELETE /api/assessments/{instructorId} with it removes both links; on the student id, the student link alone */
+  deletionToken: string;
+  deletionNote: string;
 }> {
   const parsed = parseAssessmentSpec(body);
   const offer = await offerOf(parsed.mechanismId);
@@ -107,7 +111,9 @@ export async function createAssessment(body: unknown): Promise<{
   const spec: AssessmentSpec & { seed: number } = { ...parsed, seed: parsed.seed ?? randomBytes(4).readUInt32BE(0) };
   const generated = await generateAssessment(spec, { analyse: await analyser(spec.mechanismId) });
 
+  await keepWithinBudget();
   const store = getStore();
+  const deletion = newDeletionToken();
   const createdAt = new Date().toISOString();
   const analyses: InstructorAssessment["analyses"] = [];
   for (const a of generated.analyses) {
@@ -153,6 +159,7 @@ export async function createAssessment(body: unknown): Promise<{
     engineVersion: ENGINE_VERSION,
     body: assessment,
     createdAt,
+    deleteHash: deletion.hash,
   });
   await store.putRecord({
     kind: STUDENT_KIND,
@@ -160,6 +167,7 @@ export async function createAssessment(body: unknown): Promise<{
     engineVersion: ENGINE_VERSION,
     body: studentView(assessment),
     createdAt,
+    deleteHash: deletion.hash,
   });
   return {
     instructorId,
@@ -167,19 +175,42 @@ export async function createAssessment(body: unknown): Promise<{
     instructorUrl: instructorPath(instructorId),
     studentUrl: studentPath(studentId),
     assessment,
+    deletionToken: deletion.token,
+    deletionNote: DELETION_NOTE,
   };
 }
 
+/** Deletes both links of an assessment (instructor id and its token). */
+export async function deleteAssessment(id: string, token: string | null): Promise<void> {
+  const life = liveOrThrow(
+    ID_PATTERN.test(id) ? await getStore().getRecord(ASSESSMENT_KIND, id) : null,
+    "assessment",
+    id,
+  );
+  const studentId = (life.body as InstructorAssessment).studentId;
+  await deleteWithToken(
+    [
+      { kind: ASSESSMENT_KIND, id },
+      { kind: STUDENT_KIND, id: studentId },
+    ],
+    token,
+    "assessment",
+  );
+}
+
+/** Revokes a student link that leaked (student id and the assessment's token); the instructor link stays. */
+export async function revokeStudentLink(studentId: string, token: string | null): Promise<void> {
+  await deleteWithToken([{ kind: STUDENT_KIND, id: studentId }], token, "student sheet");
+}
+
 export async function getInstructorAssessment(id: string): Promise<InstructorAssessment> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(ASSESSMENT_KIND, id) : null;
-  if (!r) throw notFound("assessment", id);
+  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(ASSESSMENT_KIND, id) : null, "assessment", id);
   return r.body as InstructorAssessment;
 }
 
 /** Reads only the student record: the key is not in it. */
 export async function getStudentAssessment(id: string): Promise<StudentAssessment> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(STUDENT_KIND, id) : null;
-  if (!r) throw notFound("student sheet", id);
+  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(STUDENT_KIND, id) : null, "student sheet", id);
   return r.body as StudentAssessment;
 }
 

@@ -2,7 +2,8 @@
  * The one place where errors become HTTP responses, and request bodies are
  * read under a size limit. Every error body is { error: { code, message, path } }.
  */
-import { EngineError, MechanismError } from "../errors";
+import { EngineError, jsonParseMessage, MechanismError, safeExcerpt } from "../errors";
+import { JsonDepthScanner, jsonTooDeep, NESTING_DEFAULTS, type TooDeep } from "../mechanism/nestingDepth";
 
 export class HttpError extends EngineError {
   constructor(
@@ -10,6 +11,8 @@ export class HttpError extends EngineError {
     code: string,
     message: string,
     path?: string,
+    /** extra response headers, e.g. Retry-After of a 429 */
+    readonly headers: Record<string, string> = {},
   ) {
     super(code, message, { path });
     this.name = "HttpError";
@@ -20,7 +23,13 @@ const STATUS_BY_CODE: Record<string, number> = {
   "invalid-request": 400,
   "invalid-input": 400,
   "invalid-json": 400,
-  "body-too-large": 413,
+  "too-large": 413,
+  "too-deep": 400,
+  "invalid-token": 400,
+  forbidden: 403,
+  gone: 410,
+  "rate-limited": 429,
+  "storage-full": 507,
   "not-found": 404,
   "unknown-mechanism": 404,
   timeout: 422,
@@ -30,11 +39,14 @@ const STATUS_BY_CODE: Record<string, number> = {
 };
 
 export function errorResponse(e: unknown): Response {
-  if (e instanceof HttpError) return Response.json({ error: e.toJSON() }, { status: e.status });
+  if (e instanceof HttpError) return Response.json({ error: e.toJSON() }, { status: e.status, headers: e.headers });
   if (e instanceof MechanismError || (e instanceof EngineError && e.name === "MechanismError")) {
     const problems = (e as MechanismError).problems;
-    const tooBig = problems?.some((p) => p.code.startsWith("limit"));
-    return Response.json({ error: { ...e.toJSON(), problems } }, { status: tooBig ? 413 : 400 });
+    // every document over a limit is one refusal: 413 "too-large", as the OpenAPI document says
+    if (problems?.some((p) => p.code === "too-large")) {
+      return Response.json({ error: { ...e.toJSON(), code: "too-large", problems } }, { status: 413 });
+    }
+    return Response.json({ error: { ...e.toJSON(), problems } }, { status: 400 });
   }
   if (e instanceof EngineError) {
     return Response.json({ error: e.toJSON() }, { status: STATUS_BY_CODE[e.code] ?? 400 });
@@ -57,11 +69,26 @@ export async function respond(fn: () => Promise<Response> | Response): Promise<R
 
 /** Reads the body as text, refusing more than maxBytes without reading it all. */
 export async function readBodyText(req: Request, maxBytes: number): Promise<string> {
+  return Buffer.from(await readBodyBytes(req, maxBytes)).toString("utf8");
+}
+
+/**
+ * Reads the body into one buffer of its own (never a slice of Node's shared
+ * pool, so that it can be transferred to a worker), refusing more than
+ * maxBytes without reading it all.
+ */
+export async function readBodyBytes(
+  req: Request,
+  maxBytes: number,
+  /** sees each chunk as it arrives and may throw to refuse the body: the rest is then read and dropped */
+  inspect?: (chunk: Uint8Array) => void,
+): Promise<Uint8Array> {
   const declared = Number(req.headers.get("content-length") ?? "NaN");
   if (declared > maxBytes) throw tooLarge(maxBytes);
-  if (!req.body) return "";
+  if (!req.body) return new Uint8Array(0);
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
+  let refused: unknown = null;
   let total = 0;
   for (;;) {
     const { done, value } = await reader.read();
@@ -71,22 +98,78 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
       await reader.cancel();
       throw tooLarge(maxBytes);
     }
+    if (refused) continue;
+    try {
+      inspect?.(value);
+    } catch (e) {
+      // the rest is read and dropped, not kept: cutting the connection would reset it under the client,
+      // which then never sees the refusal
+      refused = e;
+      chunks.length = 0;
+      continue;
+    }
     chunks.push(value);
   }
-  return Buffer.concat(chunks).toString("utf8");
+  if (refused) throw refused;
+  const out = new Uint8Array(total);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
 }
 
+/** Reads and parses a JSON body; nesting beyond the limit is refused while the body arrives. */
 export async function readJsonBody(req: Request, maxBytes: number): Promise<unknown> {
-  const text = await readBodyText(req, maxBytes);
+  const bytes = await readBodyBytes(req, maxBytes, jsonDepthGuard());
+  return parseScannedJson(Buffer.from(bytes).toString("utf8"));
+}
+
+/** JSON.parse after a linear nesting pre-scan; errors quote only a short, escaped excerpt. */
+export function parseJsonBody(text: string): unknown {
+  refuseDeepJson(text);
+  return parseScannedJson(text);
+}
+
+function parseScannedJson(text: string): unknown {
   try {
     return JSON.parse(text);
   } catch (e) {
-    throw new HttpError(400, "invalid-json", `the body is not valid JSON: ${(e as Error).message}`, "(body)");
+    throw new HttpError(
+      400,
+      "invalid-json",
+      `the body is not valid JSON: ${jsonParseMessage(e)} (it starts ${safeExcerpt(text.trimStart())})`,
+      "(body)",
+    );
   }
 }
 
+/** 400 "too-deep" for a JSON body nested beyond NESTING_DEFAULTS.maxDepth, naming the line. */
+export function refuseDeepJson(text: string): void {
+  const deep = jsonTooDeep(text, NESTING_DEFAULTS.maxDepth);
+  if (deep) throw tooDeepBody(deep);
+}
+
+/** A chunk inspector for readBodyBytes that refuses a JSON body as soon as it nests too deeply. */
+export function jsonDepthGuard(): (chunk: Uint8Array) => void {
+  const scanner = new JsonDepthScanner(NESTING_DEFAULTS.maxDepth);
+  return (chunk) => {
+    const deep = scanner.feed(chunk);
+    if (deep) throw tooDeepBody(deep);
+  };
+}
+
+function tooDeepBody(deep: TooDeep): EngineError {
+  return new EngineError(
+    "too-deep",
+    `the body is nested too deeply: more than ${NESTING_DEFAULTS.maxDepth} levels of brackets (line ${deep.line}, column ${deep.column})`,
+    { path: "(body)", line: deep.line, column: deep.column },
+  );
+}
+
 function tooLarge(maxBytes: number): HttpError {
-  return new HttpError(413, "body-too-large", `the body is larger than the limit of ${maxBytes} bytes`, "(body)");
+  return new HttpError(413, "too-large", `the body is larger than the limit of ${maxBytes} bytes`, "(body)");
 }
 
 export function notFound(what: string, id: string): HttpError {

@@ -9,7 +9,18 @@ import "server-only";
 import { createJobBackend } from "../jobs/createJobBackend";
 import type { JobBackend, JobHandler, JobStatus } from "../jobs/types";
 import { notFound } from "./http";
-import { comparisonJob, comparisonPath, profilePath, sweepJob, validateComparison, validateSweep } from "./profiles";
+import { jobLedger, jobLimitFromEnv, submitWithinLimit } from "./jobLimit";
+import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
+import {
+  COMPARISON_KIND,
+  comparisonJob,
+  comparisonPath,
+  PROFILE_KIND,
+  profilePath,
+  sweepJob,
+  validateComparison,
+  validateSweep,
+} from "./profiles";
 import { RUN_KIND, runJob, runPath, validateRun } from "./runs";
 import { uncertaintyJob } from "./uncertainty";
 
@@ -55,16 +66,42 @@ export function jobView(s: JobStatus): JobView {
   return view;
 }
 
-export async function startSweep(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("profile-sweep", await validateSweep(body)));
+/** A started job with the deletion token of the record it will store (shown once). */
+export interface StartedJob extends JobView {
+  deletionToken: string;
+  deletionNote: string;
 }
 
-export async function startRun(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("run", await validateRun(body)));
+/** Submits a job for a client address, within its limit of jobs at once (jobLimit.ts). */
+export function submitForClient(client: string, kind: string, input: unknown): Promise<JobStatus> {
+  const backend = jobBackend();
+  return submitWithinLimit(jobLedger(), backend, client, jobLimitFromEnv(), () => backend.submit(kind, input));
 }
 
-export async function startComparison(body: unknown): Promise<JobView> {
-  return jobView(await jobBackend().submit("comparison", await validateComparison(body)));
+async function submitDeletable(kind: string, input: object, client: string): Promise<StartedJob> {
+  const deletion = newDeletionToken();
+  const view = jobView(await submitForClient(client, kind, { ...input, deleteHash: deletion.hash }));
+  return { ...view, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
+}
+
+/** `client`: the address the rate limits count by (rateLimit.ts `clientOf`); "local" for callers inside the process. */
+export async function startSweep(body: unknown, client = "local"): Promise<StartedJob> {
+  return submitDeletable("profile-sweep", await validateSweep(body), client);
+}
+
+export async function startComparison(body: unknown, client = "local"): Promise<StartedJob> {
+  return submitDeletable("comparison", await validateComparison(body), client);
+}
+
+/** DELETE of a stored sweep or comparison with the token its job was started with. */
+export async function deleteSweepRecord(kind: "profile" | "comparison", id: string, token: string | null) {
+  const what = kind === "profile" ? "profile sweep" : "comparison";
+  await deleteWithToken([{ kind: kind === "profile" ? PROFILE_KIND : COMPARISON_KIND, id }], token, what);
+}
+
+/** Starts a run over days (no deletion token: a run record is kept until retention removes it). */
+export async function startRun(body: unknown, client = "local"): Promise<JobView> {
+  return jobView(await submitForClient(client, "run", await validateRun(body)));
 }
 
 const JOB_ID = /^[A-Za-z0-9_-]{16}$/;

@@ -1,95 +1,71 @@
 /**
- * Mechanism uploads and look-ups: validate, content-address, store.
- * Nothing is stored unless the document loads without error.
+ * Mechanism uploads and look-ups. The document is parsed and checked in an
+ * engine worker (the main thread only moves bytes and pre-scans the JSON
+ * wrapper's nesting); nothing is stored unless it loads without error. Each
+ * upload gets its own random id, not derivable from the content, and is
+ * listed only to its owner (owner.ts); ids of the content-hash form ("m-…")
+ * stored before that keep working.
  */
 import "server-only";
-import { z } from "zod";
 import type { MechanismSource } from "../engine/mechanism-source";
 import { compileSource } from "../engine/mechanism-source";
-import { parseWith } from "../engine/request-schema";
-import { builtinMechanisms, loadBuiltinMechanism, loadMechanism } from "../mechanism";
-import type { CompiledMechanism } from "../mechanism/types";
-import { getStore, ID_PATTERN, mechanismContentId } from "../store";
+import { summarise } from "../engine/mechanism-summary";
+import { enginePool } from "../engine/pool";
+import { builtinMechanisms, loadBuiltinMechanism } from "../mechanism";
+import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { notFound } from "./http";
+import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
+import { ownerHash } from "./owner";
 
 /** Largest mechanism upload accepted, bytes (the loader's own text limit is 2 MiB). */
 export const MAX_MECHANISM_BODY = 4 * 1024 * 1024;
 
-const uploadSchema = z
-  .object({ text: z.string().min(1, "expected the document text"), format: z.enum(["yaml", "json"]).optional() })
-  .strict();
+/** A new upload id: "u-" + 96 random bits. */
+const newUploadId = () => `u-${newRecordId()}`;
 
-export function summarise(id: string, builtin: boolean, mech: CompiledMechanism, text: string) {
-  return {
+/**
+ * Body is { text, format? } as JSON, or the document itself (YAML or JSON),
+ * as raw bytes: they are moved to an engine worker, which decodes, pre-scans,
+ * parses and checks them. `owner` is the uploader's cookie value.
+ */
+export async function uploadMechanism(body: Uint8Array, contentType: string, owner: string) {
+  const job = { kind: "check-upload" as const, body, contentType };
+  const checked = (await enginePool().run(job, undefined, [body.buffer as ArrayBuffer])).result;
+  const text = checked.text;
+  const id = newUploadId();
+  const deletion = newDeletionToken();
+  await getStore().putMechanism({
     id,
-    title: mech.title,
-    description: mech.description,
-    version: mech.version,
-    builtin,
+    title: checked.title,
+    description: checked.description,
     text,
-    species: mech.species.map((s) => ({ id: s.id, label: s.label, role: s.role, group: s.group, atoms: s.atoms })),
-    reactions: mech.reactions.map((r) => ({
-      id: r.id,
-      equation: r.equation,
-      rate: r.rate,
-      uncertainty: r.uncertainty,
-      source: r.source,
-      note: r.note,
-    })),
-    pools: mech.pools.map((p) => ({ id: p.id, label: p.label, expression: p.expression, total: p.total })),
-    conservation: mech.conservation.map((c) => ({ id: c.id, label: c.label, expression: c.expression })),
-    photolysisChannels: mech.photolysisChannels,
-    warnings: mech.warnings,
-  };
-}
-
-/** Body is { text, format? } as JSON, or the document itself (YAML or JSON). */
-export async function uploadMechanism(body: string, contentType: string) {
-  let text = body;
-  let format: "yaml" | "json" | undefined;
-  if (contentType.includes("json")) {
-    let parsed: unknown;
-    try {
-      parsed = JSON.parse(body);
-    } catch {
-      parsed = undefined;
-    }
-    if (parsed && typeof parsed === "object" && "text" in parsed) {
-      const u = parseWith(uploadSchema, parsed);
-      text = u.text;
-      format = u.format;
-    }
-  }
-  const loaded = loadMechanism(text, { format });
-  const id = mechanismContentId(loaded.canonical);
-  const fmt = format ?? (/^\s*[{[]/.test(text) ? "json" : "yaml");
-  const inserted = await getStore().putMechanism({
-    id,
-    title: loaded.mechanism.title,
-    description: loaded.mechanism.description,
-    text,
-    format: fmt,
-    speciesCount: loaded.mechanism.species.length,
-    reactionCount: loaded.mechanism.reactions.length,
+    format: checked.format,
+    speciesCount: checked.speciesCount,
+    reactionCount: checked.reactionCount,
     createdAt: new Date().toISOString(),
+    contentHash: checked.contentHash,
+    ownerHash: ownerHash(owner),
+    deleteHash: deletion.hash,
   });
-  const s = summarise(id, false, loaded.mechanism, text);
   return {
     id,
-    title: s.title,
-    created: inserted,
+    title: checked.title,
+    created: true,
+    deletionToken: deletion.token,
+    deletionNote: DELETION_NOTE,
     summary: {
-      species: s.species.length,
-      reactions: s.reactions.length,
-      pools: s.pools,
-      conservation: s.conservation,
-      photolysisChannels: s.photolysisChannels,
+      species: checked.speciesCount,
+      reactions: checked.reactionCount,
+      pools: checked.pools,
+      conservation: checked.conservation,
+      photolysisChannels: checked.photolysisChannels,
     },
-    warnings: loaded.warnings,
+    warnings: checked.warnings,
   };
 }
 
-export async function listMechanisms() {
+/** The built-ins, and the uploads of the client with this owner cookie value (none without one). */
+export async function listMechanisms(owner?: string) {
   const builtins = builtinMechanisms().map((b) => {
     const m = loadBuiltinMechanism(b.id).mechanism;
     return {
@@ -101,7 +77,9 @@ export async function listMechanisms() {
       reactionCount: m.reactions.length,
     };
   });
-  const uploads = (await getStore().listMechanisms(50)).map((m) => ({
+  const hash = ownerHash(owner);
+  const own = hash ? await getStore().listMechanisms(50, hash) : [];
+  const uploads = own.map((m) => ({
     id: m.id,
     title: m.title,
     description: m.description,
@@ -113,21 +91,26 @@ export async function listMechanisms() {
   return { mechanisms: [...builtins, ...uploads] };
 }
 
+/** DELETE /api/mechanisms/{id} with its deletion token. Built-ins have none. */
+export async function deleteMechanism(id: string, token: string | null): Promise<void> {
+  await deleteWithToken([{ kind: "mechanism", id }], token, "mechanism");
+}
+
 /** The source of a mechanism for the engine, or a 404. */
 export async function mechanismSource(id: string): Promise<MechanismSource> {
   if (!ID_PATTERN.test(id)) throw notFound("mechanism", id);
   const builtin = builtinMechanisms().find((b) => b.id === id);
   if (builtin) return { id, title: builtin.title };
-  const stored = await getStore().getMechanism(id);
-  if (!stored) throw notFound("mechanism", id);
+  const stored = liveOrThrow(await getStore().getMechanism(id), "mechanism", id);
   return { id, title: stored.title, text: stored.text };
 }
 
+/** A mechanism's text, species, reactions and pools; an upload is compiled in an engine worker, not here. */
 export async function mechanismDetail(id: string) {
   const src = await mechanismSource(id);
-  const mech = compileSource(src);
-  const text = src.text ?? loadBuiltinText(id);
-  return summarise(id, src.text === undefined, mech, text);
+  if (src.text === undefined) return summarise(id, true, compileSource(src), loadBuiltinText(id));
+  const { result } = await enginePool().run({ kind: "describe-mechanism", mechanism: src });
+  return { ...result, text: src.text };
 }
 
 function loadBuiltinText(id: string): string {

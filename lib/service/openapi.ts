@@ -9,7 +9,10 @@ const error = {
       type: "object",
       required: ["code", "message"],
       properties: {
-        code: { type: "string", examples: ["invalid-request", "not-found", "body-too-large", "timeout"] },
+        code: {
+          type: "string",
+          examples: ["invalid-request", "not-found", "gone", "too-large", "too-deep", "rate-limited", "timeout"],
+        },
         message: { type: "string" },
         path: { type: "string", description: "path of the offending input, e.g. condition.altitude_km" },
         line: { type: "integer", description: "1-based line in an uploaded document" },
@@ -27,10 +30,14 @@ const errors = (...codes: number[]) =>
       {
         description:
           {
-            400: "invalid input",
+            400: "invalid input (also: nested deeper than 64 levels, code too-deep; a malformed deletion token, code invalid-token)",
+            403: "the deletion token does not belong to this record (code forbidden)",
             404: "unknown id",
-            413: "body or document over its size limit",
+            410: "the record was deleted with its token or has expired (code gone)",
+            413: "body or document over its size limit (code too-large, for every such refusal)",
             422: "computation over its time limit",
+            429: "more requests from this client address than the rate limit allows (code rate-limited; Retry-After gives the seconds to wait)",
+            507: "the storage budget is spent on kept records (code storage-full)",
           }[c] ?? "error",
         content: { "application/json": { schema: { $ref: "#/components/schemas/Error" } } },
       },
@@ -58,7 +65,7 @@ const csv = (what: string) => ({
 const job202 = {
   202: {
     description:
-      "queued: the job's status ({ id, state, done, total, stage, statusUrl }); poll GET /api/jobs/{id} (or stream /api/jobs/{id}/events) until state is done, then open resultUrl",
+      "queued: the job's status ({ id, state, done, total, stage, statusUrl }, and for sweeps and comparisons the deletionToken of the record it will store, shown once); poll GET /api/jobs/{id} (or stream /api/jobs/{id}/events) until state is done, then open resultUrl",
     content: { "application/json": { schema: { $ref: "#/components/schemas/JobStatus" } } },
   },
 };
@@ -71,6 +78,24 @@ const profileCsv = (what: string, kind: string) => ({
   },
 });
 
+/** DELETE with the deletion token handed out at creation: 204, then the record's links answer 410. */
+const deletion = (what: string) => ({
+  delete: {
+    summary: `Delete ${what} with its deletion token; afterwards its links answer 410 Gone (a second DELETE too)`,
+    parameters: [
+      { $ref: "#/components/parameters/id" },
+      {
+        name: "x-deletion-token",
+        in: "header",
+        required: true,
+        schema: { type: "string", pattern: "^[A-Za-z0-9_-]{43}$" },
+        description: "the deletionToken of the creating response, shown once",
+      },
+    ],
+    responses: { 204: { description: "deleted" }, ...errors(400, 403, 404, 410) },
+  },
+});
+
 const jobId = { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{16}$" } };
 
 /** POST that queues a job with a JSON body of `schema`: 202 with the job to poll. */
@@ -80,17 +105,21 @@ const jobPost = (summary: string, schema: string) => ({
     required: true,
     content: { "application/json": { schema: { $ref: `#/components/schemas/${schema}` } } },
   },
-  responses: { ...job202, ...errors(400, 404, 413) },
+  responses: { ...job202, ...errors(400, 404, 413, 429) },
 });
 
-/** GET {base}/{id} (the record) and GET {base}/{id}.json (its download). */
-const recordPaths = (base: string, record: string, what: string) => ({
+/**
+ * GET {base}/{id} (the record) and GET {base}/{id}.json (its download); with `deletable`, the DELETE
+ * with the record's deletion token too.
+ */
+const recordPaths = (base: string, record: string, what: string, deletable?: string) => ({
   [`${base}/{id}`]: {
     get: {
       summary: record,
       parameters: [{ $ref: "#/components/parameters/id" }],
-      responses: { 200: { description: "record" }, ...errors(404) },
+      responses: { 200: { description: "record" }, ...errors(404, 410) },
     },
+    ...(deletable ? deletion(deletable) : {}),
   },
   [`${base}/{id}.json`]: {
     get: {
@@ -117,6 +146,7 @@ const profilePaths = {
     "/api/profiles",
     "A stored sweep: { id, createdAt, engineVersion, body: { request, profile, result } }; failed levels carry status and message",
     "sweep",
+    "a stored sweep (the token of the 202 that started it)",
   ),
   "/api/profiles/{id}/levels.csv": profileCsv(
     "Condition, status, Ox production and loss, and loss and fraction by family at every level",
@@ -134,6 +164,7 @@ const profilePaths = {
     "/api/comparisons",
     "A stored comparison: { id, createdAt, engineVersion, body: { request, result } }",
     "comparison",
+    "a stored comparison (the token of the 202 that started it; the sweeps it computed take it too)",
   ),
   "/api/comparisons/{id}/comparison.csv": profileCsv(
     "A, B and B − A at every altitude, by family, with the cycles explaining B − A",
@@ -366,9 +397,14 @@ export const openApiDocument = {
       },
     },
     "/api/mechanisms": {
-      get: { summary: "Built-in mechanisms and recent uploads", responses: { 200: { description: "list" } } },
+      get: {
+        summary:
+          "The built-in mechanisms, and this client's own uploads (those made with its owner cookie, ozone-owner); nobody else's",
+        responses: { 200: { description: "list" } },
+      },
       post: {
-        summary: "Upload a mechanism document (YAML or JSON); validated, stored by content hash",
+        summary:
+          "Upload a mechanism document (YAML or JSON); parsed and validated in a worker, stored under a new random id (u-…), listed only to its uploader (owner cookie, set on the first upload)",
         requestBody: {
           required: true,
           content: {
@@ -389,9 +425,11 @@ export const openApiDocument = {
           },
         },
         responses: {
-          201: { description: "stored: id, summary (species, reactions, conserved pools), warnings" },
-          200: { description: "already stored under the same content id" },
-          ...errors(400, 413),
+          201: {
+            description:
+              "stored: id, deletionToken (shown once), summary (species, reactions, conserved pools), warnings. A document with no solved species or no reactions is a 400 (code empty-mechanism)",
+          },
+          ...errors(400, 413, 429),
         },
       },
     },
@@ -399,12 +437,15 @@ export const openApiDocument = {
       get: {
         summary: "A mechanism: document text, species, reactions, pools, warnings",
         parameters: [{ $ref: "#/components/parameters/id" }],
-        responses: { 200: { description: "mechanism" }, ...errors(404) },
+        responses: { 200: { description: "mechanism" }, ...errors(404, 410) },
       },
+      ...deletion("an uploaded mechanism"),
     },
     "/api/analyses": {
       post: {
-        summary: "Compute and store an analysis",
+        summary:
+          "Compute and store an analysis. With ?draft=1 (the explorer) it is a draft, which expires after OZONE_DRAFT_TTL_DAYS unless its permalink is opened, copied (POST …/pin) or exported",
+        parameters: [{ name: "draft", in: "query", required: false, schema: { enum: ["1"] } }],
         requestBody: {
           required: true,
           content: { "application/json": { schema: { $ref: "#/components/schemas/AnalysisRequest" } } },
@@ -412,9 +453,9 @@ export const openApiDocument = {
         responses: {
           201: {
             description:
-              "{ id, result }: steady state, rates, budget, cycles, per-reaction ozone destroyed, diagnostics. A steady state that failed is still 201 with its status.",
+              "{ id, result, deletionToken, deletionNote }: steady state, rates, budget, cycles, per-reaction ozone destroyed, diagnostics. A steady state that failed is still 201 with its status.",
           },
-          ...errors(400, 404, 413, 422),
+          ...errors(400, 404, 410, 413, 422, 429, 507),
         },
       },
     },
@@ -422,7 +463,15 @@ export const openApiDocument = {
       get: {
         summary: "A stored analysis with its request and engine version",
         parameters: [{ $ref: "#/components/parameters/id" }],
-        responses: { 200: { description: "record" }, ...errors(404) },
+        responses: { 200: { description: "record" }, ...errors(404, 410) },
+      },
+      ...deletion("an analysis"),
+    },
+    "/api/analyses/{id}/pin": {
+      post: {
+        summary: "Keep a draft analysis for good (its permalink was copied); idempotent",
+        parameters: [{ $ref: "#/components/parameters/id" }],
+        responses: { 200: { description: "{ id, pinned: true }" }, ...errors(404, 410) },
       },
     },
     "/api/analyses/{id}.json": {
@@ -446,9 +495,9 @@ export const openApiDocument = {
         responses: {
           201: {
             description:
-              "{ instructorId, studentId, instructorUrl, studentUrl, assessment }: the instructor record with the key",
+              "{ instructorId, studentId, instructorUrl, studentUrl, assessment, deletionToken, deletionNote }: the instructor record with the key, and the token (shown once) that deletes both links or revokes the student link",
           },
-          ...errors(400, 404, 413, 422),
+          ...errors(400, 404, 413, 422, 429, 507),
         },
       },
     },
@@ -478,8 +527,9 @@ export const openApiDocument = {
       get: {
         summary: "The instructor record of an assessment, answer key included (instructor id only)",
         parameters: [{ $ref: "#/components/parameters/id" }],
-        responses: { 200: { description: "instructor record" }, ...errors(404) },
+        responses: { 200: { description: "instructor record" }, ...errors(404, 410) },
       },
+      ...deletion("an assessment, both its links (instructor id)"),
     },
     "/api/assessments/{id}/key.csv": {
       get: {
@@ -539,8 +589,11 @@ export const openApiDocument = {
       get: {
         summary: "The student sheets of an assessment (student id): questions and conditions, never an answer",
         parameters: [{ $ref: "#/components/parameters/id" }],
-        responses: { 200: { description: "student record" }, ...errors(404) },
+        responses: { 200: { description: "student record" }, ...errors(404, 410) },
       },
+      ...deletion(
+        "the student link of an assessment alone (a leaked link; the assessment's token), the instructor link stays",
+      ),
     },
     ...profilePaths,
     ...runPaths,

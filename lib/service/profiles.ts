@@ -24,7 +24,7 @@ import type { SweepExecutor, SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
-import { notFound } from "./http";
+import { liveOrThrow } from "./lifecycle";
 import { listMechanisms, mechanismSource } from "./mechanisms";
 import {
   COMPARISON_TABLE,
@@ -35,6 +35,8 @@ import {
 } from "./sweepCsvTables";
 
 export type { ProfileRecordBody } from "./sweepCsvTables";
+
+import { keepWithinBudget } from "./retention";
 
 export const PROFILE_KIND = "profile";
 export const COMPARISON_KIND = "comparison";
@@ -93,7 +95,12 @@ function runPrepared(
 
 const stageOf = (q: SweepProgress) => (q.pass > 1 ? `levels, pass ${q.pass} (overhead O3 column)` : "levels");
 
-async function storeSweep(p: PreparedSweep, result: SweepResult): Promise<string> {
+/** What a job's input carries besides the request: the hash of the deletion token handed to the client. */
+export interface Deletable {
+  deleteHash?: string;
+}
+
+async function storeSweep(p: PreparedSweep, result: SweepResult, deleteHash?: string): Promise<string> {
   const id = newRecordId();
   // the CSV text is kept once, as the parsed profile
   const request: SweepRequest =
@@ -101,12 +108,14 @@ async function storeSweep(p: PreparedSweep, result: SweepResult): Promise<string
       ? { ...p.request, profile: { kind: "csv", csv: "", name: p.request.profile.name } }
       : p.request;
   const body: ProfileRecordBody = { request, profile: p.profile, result };
+  await keepWithinBudget();
   await getStore().putRecord({
     id,
     kind: PROFILE_KIND,
     engineVersion: ENGINE_VERSION,
     body,
     createdAt: new Date().toISOString(),
+    deleteHash,
   });
   return id;
 }
@@ -119,11 +128,12 @@ export async function validateSweep(body: unknown): Promise<SweepRequest> {
 }
 
 /** Job handler "profile-sweep". */
-export async function sweepJob(input: SweepRequest, ctx: JobContext) {
+export async function sweepJob(job: SweepRequest & Deletable, ctx: JobContext) {
+  const { deleteHash, ...input } = job;
   const p = await prepare(input);
   const result = await runPrepared(p, ctx.signal, (q) => ctx.progress(q.done, q.total, stageOf(q)), ctx.tasks);
   if (ctx.signal.aborted) throw ctx.signal.reason;
-  return { resultId: await storeSweep(p, result), resultKind: PROFILE_KIND };
+  return { resultId: await storeSweep(p, result, deleteHash), resultKind: PROFILE_KIND };
 }
 
 /** Parses and checks a comparison request; stored sides must exist. */
@@ -143,7 +153,9 @@ export interface ComparisonRecordBody {
 }
 
 /** Job handler "comparison": runs the sides that are not stored yet (each stored as a sweep), then compares. */
-export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
+export async function comparisonJob(job: ComparisonRequest & Deletable, ctx: JobContext) {
+  // the sweeps computed for the comparison take its deletion token too
+  const { deleteHash, ...input } = job;
   const prepared = await Promise.all(
     (["a", "b"] as const).map((key) => {
       const side = input[key];
@@ -172,7 +184,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
       ctx.tasks,
     );
     if (ctx.signal.aborted) throw ctx.signal.reason;
-    sides.push({ id: await storeSweep(p, result), result });
+    sides.push({ id: await storeSweep(p, result, deleteHash), result });
   }
   const result = compareSweeps(sides[0].result, sides[1].result, {
     labels: input.labels,
@@ -191,6 +203,7 @@ export async function comparisonJob(input: ComparisonRequest, ctx: JobContext) {
     engineVersion: ENGINE_VERSION,
     body,
     createdAt: new Date().toISOString(),
+    deleteHash,
   });
   return { resultId: id, resultKind: COMPARISON_KIND };
 }
@@ -204,12 +217,11 @@ export interface StoredProfileRecord {
 }
 
 export async function getProfileRecord(id: string, path = "id"): Promise<StoredProfileRecord> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(PROFILE_KIND, id) : null;
-  if (!r) {
-    const e = notFound("profile sweep", id);
-    if (path !== "id") throw new InputError(path, `no stored profile sweep with id ${id}`, "not-found");
-    throw e;
+  const found = ID_PATTERN.test(id) ? await getStore().getRecord(PROFILE_KIND, id) : null;
+  if (path !== "id" && (!found || found.deletedAt)) {
+    throw new InputError(path, `no stored profile sweep with id ${id}${found ? " (it was deleted)" : ""}`, "not-found");
   }
+  const r = liveOrThrow(found, "profile sweep", id);
   return {
     id: r.id,
     createdAt: r.createdAt,
@@ -228,8 +240,7 @@ export interface StoredComparisonRecord {
 }
 
 export async function getComparisonRecord(id: string): Promise<StoredComparisonRecord> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(COMPARISON_KIND, id) : null;
-  if (!r) throw notFound("comparison", id);
+  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(COMPARISON_KIND, id) : null, "comparison", id);
   return {
     id: r.id,
     createdAt: r.createdAt,
@@ -310,11 +321,11 @@ export async function comparisonExport(
   return { csv, filename: `comparison-${id}.csv` };
 }
 
-/** What the profile forms offer: mechanisms (id, title) and the built-in profiles (without their levels). */
-export async function profileFormOptions() {
+/** What the profile forms offer: mechanisms (id, title; uploads of this owner cookie only) and the built-in profiles (without their levels). */
+export async function profileFormOptions(owner?: string) {
   let mechanisms: { id: string; title: string }[] = [];
   try {
-    mechanisms = (await listMechanisms()).mechanisms.map((m) => ({
+    mechanisms = (await listMechanisms(owner)).mechanisms.map((m) => ({
       id: m.id,
       title: m.builtin ? m.title : `${m.title} (upload)`,
     }));

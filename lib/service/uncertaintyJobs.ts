@@ -8,7 +8,7 @@
 import "server-only";
 import type { JobStatus } from "../jobs/types";
 import { notFound } from "./http";
-import { jobBackend } from "./jobs";
+import { jobBackend, submitForClient } from "./jobs";
 import { validateUncertaintyJob } from "./uncertainty";
 
 export interface UncertaintyJobView extends JobStatus {
@@ -26,8 +26,8 @@ function view(s: JobStatus): UncertaintyJobView {
 }
 
 /** Validates and queues; throws InputError (400) before anything is queued. */
-export async function startUncertaintyJob(body: unknown): Promise<UncertaintyJobView> {
-  return view(await jobBackend().submit("uncertainty", await validateUncertaintyJob(body)));
+export async function startUncertaintyJob(body: unknown, client = "local"): Promise<UncertaintyJobView> {
+  return view(await submitForClient(client, "uncertainty", await validateUncertaintyJob(body)));
 }
 
 const JOB_ID = /^[A-Za-z0-9_-]{16}$/;

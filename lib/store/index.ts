@@ -6,7 +6,7 @@ export { ID_PATTERN, mechanismContentId, newRecordId } from "./ids";
 export { openStore, type StoreConfig } from "./openStore";
 export { openPostgresStore, POSTGRES_DEFAULTS, type PostgresOptions } from "./postgres-store";
 export { openSqliteStore } from "./sqlite-store";
-export type { Store, StoredAnalysis, StoredMechanism, StoredRecord } from "./types";
+export type { RecordRef, Store, StoredAnalysis, StoredMechanism, StoredRecord } from "./types";
 
 let store: Store | null = null;
 

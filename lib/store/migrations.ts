@@ -17,6 +17,25 @@ export interface Migration {
 export const migrationSql = (m: Migration, dialect: "sqlite" | "postgres"): string =>
   dialect === "postgres" ? (m.postgres ?? m.sql) : m.sql;
 
+const PUBLIC_SERVICE_SQL = `
+      ALTER TABLE mechanisms ADD COLUMN content_hash TEXT;
+      ALTER TABLE mechanisms ADD COLUMN owner_hash TEXT;
+      ALTER TABLE mechanisms ADD COLUMN delete_hash TEXT;
+      ALTER TABLE mechanisms ADD COLUMN deleted_at TEXT;
+      ALTER TABLE mechanisms ADD COLUMN stored_bytes INTEGER NOT NULL DEFAULT 0;
+      CREATE INDEX mechanisms_owner ON mechanisms (owner_hash, created_at);
+      ALTER TABLE analyses ADD COLUMN result_br BLOB;
+      ALTER TABLE analyses ADD COLUMN pinned INTEGER NOT NULL DEFAULT 1;
+      ALTER TABLE analyses ADD COLUMN delete_hash TEXT;
+      ALTER TABLE analyses ADD COLUMN deleted_at TEXT;
+      ALTER TABLE analyses ADD COLUMN stored_bytes INTEGER NOT NULL DEFAULT 0;
+      CREATE INDEX analyses_drafts ON analyses (pinned, created_at);
+      ALTER TABLE records ADD COLUMN body_br BLOB;
+      ALTER TABLE records ADD COLUMN delete_hash TEXT;
+      ALTER TABLE records ADD COLUMN deleted_at TEXT;
+      ALTER TABLE records ADD COLUMN stored_bytes INTEGER NOT NULL DEFAULT 0;
+    `;
+
 export const MIGRATIONS: Migration[] = [
   {
     version: 1,
@@ -49,5 +68,13 @@ export const MIGRATIONS: Migration[] = [
         PRIMARY KEY (kind, id)
       );
     `,
+  },
+  {
+    // Running in public: deletion tokens (their SHA-256), tombstones that answer 410,
+    // private uploads (owner and content hash), pinned drafts, compressed bodies and
+    // their stored size for the budget. Rows stored before this stay pinned and unowned.
+    version: 2,
+    sql: PUBLIC_SERVICE_SQL,
+    postgres: PUBLIC_SERVICE_SQL.replaceAll("BLOB", "BYTEA"),
   },
 ];

@@ -9,8 +9,20 @@
  */
 import pg from "pg";
 import { MIGRATIONS, migrationSql } from "./migrations";
-import { type AnalysisRow, type MechanismRow, type RecordRow, toAnalysis, toMechanism, toRecord } from "./rows";
-import type { Store } from "./types";
+import {
+  type AnalysisRow,
+  analysisColumns,
+  type MechanismRow,
+  mechanismColumns,
+  type RecordRow,
+  recordColumns,
+  refTable,
+  TOMBSTONE_SET,
+  toAnalysis,
+  toMechanism,
+  toRecord,
+} from "./rows";
+import type { RecordRef, Store } from "./types";
 
 export const POSTGRES_DEFAULTS = {
   /** most connections this process opens; default 5 */
@@ -42,13 +54,21 @@ export function openPostgresStore(url: string, options: PostgresOptions = {}): S
     return pool.query<R>(sql, params);
   }
 
+  const where = (ref: RecordRef, first: number) => {
+    const { table, byKind } = refTable(ref);
+    return byKind
+      ? { table, sql: `kind = $${first} AND id = $${first + 1}`, params: [ref.kind, ref.id] }
+      : { table, sql: `id = $${first}`, params: [ref.id] };
+  };
+
   return {
     backend: "postgres",
     async putMechanism(m) {
       const r = await query(
-        `INSERT INTO mechanisms (id, title, description, text, format, species_count, reaction_count, created_at)
-         VALUES ($1, $2, $3, $4, $5, $6, $7, $8) ON CONFLICT (id) DO NOTHING`,
-        [m.id, m.title, m.description, m.text, m.format, m.speciesCount, m.reactionCount, m.createdAt],
+        `INSERT INTO mechanisms (id, title, description, text, format, species_count, reaction_count, created_at,
+           content_hash, owner_hash, delete_hash, stored_bytes)
+         VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12) ON CONFLICT (id) DO NOTHING`,
+        mechanismColumns(m),
       );
       return r.rowCount === 1;
     },
@@ -56,18 +76,23 @@ export function openPostgresStore(url: string, options: PostgresOptions = {}): S
       const r = await query<MechanismRow>("SELECT * FROM mechanisms WHERE id = $1", [id]);
       return r.rows[0] ? toMechanism(r.rows[0]) : null;
     },
-    async listMechanisms(limit) {
-      const r = await query<MechanismRow>(
-        `SELECT * FROM mechanisms ORDER BY created_at COLLATE "C" DESC, id COLLATE "C" ASC LIMIT $1`,
-        [limit],
-      );
+    async listMechanisms(limit, ownerHash) {
+      const order = `ORDER BY created_at COLLATE "C" DESC, id COLLATE "C" ASC`;
+      const r =
+        ownerHash === undefined
+          ? await query<MechanismRow>(`SELECT * FROM mechanisms WHERE deleted_at IS NULL ${order} LIMIT $1`, [limit])
+          : await query<MechanismRow>(
+              `SELECT * FROM mechanisms WHERE owner_hash = $1 AND deleted_at IS NULL ${order} LIMIT $2`,
+              [ownerHash, limit],
+            );
       return r.rows.map(toMechanism);
     },
     async putAnalysis(a) {
       await query(
-        `INSERT INTO analyses (id, mechanism_id, engine_version, request_json, result_json, created_at)
-         VALUES ($1, $2, $3, $4, $5, $6)`,
-        [a.id, a.mechanismId, a.engineVersion, JSON.stringify(a.request), JSON.stringify(a.result), a.createdAt],
+        `INSERT INTO analyses (id, mechanism_id, engine_version, request_json, result_json, result_br, created_at,
+           pinned, delete_hash, stored_bytes)
+         VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10)`,
+        analysisColumns(a),
       );
     },
     async getAnalysis(id) {
@@ -75,17 +100,53 @@ export function openPostgresStore(url: string, options: PostgresOptions = {}): S
       return r.rows[0] ? toAnalysis(r.rows[0]) : null;
     },
     async putRecord(rec) {
-      await query("INSERT INTO records (kind, id, engine_version, body_json, created_at) VALUES ($1, $2, $3, $4, $5)", [
-        rec.kind,
-        rec.id,
-        rec.engineVersion,
-        JSON.stringify(rec.body),
-        rec.createdAt,
-      ]);
+      await query(
+        `INSERT INTO records (kind, id, engine_version, body_json, body_br, created_at, delete_hash, stored_bytes)
+         VALUES ($1, $2, $3, $4, $5, $6, $7, $8)`,
+        recordColumns(rec),
+      );
     },
     async getRecord(kind, id) {
       const r = await query<RecordRow>("SELECT * FROM records WHERE kind = $1 AND id = $2", [kind, id]);
       return r.rows[0] ? toRecord(r.rows[0]) : null;
+    },
+    async lifecycle(ref) {
+      const w = where(ref, 1);
+      const r = await query<{ delete_hash: string | null; deleted_at: string | null }>(
+        `SELECT delete_hash, deleted_at FROM ${w.table} WHERE ${w.sql}`,
+        w.params,
+      );
+      const row = r.rows[0];
+      return row ? { deleteHash: row.delete_hash, deletedAt: row.deleted_at } : null;
+    },
+    async tombstone(ref, deletedAt) {
+      const w = where(ref, 2);
+      const r = await query(
+        `UPDATE ${w.table} SET ${TOMBSTONE_SET[w.table]}, deleted_at = $1 WHERE ${w.sql} AND deleted_at IS NULL`,
+        [deletedAt, ...w.params],
+      );
+      return r.rowCount === 1;
+    },
+    async pinAnalysis(id) {
+      await query("UPDATE analyses SET pinned = 1 WHERE id = $1", [id]);
+    },
+    async expireDrafts(createdBefore, deletedAt, limit = 1000) {
+      // one statement: instances expiring at once each take different rows (SKIP LOCKED)
+      const r = await query(
+        `UPDATE analyses SET ${TOMBSTONE_SET.analyses}, deleted_at = $1 WHERE id IN (
+           SELECT id FROM analyses WHERE pinned = 0 AND deleted_at IS NULL AND created_at COLLATE "C" < $2
+           ORDER BY created_at COLLATE "C" ASC LIMIT $3 FOR UPDATE SKIP LOCKED)`,
+        [deletedAt, createdBefore, limit],
+      );
+      return r.rowCount ?? 0;
+    },
+    async storedBytes() {
+      const r = await query<{ bytes: string }>(
+        `SELECT (SELECT COALESCE(SUM(stored_bytes), 0) FROM mechanisms) + (SELECT COALESCE(SUM(stored_bytes), 0) FROM analyses)
+           + (SELECT COALESCE(SUM(stored_bytes), 0) FROM records) AS bytes`,
+        [],
+      );
+      return Number(r.rows[0]?.bytes ?? 0);
     },
     async close() {
       await ready.catch(() => {});

@@ -46,6 +46,10 @@ test("an instructor builds a ten-variant assessment, opens both links, prints th
 
   await page.getByRole("button", { name: "Build the assessment" }).click();
   await page.waitForURL(/\/assess\/i\/[A-Za-z0-9_-]{16}$/, { timeout: 120_000 });
+  // the deletion token is shown once, with what it is for, and leaves the address (it came in the fragment)
+  await expect(page.getByTestId("deletion-token")).toContainText(/Deletion token.*[A-Za-z0-9_-]{43}/);
+  await expect(page.getByTestId("deletion-token")).toContainText("both links");
+  expect(new URL(page.url()).hash).toBe("");
   await expect(page.getByText("Instructor copy — contains the answer key")).toBeVisible();
   const keyRows = page.getByRole("table", { name: "Answer key" }).locator("tbody tr");
   await expect(keyRows).toHaveCount(10);

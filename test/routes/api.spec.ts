@@ -116,7 +116,7 @@ test.describe("service routes", () => {
       JSON.stringify({ mechanismId: "reference", condition: { altitude_km: 30 }, pad: "x".repeat(300_000) }),
     );
     expect(big.status).toBe(413);
-    expect((await big.json()).error.code).toBe("body-too-large");
+    expect((await big.json()).error.code).toBe("too-large");
   });
 
   test("50 concurrent analyses all complete, and equal conditions give equal numbers", async ({ request }) => {

@@ -4,6 +4,7 @@ import path from "node:path";
 import { afterEach, describe, expect, it } from "vitest";
 import { mechanismContentId, newRecordId } from "@/lib/store/ids";
 import { openSqliteStore } from "@/lib/store/sqlite-store";
+import { describeStoreContract } from "../scale/storeContract";
 
 const dirs: string[] = [];
 function tempFile(): string {
@@ -83,4 +84,17 @@ describe("ids", () => {
     // SHA-256("abc") = ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad (FIPS 180-2, appendix B.1)
     expect(mechanismContentId("abc")).toBe("m-ba7816bf8f01cfea414140de5dae2223");
   });
+});
+
+// The storage contract of every back end (test/scale runs it against PostgreSQL too).
+let contractFile = "";
+describeStoreContract({
+  name: "sqlite",
+  async fresh() {
+    contractFile = tempFile();
+    return openSqliteStore(contractFile);
+  },
+  async again() {
+    return openSqliteStore(contractFile);
+  },
 });

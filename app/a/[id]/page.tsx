@@ -1,8 +1,10 @@
 import type { Metadata } from "next";
+import { cookies } from "next/headers";
 import { notFound } from "next/navigation";
 import { Explorer } from "@/components/explorer";
-import { getAnalysisRecord } from "@/lib/service/analyses";
+import { getAnalysisRecord, pinAnalysis } from "@/lib/service/analyses";
 import { listMechanisms, mechanismDetail } from "@/lib/service/mechanisms";
+import { ownerFromCookies } from "@/lib/service/owner";
 import { parseExplorerQuery } from "@/lib/viz/explorerQuery";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 
@@ -18,6 +20,8 @@ export default async function AnalysisPage({ params, searchParams }: { params: P
   let record: Awaited<ReturnType<typeof getAnalysisRecord>>;
   try {
     record = await getAnalysisRecord(id);
+    // an opened permalink is one a user asked for: the draft is kept for good
+    await pinAnalysis(id);
   } catch {
     notFound();
   }
@@ -26,7 +30,7 @@ export default async function AnalysisPage({ params, searchParams }: { params: P
   let mechanisms: MechanismSummary[] = [];
   let mechanism: MechanismView | null = null;
   try {
-    mechanisms = (await listMechanisms()).mechanisms;
+    mechanisms = (await listMechanisms(ownerFromCookies(await cookies()))).mechanisms;
   } catch {
     mechanisms = [];
   }

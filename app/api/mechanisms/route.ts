@@ -1,16 +1,24 @@
-import { readBodyText, respond } from "@/lib/service/http";
+import { jsonDepthGuard, readBodyBytes, respond } from "@/lib/service/http";
 import { listMechanisms, MAX_MECHANISM_BODY, uploadMechanism } from "@/lib/service/mechanisms";
+import { ownerFromCookieHeader, ownerOf } from "@/lib/service/owner";
+import { limitRequest } from "@/lib/service/rateLimit";
 
 export const dynamic = "force-dynamic";
 
-export function GET() {
-  return respond(async () => Response.json(await listMechanisms()));
+/** The built-ins, and this client's own uploads (owner cookie). */
+export function GET(req: Request) {
+  return respond(async () => Response.json(await listMechanisms(ownerFromCookieHeader(req.headers.get("cookie")))));
 }
 
 export function POST(req: Request) {
   return respond(async () => {
-    const text = await readBodyText(req, MAX_MECHANISM_BODY);
-    const out = await uploadMechanism(text, req.headers.get("content-type") ?? "");
-    return Response.json(out, { status: out.created ? 201 : 200 });
+    await limitRequest(req);
+    const type = req.headers.get("content-type") ?? "";
+    // a JSON body too deep is refused on its first chunks; everything else is checked in a worker
+    const body = await readBodyBytes(req, MAX_MECHANISM_BODY, type.includes("json") ? jsonDepthGuard() : undefined);
+    const { owner, setCookie } = ownerOf(req);
+    const out = await uploadMechanism(body, type, owner);
+    const headers: HeadersInit = setCookie ? { "set-cookie": setCookie } : {};
+    return Response.json(out, { status: 201, headers });
   });
 }

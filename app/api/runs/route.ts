@@ -1,5 +1,6 @@
 import { readJsonBody, respond } from "@/lib/service/http";
 import { startRun } from "@/lib/service/jobs";
+import { clientOf, limitRequest } from "@/lib/service/rateLimit";
 import { MAX_RUN_BODY, runCatalogue } from "@/lib/service/runs";
 
 export const dynamic = "force-dynamic";
@@ -11,7 +12,8 @@ export function GET() {
 /** Starts a run: 202 with the job to poll. */
 export function POST(req: Request) {
   return respond(async () => {
-    const job = await startRun(await readJsonBody(req, MAX_RUN_BODY));
+    await limitRequest(req);
+    const job = await startRun(await readJsonBody(req, MAX_RUN_BODY), clientOf(req));
     return Response.json(job, { status: 202, headers: { location: job.statusUrl } });
   });
 }

@@ -1,14 +1,16 @@
-import { getAnalysisRecord } from "@/lib/service/analyses";
+import { deleteAnalysis, getAnalysisRecord, pinAnalysis } from "@/lib/service/analyses";
 import { respond } from "@/lib/service/http";
+import { deletionTokenOf } from "@/lib/service/lifecycle";
 
 export const dynamic = "force-dynamic";
 
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
   return respond(async () => {
-    // "/api/analyses/{id}.json" arrives here with the suffix: the full JSON export.
+    // "/api/analyses/{id}.json" arrives here with the suffix: the full JSON export (which keeps the analysis).
     const json = id.endsWith(".json");
     const record = await getAnalysisRecord(json ? id.slice(0, -5) : id);
+    if (json) await pinAnalysis(record.id);
     return json
       ? new Response(JSON.stringify(record, null, 2), {
           headers: {
@@ -17,5 +19,14 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
           },
         })
       : Response.json(record);
+  });
+}
+
+/** Deletes the analysis with its deletion token (header x-deletion-token): 204, then 410 Gone. */
+export async function DELETE(req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => {
+    await deleteAnalysis(id, deletionTokenOf(req));
+    return new Response(null, { status: 204 });
   });
 }

@@ -1,4 +1,6 @@
 import { respond } from "@/lib/service/http";
+import { deleteSweepRecord } from "@/lib/service/jobs";
+import { deletionTokenOf } from "@/lib/service/lifecycle";
 import { getComparisonRecord } from "@/lib/service/profiles";
 
 export const dynamic = "force-dynamic";
@@ -16,5 +18,14 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
           },
         })
       : Response.json(record);
+  });
+}
+
+/** Deletes the stored comparison with the deletion token its job was started with: 204, then 410 Gone. */
+export async function DELETE(req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => {
+    await deleteSweepRecord("comparison", id, deletionTokenOf(req));
+    return new Response(null, { status: 204 });
   });
 }

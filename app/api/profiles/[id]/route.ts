@@ -1,4 +1,6 @@
 import { respond } from "@/lib/service/http";
+import { deleteSweepRecord } from "@/lib/service/jobs";
+import { deletionTokenOf } from "@/lib/service/lifecycle";
 import { getProfileRecord } from "@/lib/service/profiles";
 
 export const dynamic = "force-dynamic";
@@ -17,5 +19,14 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
           },
         })
       : Response.json(record);
+  });
+}
+
+/** Deletes the stored profile with the deletion token its job was started with: 204, then 410 Gone. */
+export async function DELETE(req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => {
+    await deleteSweepRecord("profile", id, deletionTokenOf(req));
+    return new Response(null, { status: 204 });
   });
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CopyLink, MarkingPanel, PrintButton } from "@/components/assessment";
+import { DeletionTokenNote } from "@/components/DeletionTokenNote";
 import { formatTolerance } from "@/lib/assessment";
 import type { InstructorAssessment } from "@/lib/assessment/types";
 import { CAUTION_LINE } from "@/lib/caution";
@@ -40,6 +41,10 @@ export default async function InstructorPage({ params }: { params: Promise<{ id:
         </p>
       </header>
 
+      <DeletionTokenNote
+        what="this assessment, both links (on the student link's API URL, /api/assessments/student/{id}, it revokes the student link alone)"
+        deleteUrl={`/api/assessments/${a.instructorId}`}
+      />
       <section
         className="no-print grid gap-4 rounded border border-stone-300 bg-white p-4 md:grid-cols-2"
         aria-label="Links"

@@ -1,6 +1,7 @@
 import { MAX_ANSWERS_BODY, markAssessment } from "@/lib/service/assessments";
 import { csvExportOptions } from "@/lib/service/csvProvenance";
-import { csvResponse, HttpError, readBodyText, respond } from "@/lib/service/http";
+import { csvResponse, HttpError, parseJsonBody, readBodyText, respond } from "@/lib/service/http";
+import { limitRequest } from "@/lib/service/rateLimit";
 
 export const dynamic = "force-dynamic";
 
@@ -8,14 +9,10 @@ export const dynamic = "force-dynamic";
 export async function POST(req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
   return respond(async () => {
+    await limitRequest(req);
     let text = await readBodyText(req, MAX_ANSWERS_BODY);
     if ((req.headers.get("content-type") ?? "").includes("json")) {
-      let parsed: unknown;
-      try {
-        parsed = JSON.parse(text);
-      } catch (e) {
-        throw new HttpError(400, "invalid-json", `the body is not valid JSON: ${(e as Error).message}`, "(body)");
-      }
+      const parsed = parseJsonBody(text);
       const csv = (parsed as { csv?: unknown })?.csv;
       if (typeof csv !== "string") throw new HttpError(400, "invalid-request", "expected { csv: string }", "csv");
       text = csv;

@@ -1,5 +1,6 @@
-import { getStudentAssessment } from "@/lib/service/assessments";
+import { getStudentAssessment, revokeStudentLink } from "@/lib/service/assessments";
 import { respond } from "@/lib/service/http";
+import { deletionTokenOf } from "@/lib/service/lifecycle";
 
 export const dynamic = "force-dynamic";
 
@@ -7,4 +8,13 @@ export const dynamic = "force-dynamic";
 export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> }) {
   const { id } = await ctx.params;
   return respond(async () => Response.json(await getStudentAssessment(id)));
+}
+
+/** Revokes a leaked student link with the assessment's deletion token: 204, then 410; the instructor link stays. */
+export async function DELETE(req: Request, ctx: { params: Promise<{ id: string }> }) {
+  const { id } = await ctx.params;
+  return respond(async () => {
+    await revokeStudentLink(id, deletionTokenOf(req));
+    return new Response(null, { status: 204 });
+  });
 }
