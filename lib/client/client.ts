@@ -13,7 +13,7 @@ import type { AnalysisRecord } from "../service/analyses";
 import type { JobView } from "../service/jobs";
 import type { StoredComparisonRecord, StoredProfileRecord } from "../service/profiles";
 import type { StoredRunRecord } from "../service/runs";
-import { type CLIENT_FILES, CLIENT_ROUTES, type ClientMethod } from "./routes";
+import { type CLIENT_FILES, CLIENT_ROUTES, type ClientMethod, DELETE_METHOD } from "./routes";
 
 export const CLIENT_DEFAULTS = {
   /** ms between two polls of a job in waitForJob; default 500 */
@@ -76,9 +76,12 @@ export class OzoneCyclesClient {
       body?: unknown;
       text?: string;
       contentType?: string;
+      /** the deletion token handed out when the record was created */
+      deletionToken?: string;
     } = {},
   ): Promise<Response> {
     const headers: Record<string, string> = {};
+    if (init.deletionToken !== undefined) headers["x-deletion-token"] = init.deletionToken;
     let body: string | undefined;
     if (init.body !== undefined) {
       headers["content-type"] = "application/json";
@@ -174,6 +177,23 @@ export class OzoneCyclesClient {
   }
   async runCsv(id: string, file: (typeof CLIENT_FILES.runCsv)[number], comments = true) {
     return (await this.call("runCsv", { params: { id, file }, query: comments ? {} : { comments: "none" } })).text();
+  }
+  /**
+   * Deletes a stored record with the deletion token its creation returned (shown once); its links
+   * then answer 410. For an assessment, the instructor id deletes both links and the student id
+   * revokes the student link alone.
+   */
+  async deleteRecord(
+    kind: "mechanism" | "analysis" | "sweep" | "comparison" | "assessment" | "studentLink",
+    id: string,
+    deletionToken: string,
+  ): Promise<void> {
+    const method = DELETE_METHOD[kind];
+    await this.call(method, { params: { id }, deletionToken });
+  }
+  /** Makes an explorer draft analysis permanent (drafts expire). */
+  async pinAnalysis(id: string): Promise<void> {
+    await this.call("pinAnalysis", { params: { id } });
   }
   getJob(id: string) {
     return this.json<JobView>("getJob", { params: { id } });

@@ -24,6 +24,13 @@ export const CLIENT_ROUTES = {
   startRun: { method: "post", path: "/api/runs" },
   getRun: { method: "get", path: "/api/runs/{id}" },
   runCsv: { method: "get", path: "/api/runs/{id}/{file}" },
+  deleteMechanism: { method: "delete", path: "/api/mechanisms/{id}" },
+  deleteAnalysis: { method: "delete", path: "/api/analyses/{id}" },
+  pinAnalysis: { method: "post", path: "/api/analyses/{id}/pin" },
+  deleteSweep: { method: "delete", path: "/api/profiles/{id}" },
+  deleteComparison: { method: "delete", path: "/api/comparisons/{id}" },
+  deleteAssessment: { method: "delete", path: "/api/assessments/{id}" },
+  revokeStudentLink: { method: "delete", path: "/api/assessments/student/{id}" },
   getJob: { method: "get", path: "/api/jobs/{id}" },
   cancelJob: { method: "delete", path: "/api/jobs/{id}" },
   createAssessment: { method: "post", path: "/api/assessments" },
@@ -33,6 +40,16 @@ export const CLIENT_ROUTES = {
 } as const;
 
 export type ClientMethod = keyof typeof CLIENT_ROUTES;
+
+/** The DELETE route of each kind of record. */
+export const DELETE_METHOD = {
+  mechanism: "deleteMechanism",
+  analysis: "deleteAnalysis",
+  sweep: "deleteSweep",
+  comparison: "deleteComparison",
+  assessment: "deleteAssessment",
+  studentLink: "revokeStudentLink",
+} as const satisfies Record<string, ClientMethod>;
 
 /** The files a `{file}` path segment stands for, by route. */
 export const CLIENT_FILES = {

@@ -62,6 +62,7 @@ interface Call {
   method: string;
   body?: string;
   contentType?: string;
+  deletionToken?: string;
 }
 
 function stub(responses: Response[]): { fetch: typeof fetch; calls: Call[] } {
@@ -73,6 +74,7 @@ function stub(responses: Response[]): { fetch: typeof fetch; calls: Call[] } {
       method: init?.method ?? "GET",
       body: init?.body as string,
       contentType: h["content-type"],
+      ...(h["x-deletion-token"] ? { deletionToken: h["x-deletion-token"] } : {}),
     });
     const r = responses.shift();
     if (!r) throw new Error("stub: no response left");
@@ -117,6 +119,29 @@ describe("OzoneCyclesClient", () => {
     const e = await c.createAnalysis({ mechanismId: "reference", condition: { altitude_km: 99 } }).catch((x) => x);
     expect(e).toBeInstanceOf(ApiError);
     expect([e.status, e.code, e.path]).toEqual([400, "invalid-request", "condition.altitude_km"]);
+  });
+
+  it("deletes a record with its token in the x-deletion-token header, and revokes a student link on its own route", async () => {
+    const s = stub([new Response(null, { status: 204 }), new Response(null, { status: 204 })]);
+    const c = new OzoneCyclesClient({ baseUrl: "http://h", fetch: s.fetch });
+    await c.deleteRecord("sweep", "p1", "tok-1");
+    await c.deleteRecord("studentLink", "s1", "tok-2");
+    expect(s.calls).toEqual([
+      {
+        url: "http://h/api/profiles/p1",
+        method: "DELETE",
+        body: undefined,
+        contentType: undefined,
+        deletionToken: "tok-1",
+      },
+      {
+        url: "http://h/api/assessments/student/s1",
+        method: "DELETE",
+        body: undefined,
+        contentType: undefined,
+        deletionToken: "tok-2",
+      },
+    ]);
   });
 
   it("polls a job until it is done", async () => {
