@@ -14,6 +14,7 @@ import { networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
+import { DETAIL_DEFAULTS, reactionDetail } from "@/lib/viz/reactionDetail";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { type ApiError, fetchMechanism, fetchMechanisms, type Problem } from "./api";
 import { BudgetPanel } from "./BudgetPanel";
@@ -55,6 +56,7 @@ export function Explorer(props: Props) {
   const [mechanismId, setMechanismId] = useState(props.mechanismId);
   const [condition, setCondition] = useState(props.condition);
   const [view, setView] = useState(props.view);
+  const [detailLimit, setDetailLimit] = useState(DETAIL_DEFAULTS.limit);
   const [cache, setCache] = useState<Record<string, MechanismView>>(
     props.initialMechanism ? { [props.initialMechanism.id]: props.initialMechanism } : {},
   );
@@ -119,14 +121,34 @@ export function Explorer(props: Props) {
   };
 
   const layout = useMemo(() => (mechanism ? networkLayout(mechanism) : null), [mechanism]);
+  const cycle = result?.cycles.cycles.find((c) => c.id === view.cycle) ?? null;
+  // the selected cycle and the inspected reaction stay drawn whatever the detail
+  const keepKey = [
+    ...(cycle?.steps.map((s) => s.reactionId) ?? []),
+    ...(view.select?.startsWith("r:") ? [view.select.slice(2)] : []),
+  ].join(" ");
+  const detail = useMemo(
+    () =>
+      mechanism
+        ? reactionDetail(mechanism, result, {
+            limit: detailLimit,
+            colorMode: view.colorMode,
+            keep: keepKey ? keepKey.split(" ") : [],
+          })
+        : null,
+    [mechanism, result, detailLimit, view.colorMode, keepKey],
+  );
   const elements = useMemo(
     () =>
-      mechanism && layout
-        ? networkElements(mechanism, layout, result, { colorMode: view.colorMode, showHeld: view.showHeld })
+      mechanism && layout && detail
+        ? networkElements(mechanism, layout, result, {
+            colorMode: view.colorMode,
+            showHeld: view.showHeld,
+            visible: new Set(detail.shown),
+          })
         : [],
-    [mechanism, layout, result, view.colorMode, view.showHeld],
+    [mechanism, layout, result, detail, view.colorMode, view.showHeld],
   );
-  const cycle = result?.cycles.cycles.find((c) => c.id === view.cycle) ?? null;
   const highlight = useMemo(() => cycleHighlight(elements, cycle), [elements, cycle]);
   const legend = useMemo(() => networkLegend(result, view.colorMode), [result, view.colorMode]);
   const selected = view.select && elements.some((e) => e.data.id === view.select) ? view.select : null;
@@ -212,6 +234,9 @@ export function Explorer(props: Props) {
             onColorMode={(colorMode) => setViewPart({ colorMode })}
             showHeld={view.showHeld}
             onShowHeld={(showHeld) => setViewPart({ showHeld })}
+            detailLimit={detailLimit}
+            onDetailLimit={setDetailLimit}
+            detail={detail}
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}

@@ -46,6 +46,7 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
     const d = el.data;
     if (d.kind === "species") half.set(d.id, { w: d.width / 2, h: o.chipHeight_px / 2 });
     if (d.kind === "reaction") half.set(d.id, { w: d.size / 2, h: d.size / 2 });
+    if (d.kind === "stub") half.set(d.id, { w: d.width / 2, h: 7.5 });
   }
   const frames = new Map<string, Box>();
   for (const el of elements) {
@@ -141,6 +142,15 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
         `<polygon class="reaction"${op(d.id)} points="${pts}" fill="${idle ? "#ffffff" : d.color}" stroke="${idle ? "#a9a69d" : "#ffffff"}" stroke-width="1.5" stroke-linejoin="round"><title>${esc(d.equation)}</title></polygon>`,
       );
     }
+  }
+  for (const el of elements) {
+    const d = el.data;
+    if (d.kind !== "stub") continue;
+    const p = pos.get(d.id)!;
+    out.push(
+      `<g class="stub"${op(d.id)}><rect x="${tx(p.x - d.width / 2)}" y="${ty(p.y - 7.5)}" width="${f(d.width)}" height="15" rx="3" fill="#ffffff" fill-opacity="0.9"/>` +
+        `<text x="${tx(p.x)}" y="${ty(p.y + 4)}" text-anchor="middle" font-size="11" fill="#4b5058">${esc(d.label)}</text></g>`,
+    );
   }
   for (const el of elements) {
     if (el.data.kind === "species")

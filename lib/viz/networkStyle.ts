@@ -66,6 +66,30 @@ export function networkStyle(): StyleRule[] {
       style: { "border-style": "dashed", "font-weight": 400, color: "#4b5058" },
     },
     {
+      // a bath gas or O2 beside one reaction: a quiet tag, no chip
+      selector: "node.stub",
+      style: {
+        shape: "round-rectangle",
+        width: "data(width)",
+        height: 15,
+        "background-color": "#ffffff",
+        "background-opacity": 0.9,
+        "border-width": 0,
+        label: "data(label)",
+        "text-valign": "center",
+        "text-halign": "center",
+        "font-family": NETWORK_FONT,
+        "font-size": 11,
+        color: "#4b5058",
+        "z-index": 18,
+        events: "no",
+      },
+    },
+    {
+      selector: "edge.stub-edge",
+      style: { opacity: 0.7, "arrow-scale": 0.6 },
+    },
+    {
       selector: "node.reaction",
       style: {
         shape: "round-hexagon",

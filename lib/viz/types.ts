@@ -138,7 +138,18 @@ export interface EdgeData {
   width: number;
 }
 
-export type NodeData = SpeciesNodeData | ReactionNodeData | FrameNodeData;
+/** A bath gas or O2 drawn beside one reaction (see stubSpecies). */
+export interface StubNodeData {
+  id: string;
+  kind: "stub";
+  reactionId: string;
+  speciesId: string;
+  label: string;
+  /** label box width, px */
+  width: number;
+}
+
+export type NodeData = SpeciesNodeData | ReactionNodeData | FrameNodeData | StubNodeData;
 
 export interface GraphNode {
   group: "nodes";
