@@ -19,7 +19,9 @@ import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { type ApiError, fetchMechanism, fetchMechanisms, type Problem } from "./api";
 import { BudgetPanel } from "./BudgetPanel";
 import { ConditionsPanel } from "./ConditionsPanel";
+import { CycleMapCard } from "./CycleMapCard";
 import { CyclesPanel } from "./CyclesPanel";
+import { download } from "./download";
 import { ExportBar } from "./ExportBar";
 import { Inspector } from "./Inspector";
 import { LegendCard } from "./LegendCard";
@@ -162,16 +164,6 @@ export function Explorer(props: Props) {
   const bannerError = err && !err.path?.startsWith("condition.") ? err : null;
   const ss = result?.steadyState;
 
-  const download = (blob: Blob, name: string) => {
-    const url = URL.createObjectURL(blob);
-    const a = document.createElement("a");
-    a.href = url;
-    a.download = name;
-    document.body.appendChild(a);
-    a.click();
-    a.remove();
-    setTimeout(() => URL.revokeObjectURL(url), 1000);
-  };
   const fileStem = `ozone-${mechanismId}-${condition.altitude_km}km`;
   const onPng = async () => {
     const b = await net.current?.png();
@@ -349,6 +341,14 @@ export function Explorer(props: Props) {
         </div>
 
         <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">
+          <CycleMapCard
+            report={result?.cycles ?? null}
+            mechanism={mechanism}
+            selected={cycle?.id ?? null}
+            onSelect={(id) => setViewPart({ cycle: id })}
+            fileStem={fileStem}
+            title={`${mechanism?.title ?? mechanismId} · ${condition.altitude_km} km · cycles by family`}
+          />
           <CyclesPanel
             report={result?.cycles ?? null}
             selected={cycle?.id ?? null}
