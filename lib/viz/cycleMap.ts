@@ -13,6 +13,7 @@ import type { CatalyticCycle, CycleReport } from "../analysis/types";
 import { oklchToHex } from "./colorSpace";
 import { familyOf } from "./familyOf";
 import { formatPercent } from "./formatNumber";
+import { intersects, type Rect, rectAround } from "./labelBox";
 import { parseEquation } from "./parseEquation";
 import type { MechanismView, Point } from "./types";
 
@@ -100,6 +101,10 @@ export function cycleMap(
   const maxLoss = Math.max(...drawn.map((c) => c.oxLoss_cm3s), 0);
 
   const nested = new Map<string, number>();
+  // family nodes (all of them, so that a label never moves onto a node that appears later) and placed labels
+  const taken: Rect[] = Object.values(PLACES).map((p) =>
+    rectAround(p, CYCLE_MAP_NODE_RADIUS_PX, CYCLE_MAP_NODE_RADIUS_PX),
+  );
   const loops = drawn.map((c): CycleMapLoop => {
     const through = loopFamilies(c, famOf);
     const key = through.join(">");
@@ -107,7 +112,10 @@ export function cycleMap(
     // each loop over the same families lies outside the ones before, clear of their strokes and labels
     const offset = nested.get(key) ?? 0;
     nested.set(key, offset + Math.max(width + 18, NEST_STEP_PX));
-    const { path, label } = loopGeometry(through, offset, width);
+    const { path, spots } = loopGeometry(through, offset, width);
+    const text = formatPercent(c.share);
+    const label = placeLabel(spots, text, taken);
+    taken.push(shareLabelBox(label, text));
     const main = c.family.split("-")[0];
     return {
       cycleId: c.id,
@@ -119,7 +127,7 @@ export function cycleMap(
       width,
       color: loopColor(main),
       path,
-      label: { ...label, text: formatPercent(c.share) },
+      label: { ...label, text },
     };
   });
 
@@ -171,21 +179,32 @@ const loopColor = (family: string): string => {
  * k-th loop over the same families bulges further. The label sits just
  * outside the middle of the first leg. `offset`: px beyond the innermost loop.
  */
-function loopGeometry(through: string[], offset: number, width: number): { path: string; label: Point } {
+function loopGeometry(
+  through: string[],
+  offset: number,
+  width: number,
+): { path: string; label: Point; spots: Point[] } {
   const pts = through.map((f) => PLACES[f]);
   if (pts.length === 1) {
     const p = pts[0];
     const s = 30 + offset;
     const top = p.y - CYCLE_MAP_NODE_RADIUS_PX - 0.75 * s;
+    const label = { x: p.x, y: round(top - s * 0.2 - width / 2 - 4) };
     return {
       path: `M ${f(p.x - 8)} ${f(p.y - 20)} C ${f(p.x - s)} ${f(top - s * 0.5)} ${f(p.x + s)} ${f(top - s * 0.5)} ${f(p.x + 8)} ${f(p.y - 20)}`,
-      label: { x: p.x, y: round(top - s * 0.2 - width / 2 - 4) },
+      label,
+      spots: [
+        label,
+        { x: round(p.x - s * 0.75 - 14), y: round(top) },
+        { x: round(p.x + s * 0.75 + 14), y: round(top) },
+      ],
     };
   }
   const bulge = 16 + offset + width / 2;
   const ring = [...pts, pts[0]];
   let path = `M ${f(ring[0].x)} ${f(ring[0].y)}`;
   let label: Point = ring[0];
+  const spots: Point[] = [];
   for (let i = 0; i + 1 < ring.length; i++) {
     const a = ring[i];
     const b = ring[i + 1];
@@ -198,12 +217,38 @@ function loopGeometry(through: string[], offset: number, width: number): { path:
       y: a.y + (2 * (b.y - a.y)) / 3 + n.y * bulge * 1.33,
     };
     path += ` C ${f(c1.x)} ${f(c1.y)} ${f(c2.x)} ${f(c2.y)} ${f(b.x)} ${f(b.y)}`;
-    if (i === 0) {
-      const out = bulge + width / 2 + 8;
-      label = { x: round((a.x + b.x) / 2 + n.x * out), y: round((a.y + b.y) / 2 + n.y * out) };
+    const out = width / 2 + 9;
+    for (const t of [0.5, 0.35, 0.65, 0.25, 0.75]) {
+      const q = cubicAt(a, c1, c2, b, t);
+      spots.push({ x: round(q.x + n.x * out), y: round(q.y + n.y * out) });
     }
+    if (i === 0) label = spots[0];
   }
-  return { path: `${path} Z`, label };
+  // the middle of every leg first, then the points either side of it
+  spots.sort((p, q) => spotRank(spots, p) - spotRank(spots, q));
+  return { path: `${path} Z`, label, spots };
+}
+
+const spotRank = (all: Point[], p: Point) => (all.indexOf(p) % 5) * 100 + Math.floor(all.indexOf(p) / 5);
+
+function cubicAt(a: Point, b: Point, c: Point, d: Point, t: number): Point {
+  const u = 1 - t;
+  return {
+    x: u * u * u * a.x + 3 * u * u * t * b.x + 3 * u * t * t * c.x + t * t * t * d.x,
+    y: u * u * u * a.y + 3 * u * u * t * b.y + 3 * u * t * t * c.y + t * t * t * d.y,
+  };
+}
+
+/** Box of a share label ("52 %") centred at p, px. */
+export const shareLabelBox = (p: Point, text: string): Rect => rectAround(p, ([...text].length * 6.5 + 4) / 2, 7.5);
+
+/** The first spot whose label box clears every label placed before and every family node. */
+function placeLabel(spots: Point[], text: string, taken: Rect[]): Point {
+  for (const p of spots) {
+    const box = shareLabelBox(p, text);
+    if (!taken.some((t) => intersects(t, box))) return p;
+  }
+  return spots[0];
 }
 
 const round = (v: number) => Math.round(v * 10) / 10;

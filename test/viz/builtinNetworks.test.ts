@@ -10,7 +10,8 @@ import { runAnalysis } from "@/lib/engine/run-analysis";
 import type { AnalysisResult } from "@/lib/engine/types";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";
-import { intersects } from "@/lib/viz/labelBox";
+import { cycleMap, shareLabelBox } from "@/lib/viz/cycleMap";
+import { intersects, rectAround } from "@/lib/viz/labelBox";
 import { networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { reactionDetail } from "@/lib/viz/reactionDetail";
@@ -88,6 +89,22 @@ describe.each(BUILTIN_MECHANISMS.map((m) => m.id))("the %s network", (id) => {
       expect(d.shown.length + d.hidden).toBe(mech.reactions.length);
     }
   });
+
+  it.each(ALTITUDES_KM)(
+    "labels the cycle map at %i km without two share labels or a label and a node overlapping",
+    (z) => {
+      const map = cycleMap(results.get(`${id}@${z}`)!.cycles, mech);
+      const boxes = [
+        ...map.loops.map((l) => ({ id: l.cycleId, ...shareLabelBox(l.label, l.label.text) })),
+        ...map.nodes.map((n) => ({ id: n.family, ...rectAround(n, n.r, n.r) })),
+      ];
+      const clashes: string[] = [];
+      for (let i = 0; i < boxes.length; i++)
+        for (let j = i + 1; j < boxes.length; j++)
+          if (intersects(boxes[i], boxes[j])) clashes.push(`${boxes[i].id} × ${boxes[j].id}`);
+      expect(clashes).toEqual([]);
+    },
+  );
 
   it("matches the stored layout data at 20, 30 and 40 km", () => {
     const rows = [
