@@ -87,6 +87,18 @@ export function networkElements(
       classes: "frame",
     };
   });
+  // titles above the frames, where the layout kept their boxes clear
+  const titleBox = new Map(layout.labels.filter((b) => b.kind === "frame").map((b) => [b.id, b]));
+  for (const f of families) {
+    const b = titleBox.get(frameNodeId(f));
+    if (!b) continue;
+    nodes.push({
+      group: "nodes",
+      data: { id: `ft:${f}`, kind: "title", family: f, label: familyLabel(f), ink: familyStyle(f).frameInk },
+      position: { x: (b.x0 + b.x1) / 2, y: (b.y0 + b.y1) / 2 },
+      classes: "title",
+    });
+  }
   for (const s of shown) {
     const p = layout.species[s.id];
     const st = familyStyle(p.family);

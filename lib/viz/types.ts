@@ -149,7 +149,17 @@ export interface StubNodeData {
   width: number;
 }
 
-export type NodeData = SpeciesNodeData | ReactionNodeData | FrameNodeData | StubNodeData;
+/** A family frame's title, drawn as its own node so that it sits above the edges that pass. */
+export interface TitleNodeData {
+  id: string;
+  kind: "title";
+  family: string;
+  label: string;
+  /** text colour, hex */
+  ink: string;
+}
+
+export type NodeData = SpeciesNodeData | ReactionNodeData | FrameNodeData | StubNodeData | TitleNodeData;
 
 export interface GraphNode {
   group: "nodes";
