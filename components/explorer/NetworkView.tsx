@@ -5,7 +5,7 @@
  * step with them (data updated in place, so the view does not jump when the
  * numbers change) and reports clicks.
  */
-import type { Core, ElementDefinition, StylesheetJson } from "cytoscape";
+import type { Core, ElementDefinition, SingularElementReturnValue, StylesheetJson } from "cytoscape";
 import { forwardRef, useEffect, useImperativeHandle, useRef, useState } from "react";
 import type { Highlight } from "@/lib/viz/cycleHighlight";
 import { formatNumber } from "@/lib/viz/formatNumber";
@@ -192,16 +192,22 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): void {
   cy.batch(() => {
     const want = new Set(elements.map((e) => e.data.id));
-    const gone = cy.elements().filter((el) => !want.has(el.id()));
+    const all = cy.elements();
+    const gone = all.filter((el) => !want.has(el.id()));
     if (gone.nonempty()) cy.remove(gone);
+    // one lookup table instead of a getElementById (a new collection) per element
+    const have = new Map<string, SingularElementReturnValue>();
+    all.forEach((el) => {
+      if (want.has(el.id())) have.set(el.id(), el);
+    });
     const on = new Set(hl.on);
     const lit = (id: string) => (on.size === 0 ? "" : on.has(id) ? " hl" : " dim");
     // frames first so that children find their parent
     const sorted = [...elements].sort((a, b) => rank(a) - rank(b));
     for (const el of sorted) {
       const classes = `${el.classes}${lit(el.data.id)}`;
-      const ex = cy.getElementById(el.data.id);
-      if (ex.empty()) {
+      const ex = have.get(el.data.id);
+      if (!ex) {
         cy.add({ ...(el as unknown as ElementDefinition), classes });
         continue;
       }
