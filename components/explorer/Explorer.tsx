@@ -10,7 +10,7 @@ import { cycleHighlight } from "@/lib/viz/cycleHighlight";
 import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import { graphSvg } from "@/lib/viz/graphSvg";
-import { networkElements } from "@/lib/viz/networkElements";
+import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
@@ -147,6 +147,7 @@ export function Explorer(props: Props) {
             colorMode: view.colorMode,
             showHeld: view.showHeld,
             visible: new Set(detail.shown),
+            onlyTouched: mechanism.species.length > LARGE_MECHANISM_SPECIES,
           })
         : [],
     [mechanism, layout, result, detail, view.colorMode, view.showHeld],
@@ -229,6 +230,7 @@ export function Explorer(props: Props) {
             detailLimit={detailLimit}
             onDetailLimit={setDetailLimit}
             detail={detail}
+            largeMechanism={!!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES}
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}

@@ -11,6 +11,8 @@ interface Props {
   detailLimit: number;
   onDetailLimit(limit: number): void;
   detail: ReactionDetail | null;
+  /** the mechanism is so large that only the species of the drawn reactions are shown */
+  largeMechanism: boolean;
   onFit(): void;
   onZoom(factor: number): void;
   loading: boolean;
@@ -31,6 +33,7 @@ export function Toolbar({
   detailLimit,
   onDetailLimit,
   detail,
+  largeMechanism,
   onFit,
   onZoom,
   loading,
@@ -89,6 +92,7 @@ export function Toolbar({
           <span data-testid="hidden-count" className="tabular-nums text-stone-500">
             {detail.shown.length} drawn · {detail.hidden} hidden
             {detail.zeroFlux ? ` (${detail.zeroFlux} with zero flux)` : ""}
+            {largeMechanism ? " · large mechanism: only the species of the drawn reactions are shown" : ""}
           </span>
         ) : null}
       </label>

@@ -41,7 +41,12 @@ export const ELEMENTS_DEFAULTS = {
 export interface ElementsOptions extends Partial<typeof ELEMENTS_DEFAULTS> {
   /** ids of the reactions drawn; default every reaction of the layout */
   visible?: ReadonlySet<string>;
+  /** draw only the species that a drawn reaction touches (for very large mechanisms); default false */
+  onlyTouched?: boolean;
 }
+
+/** Above this many species the explorer draws only those of the drawn reactions. */
+export const LARGE_MECHANISM_SPECIES = 300;
 
 /** Colour of reactions and edges before any analysis exists, or at zero flux. */
 export const IDLE_COLOR = "#c9c7c0";
@@ -65,7 +70,15 @@ export function networkElements(
   const oxScale = signedLogScale([...ox.values()]);
 
   const speciesById = new Map(mech.species.map((s) => [s.id, s]));
-  const shown = mech.species.filter((s) => layout.species[s.id] && (o.showHeld || s.role === "solved"));
+  const touched = new Set<string>();
+  if (options.onlyTouched)
+    for (const r of mech.reactions)
+      if (!options.visible || options.visible.has(r.id))
+        for (const t of [...parseEquation(r.equation).reactants, ...parseEquation(r.equation).products])
+          touched.add(t.species);
+  const shown = mech.species.filter(
+    (s) => layout.species[s.id] && (o.showHeld || s.role === "solved") && (!options.onlyTouched || touched.has(s.id)),
+  );
   const shownIds = new Set(shown.map((s) => s.id));
   const families = [...new Set(shown.map((s) => layout.species[s.id].family))];
   const frameOrder = layout.frames.map((f) => f.family);

@@ -9,7 +9,8 @@
  * (see stubSpecies). Reaction nodes go to the weighted centroid of the species
  * they touch (held species weigh less), then move along a golden-angle spiral
  * to the first spot where the node, its label and its stubs clear every chip,
- * frame title and reaction placed before.
+ * frame title and reaction placed before; one that finds no room near its
+ * species (inside a very large block) goes to an overflow lane below the board.
  * Positions depend on the mechanism only, never on the numbers or on which
  * reactions are drawn, so the picture stays put while the altitude or the
  * detail changes. Every label box is returned, so that tests can check that
@@ -207,6 +208,9 @@ export function networkLayout(
   const stubs: NetworkLayout["stubs"] = {};
   const solved = new Set(drawn.filter((s) => s.role === "solved").map((s) => s.id));
   const stubOrder = mech.species.filter((s) => stubbed.has(s.id)).map((s) => s.id);
+  let lane = 0;
+  // a large mechanism looks less far for room near its species, so that laying it out stays quick
+  const nearTries = mech.reactions.length > LARGE_REACTIONS ? NEAR_TRIES_LARGE : NEAR_TRIES;
   for (const rx of mech.reactions) {
     const eq = parseEquation(rx.equation);
     const touched = new Set([...eq.reactants, ...eq.products].map((t) => t.species));
@@ -226,7 +230,11 @@ export function networkLayout(
       rx.id,
       rxStubs.map((id) => label.get(id)!),
     );
-    const p = freeSpot(start, parts, occupied, o.clearReaction_px);
+    // a reaction deep inside a crowded block goes to the overflow lane below the board instead
+    const p =
+      freeSpot(start, parts, occupied, o.clearReaction_px, nearTries) ??
+      freeSpot(laneStart(lane++, y), parts, occupied, o.clearReaction_px, LANE_TRIES);
+    if (!p) throw new RangeError(`networkLayout: no free spot for reaction ${rx.id} (board too crowded to place it)`);
     reactions[rx.id] = p;
     stubs[rx.id] = rxStubs.map((id, k) => ({
       speciesId: id,
@@ -297,8 +305,24 @@ const shift = (part: Part, p: Point): Rect => rectAround({ x: p.x + part.c.x, y:
 
 const GOLDEN_ANGLE = Math.PI * (3 - Math.sqrt(5));
 
-function freeSpot(start: Point, parts: Part[], occupied: RectIndex, clear: number): Point {
-  for (let i = 0; i < 20000; i++) {
+/** Spiral points tried around a reaction's centroid, and around its spot in the overflow lane. */
+const NEAR_TRIES = 6000;
+const NEAR_TRIES_LARGE = 300;
+/** Above this many reactions a mechanism is laid out with NEAR_TRIES_LARGE. */
+const LARGE_REACTIONS = 400;
+const LANE_TRIES = 20000;
+/** Reactions per row of the overflow lane, and the lane's grid, px. */
+const LANE_COLUMNS = 40;
+const LANE_CELL_PX = 70;
+
+/** Where the k-th reaction of the overflow lane starts looking, below a board whose rows end at boardBottom. */
+const laneStart = (k: number, boardBottom: number): Point => ({
+  x: (k % LANE_COLUMNS) * LANE_CELL_PX,
+  y: boardBottom + LANE_CELL_PX + Math.floor(k / LANE_COLUMNS) * LANE_CELL_PX,
+});
+
+function freeSpot(start: Point, parts: Part[], occupied: RectIndex, clear: number, tries: number): Point | null {
+  for (let i = 0; i < tries; i++) {
     const rad = 6 * Math.sqrt(i);
     const cand = {
       x: round(start.x + rad * Math.cos(i * GOLDEN_ANGLE)),
@@ -306,7 +330,7 @@ function freeSpot(start: Point, parts: Part[], occupied: RectIndex, clear: numbe
     };
     if (parts.every((part) => !occupied.hits(grown(shift(part, cand), clear)))) return cand;
   }
-  throw new RangeError("networkLayout: no free spot for a reaction within 20,000 tries (board too crowded)");
+  return null;
 }
 
 /** Boxes bucketed on a coarse grid, so that a candidate is checked against its neighbours only. */

@@ -143,3 +143,23 @@ describe("the default detail of the reference mechanism", () => {
     }
   });
 });
+
+describe("a mechanism of 2,000 species (invented, generated here)", () => {
+  it("still lays out: every reaction gets a spot, those without room near their species in the lane below", () => {
+    const species = Array.from({ length: 2000 }, (_, i) => ({
+      id: `X${i}`,
+      label: `X${i}`,
+      role: "solved" as const,
+      atoms: { C: 1 },
+    }));
+    const reactions = Array.from({ length: 3000 }, (_, i) => ({
+      id: `R${i}`,
+      equation: `X${i % 2000} + X${(i * 7) % 2000} -> X${(i * 13 + 1) % 2000}`,
+      rate: { law: "arrhenius" as const, A: 1e-12, EoverR_K: 0 },
+    }));
+    const layout = networkLayout({ species, reactions });
+    expect(Object.keys(layout.reactions)).toHaveLength(3000);
+    const chipsBottom = Math.max(...Object.values(layout.species).map((p) => p.y));
+    expect(Object.values(layout.reactions).some((p) => p.y > chipsBottom)).toBe(true);
+  }, 60_000);
+});

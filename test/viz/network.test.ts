@@ -247,3 +247,15 @@ describe("cycleHighlight", () => {
 function flux() {
   return networkElements(fixtureMechanism, layout, fixtureResult);
 }
+
+describe("networkElements on a large mechanism", () => {
+  it("draws only the species that the drawn reactions touch when asked to", () => {
+    const els = networkElements(fixtureMechanism, layout, fixtureResult, {
+      visible: new Set(["C1"]),
+      onlyTouched: true,
+    });
+    const species = els.filter((e) => e.data.kind === "species").map((e) => e.data.id);
+    // C1: Cl + O3 -> ClO + O2 (O2 is a stub, not a chip)
+    expect(species.sort()).toEqual(["s:Cl", "s:ClO", "s:O3"]);
+  });
+});
