@@ -4,6 +4,7 @@
  * labels on a white halo. Pure: a string, no DOM.
  */
 import type { CycleMap } from "./cycleMap";
+import { escapeXml } from "./escapeXml";
 import { NETWORK_FONT } from "./networkStyle";
 
 export interface CycleMapSvgOptions {
@@ -13,7 +14,7 @@ export interface CycleMapSvgOptions {
   selected?: string | null;
 }
 
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+const esc = escapeXml;
 
 export function cycleMapSvg(map: CycleMap, options: CycleMapSvgOptions = {}): string {
   const top = options.title ? 26 : 0;

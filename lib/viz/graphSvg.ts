@@ -3,6 +3,7 @@
  * positions with the same shapes and colours as the canvas (straight edges
  * instead of bezier ones). Pure: string in the end, no DOM.
  */
+import { escapeXml } from "./escapeXml";
 import { NETWORK_FONT } from "./networkStyle";
 import type { GraphElement, Point, SpeciesNodeData } from "./types";
 
@@ -26,7 +27,7 @@ export interface SvgOptions extends Partial<typeof SVG_DEFAULTS> {
   title?: string;
 }
 
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+const esc = escapeXml;
 const f = (v: number) => (Math.round(v * 10) / 10).toString();
 
 interface Box {

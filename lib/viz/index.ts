@@ -5,6 +5,7 @@ export * from "./cycleHighlight";
 export * from "./cycleMap";
 export * from "./cycleMapSvg";
 export * from "./divergingColor";
+export * from "./escapeXml";
 export * from "./explorerQuery";
 export * from "./familyLabel";
 export * from "./familyOf";

@@ -11,7 +11,7 @@ import type { AnalysisResult } from "@/lib/engine/types";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";
 import { cycleMap, shareLabelBox } from "@/lib/viz/cycleMap";
-import { intersects, rectAround } from "@/lib/viz/labelBox";
+import { intersects, type Rect, rectAround } from "@/lib/viz/labelBox";
 import { networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { reactionDetail } from "@/lib/viz/reactionDetail";
@@ -44,6 +44,15 @@ beforeAll(() => {
   }
 }, 120_000);
 
+/** Every pair of boxes that share area, as "a × b". */
+function clashes(boxes: (Rect & { id: string })[]): string[] {
+  const out: string[] = [];
+  for (let i = 0; i < boxes.length; i++)
+    for (let j = i + 1; j < boxes.length; j++)
+      if (intersects(boxes[i], boxes[j])) out.push(`${boxes[i].id} × ${boxes[j].id}`);
+  return out;
+}
+
 const positions = (els: ReturnType<typeof networkElements>) =>
   new Map(els.filter((e): e is GraphNode => e.group === "nodes" && !!e.position).map((e) => [e.data.id, e.position!]));
 
@@ -52,13 +61,8 @@ describe.each(BUILTIN_MECHANISMS.map((m) => m.id))("the %s network", (id) => {
   const layout = networkLayout(mech);
 
   it("has no two label boxes that intersect (chips, frame titles, reaction ids, stubs)", () => {
-    const boxes = layout.labels;
-    expect(boxes.length).toBeGreaterThan(mech.reactions.length);
-    const clashes: string[] = [];
-    for (let i = 0; i < boxes.length; i++)
-      for (let j = i + 1; j < boxes.length; j++)
-        if (intersects(boxes[i], boxes[j])) clashes.push(`${boxes[i].id} × ${boxes[j].id}`);
-    expect(clashes).toEqual([]);
+    expect(layout.labels.length).toBeGreaterThan(mech.reactions.length);
+    expect(clashes(layout.labels)).toEqual([]);
   });
 
   it("draws O2 and the bath gases as short stubs beside each reaction, never as one chip", () => {
