@@ -42,6 +42,7 @@ export function CycleMapCard({ report, mechanism, selected, onSelect, fileStem, 
             type="button"
             className={button}
             disabled={!map?.loops.length}
+            aria-label="Save the cycle map as SVG"
             onClick={() => download(new Blob([svg()], { type: "image/svg+xml" }), `${fileStem}-cycles.svg`)}
           >
             SVG
@@ -50,6 +51,7 @@ export function CycleMapCard({ report, mechanism, selected, onSelect, fileStem, 
             type="button"
             className={button}
             disabled={!map?.loops.length}
+            aria-label="Save the cycle map as PNG"
             onClick={async () => {
               const png = await svgToPng(svg(), map!.width, H);
               if (png) download(png, `${fileStem}-cycles.png`);

@@ -74,9 +74,10 @@ export function Toolbar({
           </label>
         </span>
       </fieldset>
-      <label className="flex items-center gap-1 text-[12px] text-stone-700">
-        <span>Detail</span>
+      <span className="flex items-center gap-1 text-[12px] text-stone-700">
+        <label htmlFor="network-detail">Detail</label>
         <select
+          id="network-detail"
           data-testid="detail"
           value={Number.isFinite(detailLimit) ? String(detailLimit) : "all"}
           onChange={(e) => onDetailLimit(e.target.value === "all" ? Infinity : Number(e.target.value))}
@@ -95,7 +96,7 @@ export function Toolbar({
             {largeMechanism ? " · large mechanism: only the species of the drawn reactions are shown" : ""}
           </span>
         ) : null}
-      </label>
+      </span>
       <label className="flex items-center gap-1 text-[12px] text-stone-700">
         <input type="checkbox" checked={showHeld} onChange={(e) => onShowHeld(e.target.checked)} />
         show held species

@@ -106,9 +106,12 @@ test("switching the colour mode recolours the edges and the legend", async ({ pa
   await expect(page.getByTestId("legend")).toContainText("Ox produced");
   await expect(page).toHaveURL(/color=ox/);
   const ox = await edges(page);
-  expect(ox.map((e) => e.id)).toEqual(flux.map((e) => e.id));
-  const changed = ox.filter((e, i) => e.color !== flux[i].color).length;
-  expect(changed).toBeGreaterThan(flux.length / 4);
+  // the detail ranks by Ox destroyed in this mode, so the drawn set may change; compare the edges drawn in both
+  const before = new Map(flux.map((e) => [e.id, e.color]));
+  const common = ox.filter((e) => before.has(e.id));
+  expect(common.length).toBeGreaterThan(10);
+  const changed = common.filter((e) => e.color !== before.get(e.id)).length;
+  expect(changed).toBeGreaterThan(common.length / 4);
   await shot(page, "explorer-ox-mode");
 });
 
@@ -178,13 +181,19 @@ test("the permalink copies and opens in a fresh page with the same numbers", asy
 
 test("the graph exports as PNG and SVG and the tables as CSV and JSON", async ({ page }) => {
   await openExplorer(page, "m=oxygen-chlorine&z=40");
-  const [png] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "PNG" }).click()]);
+  const [png] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "PNG", exact: true }).click(),
+  ]);
   expect(png.suggestedFilename()).toMatch(/\.png$/);
   const pngPath = "test-results/downloads/graph.png";
   await png.saveAs(pngPath);
   const { readFileSync } = await import("node:fs");
   expect(readFileSync(pngPath).subarray(1, 4).toString()).toBe("PNG");
-  const [svg] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "SVG" }).click()]);
+  const [svg] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "SVG", exact: true }).click(),
+  ]);
   const svgPath = "test-results/downloads/graph.svg";
   await svg.saveAs(svgPath);
   const text = readFileSync(svgPath, "utf8");

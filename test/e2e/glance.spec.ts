@@ -50,19 +50,53 @@ test("the cycle map's loops and its folded rest add up to the cycles' shares of 
   await page.getByTestId("cycle-map").screenshot({ path: "test-results/screenshots/glance-cycle-map.png" });
 });
 
+/** A point on the loop's stroke, in page coordinates (the middle of its bounding box is often inside the petal). */
+async function onStroke(page: Page, index: number) {
+  return page
+    .getByTestId("cycle-loop")
+    .nth(index)
+    .evaluate((g) => {
+      const path = g.querySelector("path:last-of-type") as SVGPathElement;
+      const p = path.getPointAtLength(path.getTotalLength() * 0.25);
+      const m = path.getScreenCTM()!;
+      return { x: m.a * p.x + m.c * p.y + m.e, y: m.b * p.x + m.d * p.y + m.f };
+    });
+}
+
 test("pressing a loop, or Enter on it, opens that cycle in the species network", async ({ page }) => {
   await openExplorer(page, "m=reference&z=35");
   const loop = page.getByTestId("cycle-loop").first();
   const id = (await loop.getAttribute("data-cycle"))!;
-  await loop.click();
+  const at = await onStroke(page, 0);
+  await page.mouse.click(at.x, at.y);
   await expect.poll(() => new URL(page.url()).searchParams.get("cycle")).toBe(id);
   await expect(loop).toHaveAttribute("aria-pressed", "true");
   expect((await nodes(page)).some((n) => n.classes.includes("hl"))).toBe(true);
-  await loop.click();
+  await page.mouse.click(at.x, at.y);
   await expect(loop).toHaveAttribute("aria-pressed", "false");
   const second = page.getByTestId("cycle-loop").nth(1);
   await second.focus();
   await page.keyboard.press("Enter");
   await expect(second).toHaveAttribute("aria-pressed", "true");
   await shot(page, "glance-cycle-from-map");
+});
+
+test("the cycle map exports as SVG and PNG", async ({ page }) => {
+  await openExplorer(page, "m=oxygen-chlorine&z=40");
+  const { readFileSync } = await import("node:fs");
+  const [svg] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "Save the cycle map as SVG" }).click(),
+  ]);
+  expect(svg.suggestedFilename()).toMatch(/-cycles\.svg$/);
+  await svg.saveAs("test-results/downloads/cycles.svg");
+  const text = readFileSync("test-results/downloads/cycles.svg", "utf8");
+  expect(text.startsWith("<svg")).toBe(true);
+  expect(text.match(/<path class="loop"/g)?.length).toBe(await page.getByTestId("cycle-loop").count());
+  const [png] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "Save the cycle map as PNG" }).click(),
+  ]);
+  await png.saveAs("test-results/downloads/cycles.png");
+  expect(readFileSync("test-results/downloads/cycles.png").subarray(1, 4).toString()).toBe("PNG");
 });
