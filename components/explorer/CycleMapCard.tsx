@@ -110,7 +110,7 @@ export function CycleMapCard({ report, mechanism, selected, onSelect, fileStem, 
                     strokeLinecap="round"
                   />
                   {/* a wider invisible stroke so that thin loops are easy to hit */}
-                  <path d={l.path} fill="none" stroke="transparent" strokeWidth={Math.max(l.width, 12)} />
+                  <path d={l.path} fill="none" stroke="transparent" strokeWidth={Math.max(l.width, 9)} />
                 </g>
               );
             })}

@@ -4,7 +4,7 @@
  * each catalytic cycle is a closed loop that leaves Ox, passes through the
  * families its steps touch and comes back, drawn as a petal whose width is in
  * proportion to the cycle's Ox loss and which is labelled with its share.
- * Loops through the same families nest, larger loss innermost; a cycle of
+ * Loops that share a leg nest, larger loss innermost; a cycle of
  * odd oxygen alone is a teardrop above the Ox node. The look is this
  * project's own. Pure: positions depend on nothing but the family, so a
  * change of altitude changes widths and labels only. Units: px.
@@ -107,11 +107,13 @@ export function cycleMap(
   );
   const loops = drawn.map((c): CycleMapLoop => {
     const through = loopFamilies(c, famOf);
-    const key = through.join(">");
+    // legs of the loop, Ox → … → Ox (a loop of Ox alone has the one leg Ox → Ox)
+    const ring = [...through, through[0]];
+    const legs = through.length === 1 ? ["Ox>Ox"] : through.map((f, i) => `${f}>${ring[i + 1]}`);
     const width = round(Math.max(o.minWidth_px, (o.maxWidth_px * c.oxLoss_cm3s) / maxLoss));
-    // each loop over the same families lies outside the ones before, clear of their strokes and labels
-    const offset = nested.get(key) ?? 0;
-    nested.set(key, offset + Math.max(width + 18, NEST_STEP_PX));
+    // a loop lies outside every loop drawn before it on any of its legs, clear of their strokes and labels
+    const offset = Math.max(0, ...legs.map((l) => nested.get(l) ?? 0));
+    for (const l of legs) nested.set(l, offset + Math.max(width + 18, NEST_STEP_PX));
     const { path, spots } = loopGeometry(through, offset, width);
     const text = formatPercent(c.share);
     const label = placeLabel(spots, text, taken);
