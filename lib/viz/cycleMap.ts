@@ -32,12 +32,12 @@ export type CycleMapOptions = Partial<typeof CYCLE_MAP_DEFAULTS>;
 
 /** Families in the order a loop visits them, clockwise from the top left, and their places. */
 const PLACES: Record<string, Point> = {
-  Ox: { x: 170, y: 140 },
-  HOx: { x: 58, y: 62 },
-  NOx: { x: 282, y: 62 },
-  BrOx: { x: 282, y: 218 },
-  reservoir: { x: 170, y: 246 },
-  ClOx: { x: 58, y: 218 },
+  Ox: { x: 170, y: 166 },
+  HOx: { x: 62, y: 88 },
+  NOx: { x: 278, y: 88 },
+  BrOx: { x: 278, y: 244 },
+  reservoir: { x: 170, y: 272 },
+  ClOx: { x: 62, y: 244 },
 };
 const VISIT_ORDER = ["HOx", "NOx", "BrOx", "reservoir", "ClOx"];
 const SHORT: Record<string, string> = { reservoir: "Reserv." };
@@ -46,7 +46,8 @@ const HUES: Record<string, number> = { Ox: 300, HOx: 200, NOx: 130, ClOx: 60, Br
 /** Least distance between the middles of two nested loops, px. */
 const NEST_STEP_PX = 28;
 
-export const CYCLE_MAP_SIZE = { width: 340, height: 280 };
+/** Canvas, px: room above and at the sides for the loops that bulge out of the ring of families. */
+export const CYCLE_MAP_SIZE = { width: 340, height: 316 };
 export const CYCLE_MAP_NODE_RADIUS_PX = 25;
 
 export interface CycleMapNode extends Point {
