@@ -1,7 +1,7 @@
 /**
  * A standalone SVG picture of the network, drawn from the element data and
  * positions with the same shapes and colours as the canvas (straight edges
- * instead of bezier ones). Pure: string in the end, no DOM.
+ * like the canvas). Pure: string in the end, no DOM.
  */
 import { escapeXml } from "./escapeXml";
 import { NETWORK_FONT } from "./networkStyle";
