@@ -66,7 +66,11 @@ export function CycleMapCard({ report, mechanism, selected, onSelect, fileStem, 
         <p className="px-3 py-4 text-sm text-stone-500">Waiting for the first analysis…</p>
       ) : (
         <figure className="px-1 pb-1">
-          <svg data-testid="cycle-map" viewBox={`0 0 ${map.width} ${map.height}`} className="h-auto w-full lg:max-h-[210px]">
+          <svg
+            data-testid="cycle-map"
+            viewBox={`0 0 ${map.width} ${map.height}`}
+            className="h-auto w-full lg:max-h-[210px]"
+          >
             <title>
               Catalytic cycles as loops through the families they pass; width in proportion to the odd oxygen each
               destroys
