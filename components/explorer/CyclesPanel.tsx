@@ -28,7 +28,7 @@ export function CyclesPanel({ report, selected, onSelect, onInspectReaction }: P
           </span>
         ) : null
       }
-      className="flex max-h-[520px] min-h-0 flex-col lg:max-h-none lg:flex-1"
+      className="flex max-h-[520px] min-h-0 flex-col lg:max-h-none lg:min-h-[200px] lg:flex-1"
     >
       <p className="px-3 pt-1.5 text-[11px] text-stone-500">
         Sorted by odd oxygen destroyed (molecules cm⁻³ s⁻¹). Press a cycle to light its steps in the network.

@@ -10,16 +10,19 @@ import { cycleHighlight } from "@/lib/viz/cycleHighlight";
 import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import { graphSvg } from "@/lib/viz/graphSvg";
-import { networkElements } from "@/lib/viz/networkElements";
+import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
+import { DETAIL_DEFAULTS, reactionDetail } from "@/lib/viz/reactionDetail";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { DeletionTokenNote } from "../DeletionTokenNote";
 import { type ApiError, fetchMechanism, fetchMechanisms, type Problem } from "./api";
 import { BudgetPanel } from "./BudgetPanel";
 import { ConditionsPanel } from "./ConditionsPanel";
+import { CycleMapCard } from "./CycleMapCard";
 import { CyclesPanel } from "./CyclesPanel";
+import { download } from "./download";
 import { ExportBar } from "./ExportBar";
 import { Inspector } from "./Inspector";
 import { LegendCard } from "./LegendCard";
@@ -56,6 +59,7 @@ export function Explorer(props: Props) {
   const [mechanismId, setMechanismId] = useState(props.mechanismId);
   const [condition, setCondition] = useState(props.condition);
   const [view, setView] = useState(props.view);
+  const [detailLimit, setDetailLimit] = useState(DETAIL_DEFAULTS.limit);
   const [cache, setCache] = useState<Record<string, MechanismView>>(
     props.initialMechanism ? { [props.initialMechanism.id]: props.initialMechanism } : {},
   );
@@ -121,14 +125,35 @@ export function Explorer(props: Props) {
   };
 
   const layout = useMemo(() => (mechanism ? networkLayout(mechanism) : null), [mechanism]);
+  const cycle = result?.cycles.cycles.find((c) => c.id === view.cycle) ?? null;
+  // the selected cycle and the inspected reaction stay drawn whatever the detail
+  const keepKey = [
+    ...(cycle?.steps.map((s) => s.reactionId) ?? []),
+    ...(view.select?.startsWith("r:") ? [view.select.slice(2)] : []),
+  ].join(" ");
+  const detail = useMemo(
+    () =>
+      mechanism
+        ? reactionDetail(mechanism, result, {
+            limit: detailLimit,
+            colorMode: view.colorMode,
+            keep: keepKey ? keepKey.split(" ") : [],
+          })
+        : null,
+    [mechanism, result, detailLimit, view.colorMode, keepKey],
+  );
   const elements = useMemo(
     () =>
-      mechanism && layout
-        ? networkElements(mechanism, layout, result, { colorMode: view.colorMode, showHeld: view.showHeld })
+      mechanism && layout && detail
+        ? networkElements(mechanism, layout, result, {
+            colorMode: view.colorMode,
+            showHeld: view.showHeld,
+            visible: new Set(detail.shown),
+            onlyTouched: mechanism.species.length > LARGE_MECHANISM_SPECIES,
+          })
         : [],
-    [mechanism, layout, result, view.colorMode, view.showHeld],
+    [mechanism, layout, result, detail, view.colorMode, view.showHeld],
   );
-  const cycle = result?.cycles.cycles.find((c) => c.id === view.cycle) ?? null;
   const highlight = useMemo(() => cycleHighlight(elements, cycle), [elements, cycle]);
   const legend = useMemo(() => networkLegend(result, view.colorMode), [result, view.colorMode]);
   const selected = view.select && elements.some((e) => e.data.id === view.select) ? view.select : null;
@@ -142,16 +167,6 @@ export function Explorer(props: Props) {
   const bannerError = err && !err.path?.startsWith("condition.") ? err : null;
   const ss = result?.steadyState;
 
-  const download = (blob: Blob, name: string) => {
-    const url = URL.createObjectURL(blob);
-    const a = document.createElement("a");
-    a.href = url;
-    a.download = name;
-    document.body.appendChild(a);
-    a.click();
-    a.remove();
-    setTimeout(() => URL.revokeObjectURL(url), 1000);
-  };
   const fileStem = `ozone-${mechanismId}-${condition.altitude_km}km`;
   const onPng = async () => {
     const b = await net.current?.png();
@@ -215,6 +230,10 @@ export function Explorer(props: Props) {
             onColorMode={(colorMode) => setViewPart({ colorMode })}
             showHeld={view.showHeld}
             onShowHeld={(showHeld) => setViewPart({ showHeld })}
+            detailLimit={detailLimit}
+            onDetailLimit={setDetailLimit}
+            detail={detail}
+            largeMechanism={!!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES}
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}
@@ -343,6 +362,14 @@ export function Explorer(props: Props) {
         </div>
 
         <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">
+          <CycleMapCard
+            report={result?.cycles ?? null}
+            mechanism={mechanism}
+            selected={cycle?.id ?? null}
+            onSelect={(id) => setViewPart({ cycle: id })}
+            fileStem={fileStem}
+            title={`${mechanism?.title ?? mechanismId} · ${condition.altitude_km} km · cycles by family`}
+          />
           <CyclesPanel
             report={result?.cycles ?? null}
             selected={cycle?.id ?? null}

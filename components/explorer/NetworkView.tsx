@@ -5,7 +5,7 @@
  * step with them (data updated in place, so the view does not jump when the
  * numbers change) and reports clicks.
  */
-import type { Core, ElementDefinition, StylesheetJson } from "cytoscape";
+import type { Core, ElementDefinition, SingularElementReturnValue, StylesheetJson } from "cytoscape";
 import { forwardRef, useEffect, useImperativeHandle, useRef, useState } from "react";
 import type { Highlight } from "@/lib/viz/cycleHighlight";
 import { formatNumber } from "@/lib/viz/formatNumber";
@@ -184,41 +184,59 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   );
 });
 
+/**
+ * Brings the canvas in step with the element data. Only what changed is
+ * touched: every data() or classes() call makes cytoscape restyle that
+ * element, which is most of the cost of a repaint.
+ */
 function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): void {
   cy.batch(() => {
     const want = new Set(elements.map((e) => e.data.id));
-    cy.elements().forEach((el) => {
-      if (!want.has(el.id())) el.remove();
+    const all = cy.elements();
+    const gone = all.filter((el) => !want.has(el.id()));
+    if (gone.nonempty()) cy.remove(gone);
+    // one lookup table instead of a getElementById (a new collection) per element
+    const have = new Map<string, SingularElementReturnValue>();
+    all.forEach((el) => {
+      if (want.has(el.id())) have.set(el.id(), el);
     });
+    const on = new Set(hl.on);
+    const lit = (id: string) => (on.size === 0 ? "" : on.has(id) ? " hl" : " dim");
     // frames first so that children find their parent
     const sorted = [...elements].sort((a, b) => rank(a) - rank(b));
     for (const el of sorted) {
-      const ex = cy.getElementById(el.data.id);
-      if (ex.nonempty()) {
-        // id, parent and edge ends are fixed for a given layout; cytoscape refuses to change them through data()
-        const { id: _id, ...rest } = el.data as unknown as Record<string, unknown>;
-        delete rest.parent;
-        delete rest.source;
-        delete rest.target;
-        ex.data(rest);
-        ex.classes(el.classes);
-      } else {
-        cy.add(el as unknown as ElementDefinition);
+      const classes = `${el.classes}${lit(el.data.id)}`;
+      const ex = have.get(el.data.id);
+      if (!ex) {
+        cy.add({ ...(el as unknown as ElementDefinition), classes });
+        continue;
       }
+      // id, parent and edge ends are fixed for a given layout; cytoscape refuses to change them through data()
+      const changed: Record<string, unknown> = {};
+      let any = false;
+      for (const [k, v] of Object.entries(el.data)) {
+        if (k === "id" || k === "parent" || k === "source" || k === "target") continue;
+        if (ex.data(k) !== v) {
+          changed[k] = v;
+          any = true;
+        }
+      }
+      if (any) ex.data(changed);
+      if (!sameClasses(ex.classes(), classes)) ex.classes(classes);
     }
-    const on = new Set(hl.on);
-    if (on.size) {
-      cy.elements().forEach((el) => {
-        const lit = on.has(el.id());
-        el.toggleClass("hl", lit);
-        el.toggleClass("dim", !lit);
-      });
-    } else {
-      cy.elements().removeClass("hl dim");
+    const sel = cy.$(":selected");
+    if (selected === null) {
+      if (sel.nonempty()) sel.unselect();
+    } else if (sel.length !== 1 || sel[0].id() !== selected) {
+      sel.unselect();
+      cy.getElementById(selected).select();
     }
-    cy.elements().unselect();
-    if (selected) cy.getElementById(selected).select();
   });
+}
+
+function sameClasses(have: string[], want: string): boolean {
+  const w = want.split(" ").filter(Boolean);
+  return have.length === w.length && w.every((c) => have.includes(c));
 }
 
 const rank = (e: GraphElement) => (e.data.kind === "frame" ? 0 : e.group === "nodes" ? 1 : 2);

@@ -1,4 +1,5 @@
-/** Above the network: colour mode, held species, fit, and the status of the analysis. */
+/** Above the network: colour mode, detail, held species, fit, and the status of the analysis. */
+import { DETAIL_LEVELS, type ReactionDetail } from "@/lib/viz/reactionDetail";
 import type { ColorMode, MechanismView } from "@/lib/viz/types";
 
 interface Props {
@@ -6,6 +7,12 @@ interface Props {
   onColorMode(m: ColorMode): void;
   showHeld: boolean;
   onShowHeld(v: boolean): void;
+  /** largest number of reactions drawn */
+  detailLimit: number;
+  onDetailLimit(limit: number): void;
+  detail: ReactionDetail | null;
+  /** the mechanism is so large that only the species of the drawn reactions are shown */
+  largeMechanism: boolean;
   onFit(): void;
   onZoom(factor: number): void;
   loading: boolean;
@@ -23,6 +30,10 @@ export function Toolbar({
   onColorMode,
   showHeld,
   onShowHeld,
+  detailLimit,
+  onDetailLimit,
+  detail,
+  largeMechanism,
   onFit,
   onZoom,
   loading,
@@ -63,6 +74,29 @@ export function Toolbar({
           </label>
         </span>
       </fieldset>
+      <span className="flex items-center gap-1 text-[12px] text-stone-700">
+        <label htmlFor="network-detail">Detail</label>
+        <select
+          id="network-detail"
+          data-testid="detail"
+          value={Number.isFinite(detailLimit) ? String(detailLimit) : "all"}
+          onChange={(e) => onDetailLimit(e.target.value === "all" ? Infinity : Number(e.target.value))}
+          className="rounded border border-stone-300 bg-white px-1 py-0.5 text-[12px] focus:outline-2 focus:outline-stone-800"
+        >
+          {DETAIL_LEVELS.map((n) => (
+            <option key={String(n)} value={Number.isFinite(n) ? String(n) : "all"}>
+              {Number.isFinite(n) ? `top ${n} reactions` : "every reaction with flux"}
+            </option>
+          ))}
+        </select>
+        {detail && detail.covered !== null ? (
+          <span data-testid="hidden-count" className="tabular-nums text-stone-500">
+            {detail.shown.length} drawn · {detail.hidden} hidden
+            {detail.zeroFlux ? ` (${detail.zeroFlux} with zero flux)` : ""}
+            {largeMechanism ? " · large mechanism: only the species of the drawn reactions are shown" : ""}
+          </span>
+        ) : null}
+      </span>
       <label className="flex items-center gap-1 text-[12px] text-stone-700">
         <input type="checkbox" checked={showHeld} onChange={(e) => onShowHeld(e.target.checked)} />
         show held species

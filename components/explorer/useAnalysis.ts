@@ -1,14 +1,19 @@
 "use client";
 /**
- * Recomputes the analysis whenever the request changes: waits for the input
- * to settle (debounce), cancels the request still in flight, and keeps the
- * previous result on screen until the new one arrives so nothing jumps.
+ * Recomputes the analysis whenever the request changes. A condition seen
+ * recently is repainted from the client's cache at once. Otherwise the hook
+ * waits a moment for the input to settle, cancels the request still in
+ * flight (AbortController), and paints only the answer to the newest
+ * request, keeping the previous result on screen until it arrives so that
+ * nothing jumps.
  */
 import { useEffect, useRef, useState } from "react";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
+import { recentCache } from "@/lib/viz/recentCache";
 import { ApiError, postAnalysis } from "./api";
 
-export const ANALYSIS_DEBOUNCE_MS = 350;
+/** Pause after the last change before asking the server, ms: one keyboard step of a slider is sent at once. */
+export const ANALYSIS_DEBOUNCE_MS = 40;
 
 export interface AnalysisState {
   id: string | null;
@@ -16,6 +21,8 @@ export interface AnalysisState {
   loading: boolean;
   error: ApiError | null;
 }
+
+type Computed = { id: string; result: AnalysisResult };
 
 /**
  * @param request what to compute; null to compute nothing
@@ -33,6 +40,9 @@ export function useAnalysis(
   });
   const key = request ? JSON.stringify(request) : null;
   const shownKey = useRef<string | null>(initial ? JSON.stringify(initial.request) : null);
+  const cache = useRef(recentCache<Computed>());
+  if (initial && !cache.current.get(JSON.stringify(initial.request)))
+    cache.current.set(JSON.stringify(initial.request), { id: initial.id, result: initial.result });
 
   useEffect(() => {
     if (!key) return;
@@ -40,16 +50,25 @@ export function useAnalysis(
       setState((s) => (s.error || s.loading ? { ...s, error: null, loading: false } : s));
       return;
     }
+    const hit = cache.current.get(key);
+    if (hit) {
+      shownKey.current = key;
+      setState({ id: hit.id, result: hit.result, loading: false, error: null });
+      return;
+    }
     const ctrl = new AbortController();
     setState((s) => ({ ...s, loading: true }));
     const timer = setTimeout(() => {
       postAnalysis(JSON.parse(key) as AnalysisRequest, ctrl.signal)
         .then((out) => {
+          cache.current.set(key, out);
+          // an answer that arrives after a newer request was made is kept in the cache but not painted
+          if (ctrl.signal.aborted) return;
           shownKey.current = key;
           setState({ id: out.id, result: out.result, loading: false, error: null });
         })
         .catch((e: unknown) => {
-          if ((e as Error).name === "AbortError") return;
+          if ((e as Error).name === "AbortError" || ctrl.signal.aborted) return;
           const err = e instanceof ApiError ? e : new ApiError(0, "client", String((e as Error).message ?? e));
           setState((s) => ({ ...s, loading: false, error: err }));
         });

@@ -1,8 +1,9 @@
 /**
  * A standalone SVG picture of the network, drawn from the element data and
  * positions with the same shapes and colours as the canvas (straight edges
- * instead of bezier ones). Pure: string in the end, no DOM.
+ * like the canvas). Pure: string in the end, no DOM.
  */
+import { escapeXml } from "./escapeXml";
 import { NETWORK_FONT } from "./networkStyle";
 import type { GraphElement, Point, SpeciesNodeData } from "./types";
 
@@ -26,7 +27,7 @@ export interface SvgOptions extends Partial<typeof SVG_DEFAULTS> {
   title?: string;
 }
 
-const esc = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
+const esc = escapeXml;
 const f = (v: number) => (Math.round(v * 10) / 10).toString();
 
 interface Box {
@@ -46,6 +47,7 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
     const d = el.data;
     if (d.kind === "species") half.set(d.id, { w: d.width / 2, h: o.chipHeight_px / 2 });
     if (d.kind === "reaction") half.set(d.id, { w: d.size / 2, h: d.size / 2 });
+    if (d.kind === "stub") half.set(d.id, { w: d.width / 2, h: 7.5 });
   }
   const frames = new Map<string, Box>();
   for (const el of elements) {
@@ -141,6 +143,15 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
         `<polygon class="reaction"${op(d.id)} points="${pts}" fill="${idle ? "#ffffff" : d.color}" stroke="${idle ? "#a9a69d" : "#ffffff"}" stroke-width="1.5" stroke-linejoin="round"><title>${esc(d.equation)}</title></polygon>`,
       );
     }
+  }
+  for (const el of elements) {
+    const d = el.data;
+    if (d.kind !== "stub") continue;
+    const p = pos.get(d.id)!;
+    out.push(
+      `<g class="stub"${op(d.id)}><rect x="${tx(p.x - d.width / 2)}" y="${ty(p.y - 7.5)}" width="${f(d.width)}" height="15" rx="3" fill="#ffffff" fill-opacity="0.9"/>` +
+        `<text x="${tx(p.x)}" y="${ty(p.y + 4)}" text-anchor="middle" font-size="11" fill="#4b5058">${esc(d.label)}</text></g>`,
+    );
   }
   for (const el of elements) {
     if (el.data.kind === "species")

@@ -6,15 +6,19 @@
  *
  * Encodings: edge colour = the reaction's flux on a log scale (sequential
  * ramp) or its odd-oxygen value (diverging ramp); edge width and reaction-node
- * size = log flux in both modes. Rates in molecules cm⁻³ s⁻¹.
+ * size = log flux in both modes. Bath gases and O2 are drawn as a stub per
+ * reaction (a small label node at the layout's stub spot and a short edge).
+ * Only the reactions in `visible` are drawn (see reactionDetail); the
+ * positions of the others stay reserved. Rates in molecules cm⁻³ s⁻¹.
  */
 import type { AnalysisResult } from "../engine/types";
 import { chipWidth, frameTitleWidth } from "./chipWidth";
 import { divergingColor } from "./divergingColor";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
+import { stubWidth } from "./labelBox";
 import { logScale } from "./logScale";
-import type { NetworkLayout } from "./networkLayout";
+import { type NetworkLayout, netCoefficients } from "./networkLayout";
 import { parseEquation } from "./parseEquation";
 import { reactionOxValue } from "./reactionOxValue";
 import { sequentialColor } from "./sequentialColor";
@@ -34,7 +38,15 @@ export const ELEMENTS_DEFAULTS = {
   decades: 8,
 };
 
-export type ElementsOptions = Partial<typeof ELEMENTS_DEFAULTS>;
+export interface ElementsOptions extends Partial<typeof ELEMENTS_DEFAULTS> {
+  /** ids of the reactions drawn; default every reaction of the layout */
+  visible?: ReadonlySet<string>;
+  /** draw only the species that a drawn reaction touches (for very large mechanisms); default false */
+  onlyTouched?: boolean;
+}
+
+/** Above this many species the explorer draws only those of the drawn reactions. */
+export const LARGE_MECHANISM_SPECIES = 300;
 
 /** Colour of reactions and edges before any analysis exists, or at zero flux. */
 export const IDLE_COLOR = "#c9c7c0";
@@ -42,6 +54,7 @@ export const IDLE_COLOR = "#c9c7c0";
 export const speciesNodeId = (id: string) => `s:${id}`;
 export const reactionNodeId = (id: string) => `r:${id}`;
 export const frameNodeId = (family: string) => `f:${family}`;
+export const stubNodeId = (reactionId: string, speciesId: string) => `t:${reactionId}:${speciesId}`;
 
 export function networkElements(
   mech: Pick<MechanismView, "species" | "reactions">,
@@ -56,7 +69,16 @@ export function networkElements(
   const flux = logScale([...rates.values()], { decades: o.decades });
   const oxScale = signedLogScale([...ox.values()]);
 
-  const shown = mech.species.filter((s) => layout.species[s.id] && (o.showHeld || s.role === "solved"));
+  const speciesById = new Map(mech.species.map((s) => [s.id, s]));
+  const touched = new Set<string>();
+  if (options.onlyTouched)
+    for (const r of mech.reactions)
+      if (!options.visible || options.visible.has(r.id))
+        for (const t of [...parseEquation(r.equation).reactants, ...parseEquation(r.equation).products])
+          touched.add(t.species);
+  const shown = mech.species.filter(
+    (s) => layout.species[s.id] && (o.showHeld || s.role === "solved") && (!options.onlyTouched || touched.has(s.id)),
+  );
   const shownIds = new Set(shown.map((s) => s.id));
   const families = [...new Set(shown.map((s) => layout.species[s.id].family))];
   const frameOrder = layout.frames.map((f) => f.family);
@@ -78,6 +100,18 @@ export function networkElements(
       classes: "frame",
     };
   });
+  // titles above the frames, where the layout kept their boxes clear
+  const titleBox = new Map(layout.labels.filter((b) => b.kind === "frame").map((b) => [b.id, b]));
+  for (const f of families) {
+    const b = titleBox.get(frameNodeId(f));
+    if (!b) continue;
+    nodes.push({
+      group: "nodes",
+      data: { id: `ft:${f}`, kind: "title", family: f, label: familyLabel(f), ink: familyStyle(f).frameInk },
+      position: { x: (b.x0 + b.x1) / 2, y: (b.y0 + b.y1) / 2 },
+      classes: "title",
+    });
+  }
   for (const s of shown) {
     const p = layout.species[s.id];
     const st = familyStyle(p.family);
@@ -107,7 +141,7 @@ export function networkElements(
   const edges: GraphEdge[] = [];
   for (const r of mech.reactions) {
     const pos = layout.reactions[r.id];
-    if (!pos) continue;
+    if (!pos || (options.visible && !options.visible.has(r.id))) continue;
     const rate = rates.get(r.id) ?? 0;
     const t = flux.normalize(rate);
     const active = result !== null && t > 0;
@@ -132,29 +166,47 @@ export function networkElements(
       position: { x: pos.x, y: pos.y },
       classes: `reaction${active ? "" : " idle"}`,
     });
-    const eq = parseEquation(r.equation);
-    const net = new Map<string, number>();
-    for (const term of eq.reactants) net.set(term.species, (net.get(term.species) ?? 0) - term.coef);
-    for (const term of eq.products) net.set(term.species, (net.get(term.species) ?? 0) + term.coef);
-    for (const [sp, c] of net) {
-      if (c === 0 || !shownIds.has(sp)) continue;
+    const net = netCoefficients(parseEquation(r.equation));
+    const ends: { sp: string; node: string; c: number }[] = [];
+    for (const [sp, c] of net) if (c !== 0 && shownIds.has(sp)) ends.push({ sp, node: speciesNodeId(sp), c });
+    for (const stub of o.showHeld ? (layout.stubs[r.id] ?? []) : []) {
+      const node = stubNodeId(r.id, stub.speciesId);
+      const sp = speciesById.get(stub.speciesId);
+      nodes.push({
+        group: "nodes",
+        data: {
+          id: node,
+          kind: "stub",
+          reactionId: r.id,
+          speciesId: stub.speciesId,
+          label: sp?.label || stub.speciesId,
+          width: stubWidth(sp?.label || stub.speciesId),
+        },
+        position: { x: stub.x, y: stub.y },
+        classes: "stub",
+      });
+      ends.push({ sp: stub.speciesId, node, c: net.get(stub.speciesId) ?? 0 });
+    }
+    for (const { sp, node, c } of ends) {
       const direction = c < 0 ? "in" : "out";
+      const stub = node.startsWith("t:");
       edges.push({
         group: "edges",
         data: {
           id: `e:${r.id}:${direction}:${sp}`,
           kind: "edge",
-          source: direction === "in" ? speciesNodeId(sp) : reactionNodeId(r.id),
-          target: direction === "in" ? reactionNodeId(r.id) : speciesNodeId(sp),
+          source: direction === "in" ? node : reactionNodeId(r.id),
+          target: direction === "in" ? reactionNodeId(r.id) : node,
           reactionId: r.id,
           speciesId: sp,
           direction,
           coef: Math.abs(c),
           rate_cm3s: rate,
           color,
-          width,
+          // a stub is a short tag, so it stays thin whatever the flux
+          width: stub ? Math.min(width, 2) : width,
         },
-        classes: `flow ${direction}${active ? "" : " idle"}`,
+        classes: `flow ${direction}${stub ? " stub-edge" : ""}${active ? "" : " idle"}`,
       });
     }
   }

@@ -24,17 +24,6 @@ export function networkStyle(): StyleRule[] {
         "border-width": 1,
         "border-color": "data(stroke)",
         "border-opacity": 0.35,
-        label: "data(label)",
-        "text-valign": "top",
-        "text-halign": "center",
-        "text-margin-y": -6,
-        "font-family": NETWORK_FONT,
-        "font-size": 16,
-        "font-weight": 600,
-        color: "data(stroke)",
-        "text-outline-color": "#ffffff",
-        "text-outline-width": 2.5,
-        "text-outline-opacity": 0.9,
         padding: "26px",
         "min-width": "data(minWidth)",
         "min-width-bias-left": "50%",
@@ -42,6 +31,31 @@ export function networkStyle(): StyleRule[] {
         events: "no",
       },
     },
+    {
+      // the frame's title is a node of its own above the edges, on a soft halo, so that no line runs through it
+      selector: "node.title",
+      style: {
+        shape: "round-rectangle",
+        width: 1,
+        height: 1,
+        "background-opacity": 0,
+        "border-width": 0,
+        label: "data(label)",
+        "text-valign": "center",
+        "text-halign": "center",
+        "font-family": NETWORK_FONT,
+        "font-size": 16,
+        "font-weight": 600,
+        color: "data(ink)",
+        "text-background-color": "#ffffff",
+        "text-background-opacity": 0.85,
+        "text-background-padding": "2px",
+        "text-background-shape": "round-rectangle",
+        "z-index": 50,
+        events: "no",
+      },
+    },
+    { selector: "node.title.dim", style: { opacity: 0.45 } },
     {
       selector: "node.species",
       style: {
@@ -66,6 +80,30 @@ export function networkStyle(): StyleRule[] {
       style: { "border-style": "dashed", "font-weight": 400, color: "#4b5058" },
     },
     {
+      // a bath gas or O2 beside one reaction: a quiet tag, no chip
+      selector: "node.stub",
+      style: {
+        shape: "round-rectangle",
+        width: "data(width)",
+        height: 15,
+        "background-color": "#ffffff",
+        "background-opacity": 0.9,
+        "border-width": 0,
+        label: "data(label)",
+        "text-valign": "center",
+        "text-halign": "center",
+        "font-family": NETWORK_FONT,
+        "font-size": 11,
+        color: "#4b5058",
+        "z-index": 18,
+        events: "no",
+      },
+    },
+    {
+      selector: "edge.stub-edge",
+      style: { opacity: 0.7, "arrow-scale": 0.6 },
+    },
+    {
       selector: "node.reaction",
       style: {
         shape: "round-hexagon",
@@ -84,7 +122,8 @@ export function networkStyle(): StyleRule[] {
     {
       selector: "edge.flow",
       style: {
-        "curve-style": "bezier",
+        // straight edges skip the control points a bezier edge needs on every redraw, and match the SVG export
+        "curve-style": "straight",
         width: "data(width)",
         "line-color": "data(color)",
         "target-arrow-color": "data(color)",

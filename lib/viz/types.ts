@@ -138,7 +138,28 @@ export interface EdgeData {
   width: number;
 }
 
-export type NodeData = SpeciesNodeData | ReactionNodeData | FrameNodeData;
+/** A bath gas or O2 drawn beside one reaction (see stubSpecies). */
+export interface StubNodeData {
+  id: string;
+  kind: "stub";
+  reactionId: string;
+  speciesId: string;
+  label: string;
+  /** label box width, px */
+  width: number;
+}
+
+/** A family frame's title, drawn as its own node so that it sits above the edges that pass. */
+export interface TitleNodeData {
+  id: string;
+  kind: "title";
+  family: string;
+  label: string;
+  /** text colour, hex */
+  ink: string;
+}
+
+export type NodeData = SpeciesNodeData | ReactionNodeData | FrameNodeData | StubNodeData | TitleNodeData;
 
 export interface GraphNode {
   group: "nodes";

@@ -48,11 +48,15 @@ test("the explorer opens with a network, cycles and a budget at the conditions i
 test("hiding held species removes them and their edges without moving anything else", async ({ page }) => {
   await openExplorer(page, "m=reference&z=40");
   const before = await nodes(page);
-  expect(before.some((n) => n.id === "s:O2")).toBe(true);
+  // O2 is drawn as a stub beside each reaction that makes or uses it
+  const o2Stub = (n: { id: string }) => n.id.startsWith("t:") && n.id.endsWith(":O2");
+  expect(before.some(o2Stub)).toBe(true);
+  expect(before.some((n) => n.id === "s:CH4")).toBe(true);
   await page.getByLabel("show held species").uncheck();
   await expect(page).toHaveURL(/spectators=hide/);
   const after = await nodes(page);
-  expect(after.some((n) => n.id === "s:O2")).toBe(false);
+  expect(after.some(o2Stub)).toBe(false);
+  expect(after.some((n) => n.id === "s:CH4")).toBe(false);
   expect((await edges(page)).some((e) => e.id.endsWith(":O2"))).toBe(false);
   expect(after.length).toBeLessThan(before.length);
   const was = new Map(before.map((n) => [n.id, n]));
@@ -83,7 +87,11 @@ test("moving the altitude slider recomputes, changes the numbers and the address
   const after = await numbers(page);
   expect(after.budget).not.toBe(before.budget);
   expect((await edges(page)).map((e) => e.width)).not.toEqual(widthsBefore);
-  expect(await places()).toEqual(placesBefore);
+  // the detail may draw other reactions at 40 km; every node drawn at both altitudes stays where it was
+  const was = new Map(placesBefore.map((p) => [p.id, p]));
+  const kept = (await places()).filter((p) => was.has(p.id));
+  expect(kept.length).toBeGreaterThan(placesBefore.length / 2);
+  for (const p of kept) expect(p, p.id).toEqual(was.get(p.id));
   // new numbers, same page geometry: nothing jumped
   expect(await boxes()).toEqual(boxesBefore);
   expect(await page.evaluate(() => window.scrollY)).toBe(0);
@@ -98,9 +106,12 @@ test("switching the colour mode recolours the edges and the legend", async ({ pa
   await expect(page.getByTestId("legend")).toContainText("Ox produced");
   await expect(page).toHaveURL(/color=ox/);
   const ox = await edges(page);
-  expect(ox.map((e) => e.id)).toEqual(flux.map((e) => e.id));
-  const changed = ox.filter((e, i) => e.color !== flux[i].color).length;
-  expect(changed).toBeGreaterThan(flux.length / 4);
+  // the detail ranks by Ox destroyed in this mode, so the drawn set may change; compare the edges drawn in both
+  const before = new Map(flux.map((e) => [e.id, e.color]));
+  const common = ox.filter((e) => before.has(e.id));
+  expect(common.length).toBeGreaterThan(10);
+  const changed = common.filter((e) => e.color !== before.get(e.id)).length;
+  expect(changed).toBeGreaterThan(common.length / 4);
   await shot(page, "explorer-ox-mode");
 });
 
@@ -170,13 +181,19 @@ test("the permalink copies and opens in a fresh page with the same numbers", asy
 
 test("the graph exports as PNG and SVG and the tables as CSV and JSON", async ({ page }) => {
   await openExplorer(page, "m=oxygen-chlorine&z=40");
-  const [png] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "PNG" }).click()]);
+  const [png] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "PNG", exact: true }).click(),
+  ]);
   expect(png.suggestedFilename()).toMatch(/\.png$/);
   const pngPath = "test-results/downloads/graph.png";
   await png.saveAs(pngPath);
   const { readFileSync } = await import("node:fs");
   expect(readFileSync(pngPath).subarray(1, 4).toString()).toBe("PNG");
-  const [svg] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "SVG" }).click()]);
+  const [svg] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "SVG", exact: true }).click(),
+  ]);
   const svgPath = "test-results/downloads/graph.svg";
   await svg.saveAs(svgPath);
   const text = readFileSync(svgPath, "utf8");

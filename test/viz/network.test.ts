@@ -65,10 +65,20 @@ describe("networkLayout", () => {
   });
 
   it("places every drawn species and every reaction, and never the third body", () => {
-    for (const s of fixtureMechanism.species.filter((s) => s.role !== "third-body"))
+    for (const s of fixtureMechanism.species.filter((s) => s.role !== "third-body" && !["O2", "N2"].includes(s.id)))
       expect(layout.species[s.id]).toBeDefined();
     expect(layout.species.M).toBeUndefined();
     for (const r of fixtureMechanism.reactions) expect(layout.reactions[r.id]).toBeDefined();
+  });
+
+  it("gives O2 and N2 a stub beside each reaction that changes them, instead of a chip", () => {
+    expect(layout.species.O2).toBeUndefined();
+    // O(1D) + N2 -> O + N2 leaves N2 unchanged: no stub; O + O3 -> 2 O2 makes O2: one stub
+    expect(layout.stubs.K2).toEqual([]);
+    expect(layout.stubs.K3.map((s) => s.speciesId)).toEqual(["O2"]);
+    const k3 = networkElements(fixtureMechanism, layout, fixtureResult).filter((e) => e.data.id.includes("K3"));
+    expect(k3.map((e) => e.data.id)).toContain("e:K3:out:O2");
+    expect(k3.find((e) => e.data.id === "e:K3:out:O2")!.data).toMatchObject({ target: "t:K3:O2", direction: "out" });
   });
 
   it("keeps reaction nodes off the species chips and apart from each other", () => {
@@ -237,3 +247,15 @@ describe("cycleHighlight", () => {
 function flux() {
   return networkElements(fixtureMechanism, layout, fixtureResult);
 }
+
+describe("networkElements on a large mechanism", () => {
+  it("draws only the species that the drawn reactions touch when asked to", () => {
+    const els = networkElements(fixtureMechanism, layout, fixtureResult, {
+      visible: new Set(["C1"]),
+      onlyTouched: true,
+    });
+    const species = els.filter((e) => e.data.kind === "species").map((e) => e.data.id);
+    // C1: Cl + O3 -> ClO + O2 (O2 is a stub, not a chip)
+    expect(species.sort()).toEqual(["s:Cl", "s:ClO", "s:O3"]);
+  });
+});
