@@ -27,6 +27,7 @@ import type {
   ReactionOx,
 } from "./types";
 import { validateState } from "./validateState";
+import { idRecord, ownValue } from "../idRecord";
 
 export const CYCLE_DEFAULTS: Required<CycleOptions> = {
   fminRelative: 1e-4,
@@ -79,7 +80,7 @@ export function analyseCycles(
     if (sp.role !== "solved") held[i] = 1;
   });
   for (const id of opt.heldSpecies) {
-    const i = mech.speciesIndex[id];
+    const i = ownValue(mech.speciesIndex, id);
     if (i === undefined) warnings.push(`held species "${id}" is not in mechanism "${mech.title}"; ignored`);
     else held[i] = 1;
   }
@@ -118,7 +119,7 @@ export function analyseCycles(
       if (d < 0) loss -= d;
       else prod += d;
     });
-    const present: Record<string, number> = {};
+    const present = idRecord<number>();
     mech.species.forEach((sp, i) => {
       if (w[i] > 0) present[sp.id] = w[i];
     });
@@ -209,8 +210,8 @@ export function analyseCycles(
   }));
 
   const heldTendencies = opt.heldSpecies
-    .map((id) => mech.speciesIndex[id])
-    .filter((i) => i !== undefined && mech.species[i].role === "solved")
+    .map((id) => ownValue(mech.speciesIndex, id))
+    .filter((i): i is number => i !== undefined && mech.species[i].role === "solved")
     .map((i) => ({
       species: mech.species[i].id,
       tendency_cm3s: nets.reduce((s, net, j) => {

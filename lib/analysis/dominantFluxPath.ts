@@ -18,6 +18,7 @@ import {
   speciesNode,
   speciesReactionGraph,
 } from "./speciesReactionGraph";
+import { ownValue } from "../idRecord";
 
 export interface FluxPathOptions {
   /** species ids treated as held (not passed through) besides those whose role is "held"; default none */
@@ -35,7 +36,7 @@ export function dominantFluxPath(
     ["fromId", fromId],
     ["toId", toId],
   ])
-    if (mech.speciesIndex[id] === undefined)
+    if (ownValue(mech.speciesIndex, id) === undefined)
       throw new InputError(name, `unknown species "${id}": not in mechanism "${mech.title}"`);
   if (!state || state.rate_cm3s?.length !== mech.reactions.length)
     throw new InputError("state.rate_cm3s", `give one rate per reaction (${mech.reactions.length})`);

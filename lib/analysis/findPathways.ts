@@ -32,6 +32,7 @@ import { reactionNet } from "./reactionNet";
 import { axpy, type SparseVector, snap, valueAt, weightedSum } from "./sparseVector";
 import type { Pathway, PathwayOptions, PathwaySet } from "./types";
 import { validateState } from "./validateState";
+import { idRecord, ownValue } from "../idRecord";
 
 export const PATHWAY_DEFAULTS: Required<Omit<PathwayOptions, "track">> = {
   fmin_cm3s: 0,
@@ -78,7 +79,7 @@ export function findPathways(
   if (!(opt.maxPathways >= 1))
     throw new InputError("options.maxPathways", `invalid limit ${opt.maxPathways}: give a count ≥ 1`);
   for (const id of opt.notBranching)
-    if (mech.speciesIndex[id] === undefined)
+    if (ownValue(mech.speciesIndex, id) === undefined)
       throw new InputError("options.notBranching", `unknown species "${id}": not in mechanism "${mech.title}"`);
 
   const nS = mech.species.length;
@@ -90,7 +91,7 @@ export function findPathways(
   const deletedNet = new Float64Array(nS);
   const deletedPos = new Float64Array(nS);
   const deletedNeg = new Float64Array(nS);
-  const deletedTracked: Record<string, { produced_cm3s: number; destroyed_cm3s: number }> = {};
+  const deletedTracked = idRecord<{ produced_cm3s: number; destroyed_cm3s: number }>();
   for (const [name] of tracked) deletedTracked[name] = { produced_cm3s: 0, destroyed_cm3s: 0 };
   const trackedSums = tracked.map(([name]) => deletedTracked[name]);
   let nullRate = 0;
@@ -188,7 +189,7 @@ export function findPathways(
     add(current, { rx: [j], mx: [1], net, rate: r, key: `${j}*1`, elementary: true });
   });
 
-  const excluded = new Set(opt.notBranching.map((id) => mech.speciesIndex[id]));
+  const excluded = new Set(opt.notBranching.map((id) => ownValue(mech.speciesIndex, id)));
   const order = mech.species
     .map((sp, i) => ({ i, tau: D0[i] > 0 ? state.numberDensity_cm3[i] / D0[i] : Number.POSITIVE_INFINITY, sp }))
     .filter((c) => c.sp.role === "solved" && !excluded.has(c.i) && c.tau < opt.lifetimeLimit_s)

@@ -13,6 +13,7 @@
  */
 import type { CompiledMechanism } from "../mechanism/types";
 import type { OxDefinition } from "./types";
+import { idRecord, ownValue } from "../idRecord";
 
 export const STANDARD_OX: Readonly<Record<string, number>> = { O: 1, "O(1D)": 1, O1D: 1, O3: 1 };
 
@@ -38,9 +39,9 @@ export function oxWeights(
 ): { weights: Float64Array; members: Record<string, number> } {
   const table = definition === "extended" ? EXTENDED_OX : STANDARD_OX;
   const weights = new Float64Array(mech.species.length);
-  const members: Record<string, number> = {};
+  const members = idRecord<number>();
   mech.species.forEach((sp, i) => {
-    const w = table[sp.id];
+    const w = ownValue(table, sp.id);
     if (w) {
       weights[i] = w;
       members[sp.id] = w;

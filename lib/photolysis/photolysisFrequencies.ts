@@ -13,6 +13,7 @@ import { checkPhotolysisInput } from "./checkPhotolysisInput";
 import { SPECTRAL_TABLES, temperatureWeights } from "./spectralTables";
 import type { PhotolysisInput, PhotolysisOptions } from "./types";
 import { WAVELENGTH_GRID } from "./wavelengthGrid";
+import { idRecord, ownValue } from "../idRecord";
 
 const DEFAULTS = {
   /** factor on computed J */
@@ -28,13 +29,14 @@ export function photolysisFrequencies(input: PhotolysisInput, options: Photolysi
   const ids = options.channels ?? photolysisChannels;
   const scale = options.jScale ?? DEFAULTS.jScale;
   const fixed = options.fixed ?? {};
-  const out: Record<string, number> = {};
+  const out = idRecord<number>();
   const sunlit = fillActinicFlux(resolveColumns(input), options, WORK);
   const { flux, o2Absorbed } = WORK;
   const { k, w } = temperatureWeights(input.T_K);
   for (const id of ids) {
-    if (fixed[id] !== undefined) {
-      out[id] = fixed[id];
+    const given = ownValue(fixed, id);
+    if (given !== undefined) {
+      out[id] = given;
       continue;
     }
     if (!sunlit) {

@@ -25,6 +25,7 @@ import { rateConstants } from "./rateConstants";
 import { integrateOde } from "./rosenbrock";
 import { structuralChecks } from "./structuralChecks";
 import type { SolveConditions, SolveStatus, SteadyState, SteadyStateOptions } from "./types";
+import { hasId, idRecord, ownValue } from "../idRecord";
 
 export const STEADY_STATE_DEFAULTS = {
   /** max |(P − L)/(P + L)| at convergence */
@@ -86,7 +87,7 @@ export function solveSteadyState(
   const warnings = [...sys.warnings];
   if (options.initial_cm3) {
     for (const id of Object.keys(options.initial_cm3)) {
-      if (!(id in mech.speciesIndex)) warnings.push(`initial_cm3.${id} ignored: not a species of this mechanism`);
+      if (!hasId(mech.speciesIndex, id)) warnings.push(`initial_cm3.${id} ignored: not a species of this mechanism`);
     }
   }
 
@@ -130,7 +131,7 @@ export function solveSteadyState(
   if (structure.noSource.length > 0) {
     // Solve the rest with the source-less species at 0, and say so.
     const ids = structure.noSource.map((i) => mech.species[sys.unknownSpecies[i]].id);
-    const held_cm3: Record<string, number> = { ...cond.held_cm3 };
+    const held_cm3 = idRecord(cond.held_cm3);
     for (const id of ids) held_cm3[id] = 0;
     const rest = solveSteadyState(
       mech,
@@ -175,7 +176,7 @@ export function solveSteadyState(
   if (options.initialState || options.initial_cm3) {
     const byIndex = options.initialState;
     const byId = options.initial_cm3;
-    const used = applyWarmStart(sys, (s) => byId?.[mech.species[s].id] ?? byIndex?.[s], x);
+    const used = applyWarmStart(sys, (s) => ownValue(byId, mech.species[s].id) ?? byIndex?.[s], x);
     warm = used > 0;
   }
 

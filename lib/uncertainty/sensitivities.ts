@@ -30,6 +30,7 @@ import type { SolveConditions, SteadyState } from "../solver/types";
 import { defineOutputs, type OutputOptions } from "./defineOutputs";
 import { evaluateOutputs } from "./evaluateOutputs";
 import type { OutputDef, SensitivityParameter, SensitivityReport } from "./types";
+import { ownValue } from "../idRecord";
 
 export const SENSITIVITY_DEFAULTS = {
   /** differentiate the cycle outputs: "forward" (one analysis per parameter), "central" (two) or "none"; default "forward" */
@@ -124,7 +125,7 @@ export function sensitivities(
   // dlnx[s] = row of ∂ln x_s/∂ln k_j by reaction (zeros for held species)
   const dlnx: (number[] | null)[] = mech.species.map(() => null);
   solvedIds.forEach((id, o) => {
-    dlnx[mech.speciesIndex[id]] = ss.coefficients[o];
+    dlnx[ownValue(mech.speciesIndex, id) ?? -1] = ss.coefficients[o];
   });
 
   const warnings: string[] = [];
@@ -152,7 +153,7 @@ export function sensitivities(
     const active = r0[j] > 0;
     outputs.forEach((o, i) => {
       if (o.kind === "number-density")
-        byReaction[i][j] = lnY0[i] === null ? null : (dlnx[mech.speciesIndex[o.species ?? ""]]?.[j] ?? 0);
+        byReaction[i][j] = lnY0[i] === null ? null : (dlnx[ownValue(mech.speciesIndex, o.species ?? "") ?? -1]?.[j] ?? 0);
       else if (lnY0[i] === null) byReaction[i][j] = null;
       else if (!active || method === "none") byReaction[i][j] = active ? null : 0;
     });
