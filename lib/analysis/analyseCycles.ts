@@ -8,6 +8,7 @@
  * Definitions: docs/cycle-analysis.md. Units: molecules cm⁻³ s⁻¹.
  */
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import { carrierWeights } from "./carrierFamilies";
@@ -27,7 +28,6 @@ import type {
   ReactionOx,
 } from "./types";
 import { validateState } from "./validateState";
-import { idRecord, ownValue } from "../idRecord";
 
 export const CYCLE_DEFAULTS: Required<CycleOptions> = {
   fminRelative: 1e-4,

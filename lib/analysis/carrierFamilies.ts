@@ -16,8 +16,9 @@
  * Everything else holding the element (HCl, HOCl, ClONO2, HNO3, N2O5, HO2NO2,
  * H2O2, HOBr, BrONO2, HBr, …) is a reservoir or sink.
  */
-import type { CompiledMechanism } from "../mechanism/types";
+
 import { ownValue } from "../idRecord";
+import type { CompiledMechanism } from "../mechanism/types";
 
 export const FAMILY_ORDER = ["ClOx", "BrOx", "NOx", "HOx"] as const;
 

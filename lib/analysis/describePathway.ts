@@ -18,11 +18,12 @@
  *
  * Units: molecules cm⁻³ s⁻¹.
  */
+
+import { hasId, idRecord } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { familiesOfSpecies, familyName } from "./carrierFamilies";
 import { STANDARD_OX } from "./oxWeights";
 import type { CatalyticCycle, Pathway } from "./types";
-import { hasId, idRecord } from "../idRecord";
 
 export interface DescribeContext {
   mech: CompiledMechanism;

@@ -10,6 +10,7 @@
 import { DirectedGraph } from "graphology";
 import { dijkstra } from "graphology-shortest-path";
 import { InputError } from "../errors";
+import { ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import {
@@ -18,7 +19,6 @@ import {
   speciesNode,
   speciesReactionGraph,
 } from "./speciesReactionGraph";
-import { ownValue } from "../idRecord";
 
 export interface FluxPathOptions {
   /** species ids treated as held (not passed through) besides those whose role is "held"; default none */

@@ -24,6 +24,7 @@
  * Units: rates in molecules cm⁻³ s⁻¹, lifetimes in s.
  */
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import { decomposeElementary, eliminationWork, isElementary } from "./elementaryModes";
@@ -32,7 +33,6 @@ import { reactionNet } from "./reactionNet";
 import { axpy, type SparseVector, snap, valueAt, weightedSum } from "./sparseVector";
 import type { Pathway, PathwayOptions, PathwaySet } from "./types";
 import { validateState } from "./validateState";
-import { idRecord, ownValue } from "../idRecord";
 
 export const PATHWAY_DEFAULTS: Required<Omit<PathwayOptions, "track">> = {
   fmin_cm3s: 0,

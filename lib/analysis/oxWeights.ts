@@ -11,9 +11,10 @@
  *   fast null cycles (NO + O3 / NO2 + hv, Cl + O3 / ClO + NO, reservoir
  *   formation and photolysis back to the same radicals) change Ox by 0.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { OxDefinition } from "./types";
-import { idRecord, ownValue } from "../idRecord";
 
 export const STANDARD_OX: Readonly<Record<string, number>> = { O: 1, "O(1D)": 1, O1D: 1, O3: 1 };
 

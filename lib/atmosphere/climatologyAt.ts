@@ -4,9 +4,9 @@
  * tables/climatology.ts. Units: km → mol/mol.
  */
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import { CLIMATOLOGY } from "./tables/climatology";
 import type { ClimatologySpecies, MixingRatioProfile } from "./types";
-import { idRecord, ownValue } from "../idRecord";
 
 /** Species and pools of the climatology, in a fixed order. */
 export const climatologySpecies: readonly ClimatologySpecies[] = Object.keys(CLIMATOLOGY) as ClimatologySpecies[];

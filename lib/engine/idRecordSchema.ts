@@ -18,7 +18,9 @@ export function idRecordSchema<T extends z.ZodType>(value: T) {
       for (const [id, v] of Object.entries(obj)) {
         const r = value.safeParse(v);
         if (r.success) out[id] = r.data;
-        else for (const issue of r.error.issues) ctx.addIssue({ code: "custom", message: issue.message, path: [id, ...issue.path] });
+        else
+          for (const issue of r.error.issues)
+            ctx.addIssue({ code: "custom", message: issue.message, path: [id, ...issue.path] });
       }
       return out;
     });

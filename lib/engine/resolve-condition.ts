@@ -12,11 +12,11 @@
 
 import { airColumnAbove_cm2, DOBSON_UNIT_cm2, O2_FRACTION, standardAtmosphere } from "../atmosphere";
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import type { Amount, CompiledMechanism } from "../mechanism/types";
 import { conditionAt, photolysisFrequencies } from "../photolysis";
 import type { SolveConditions } from "../solver/types";
 import type { ConditionInput, ResolvedCondition } from "./types";
-import { idRecord, ownValue } from "../idRecord";
 
 export const CONDITION_DEFAULTS = {
   latitude_deg: 45,

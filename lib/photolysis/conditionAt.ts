@@ -23,9 +23,9 @@ import {
 } from "../atmosphere";
 import type { ConditionInput, ResolvedCondition } from "../engine/types";
 import { InputError } from "../errors";
+import { idRecord } from "../idRecord";
 import { DEFAULTS as PHOTOLYSIS_DEFAULTS } from "./actinicFlux";
 import { photolysisFrequencies } from "./photolysisFrequencies";
-import { idRecord } from "../idRecord";
 
 export const DEFAULTS = {
   /** degrees north */

@@ -7,13 +7,14 @@
  * Hot path: one module-level work buffer (single-threaded use; the result is
  * a new object every call). Units: s⁻¹.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import { fillActinicFlux, newFluxWork, resolveColumns } from "./actinicFlux";
 import { photolysisChannels } from "./channels";
 import { checkPhotolysisInput } from "./checkPhotolysisInput";
 import { SPECTRAL_TABLES, temperatureWeights } from "./spectralTables";
 import type { PhotolysisInput, PhotolysisOptions } from "./types";
 import { WAVELENGTH_GRID } from "./wavelengthGrid";
-import { idRecord, ownValue } from "../idRecord";
 
 const DEFAULTS = {
   /** factor on computed J */

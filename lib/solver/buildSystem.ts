@@ -7,9 +7,9 @@
  * Units: number densities in molecules cm⁻³.
  */
 import { InputError } from "../errors";
+import { hasId, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SolveConditions } from "./types";
-import { hasId, ownValue } from "../idRecord";
 
 /** One pool total that replaces one balance equation. */
 export interface PoolConstraint {
@@ -115,7 +115,8 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
 
   // A pool with total 0 forces its members to 0: hold them there.
   for (const pool of mech.pools) {
-    if (ownValue(totals, pool.id) === 0) for (const w of pool.weights) if (isUnknown[w.species]) isUnknown[w.species] = 0;
+    if (ownValue(totals, pool.id) === 0)
+      for (const w of pool.weights) if (isUnknown[w.species]) isUnknown[w.species] = 0;
   }
 
   const unknownOf = new Int32Array(ns).fill(-1);

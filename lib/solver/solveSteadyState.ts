@@ -13,6 +13,7 @@
  * Units: molecules cm⁻³, molecules cm⁻³ s⁻¹, s.
  */
 import { InputError } from "../errors";
+import { hasId, idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { assembleSteadyState } from "./assembleSteadyState";
 import { buildSystem, type ChemSystem } from "./buildSystem";
@@ -25,7 +26,6 @@ import { rateConstants } from "./rateConstants";
 import { integrateOde } from "./rosenbrock";
 import { structuralChecks } from "./structuralChecks";
 import type { SolveConditions, SolveStatus, SteadyState, SteadyStateOptions } from "./types";
-import { hasId, idRecord, ownValue } from "../idRecord";
 
 export const STEADY_STATE_DEFAULTS = {
   /** max |(P − L)/(P + L)| at convergence */

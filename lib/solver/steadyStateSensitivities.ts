@@ -10,6 +10,7 @@
  * Units: dimensionless.
  */
 import { InputError } from "../errors";
+import { hasId, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { buildSystem } from "./buildSystem";
 import { luFactor, luSolveTransposed } from "./denseLu";
@@ -17,7 +18,6 @@ import { effectiveConstants, jacobianLog } from "./massAction";
 import { evaluateResidual, NewtonWorkspace } from "./newtonLog";
 import { rateConstants } from "./rateConstants";
 import type { SolveConditions, SteadyState, SteadyStateOptions } from "./types";
-import { hasId, ownValue } from "../idRecord";
 
 export interface SensitivityResult {
   status: "ok" | "not-converged" | "singular";

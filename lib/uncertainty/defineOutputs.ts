@@ -10,10 +10,10 @@
  */
 import type { CycleReport } from "../analysis/types";
 import { InputError } from "../errors";
+import { hasId } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import type { OutputDef } from "./types";
-import { hasId } from "../idRecord";
 
 export const OUTPUT_DEFAULTS = {
   /** a cycle is major when its share of the Ox loss is at least this, 0–1; default 0.01 */

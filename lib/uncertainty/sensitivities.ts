@@ -24,13 +24,13 @@
 import { analyseCycles } from "../analysis";
 import type { CycleOptions, CycleReport } from "../analysis/types";
 import { InputError } from "../errors";
+import { ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { steadyStateSensitivities } from "../solver";
 import type { SolveConditions, SteadyState } from "../solver/types";
 import { defineOutputs, type OutputOptions } from "./defineOutputs";
 import { evaluateOutputs } from "./evaluateOutputs";
 import type { OutputDef, SensitivityParameter, SensitivityReport } from "./types";
-import { ownValue } from "../idRecord";
 
 export const SENSITIVITY_DEFAULTS = {
   /** differentiate the cycle outputs: "forward" (one analysis per parameter), "central" (two) or "none"; default "forward" */
@@ -153,7 +153,8 @@ export function sensitivities(
     const active = r0[j] > 0;
     outputs.forEach((o, i) => {
       if (o.kind === "number-density")
-        byReaction[i][j] = lnY0[i] === null ? null : (dlnx[ownValue(mech.speciesIndex, o.species ?? "") ?? -1]?.[j] ?? 0);
+        byReaction[i][j] =
+          lnY0[i] === null ? null : (dlnx[ownValue(mech.speciesIndex, o.species ?? "") ?? -1]?.[j] ?? 0);
       else if (lnY0[i] === null) byReaction[i][j] = null;
       else if (!active || method === "none") byReaction[i][j] = active ? null : 0;
     });

@@ -11,6 +11,8 @@
  * Positions depend on the mechanism only, never on the numbers, so the
  * picture stays put while the altitude changes. Units: px.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import { CHIP_HEIGHT_PX, chipWidth, frameTitleWidth } from "./chipWidth";
 import { familyLabel } from "./familyLabel";
 import { familyOf, familyRank } from "./familyOf";
@@ -89,7 +91,7 @@ export function networkLayout(
   const slot = new Map<string, [number, number]>();
   let spare = 0;
   for (const f of families) {
-    const s = SLOTS[f] ?? SPARE_SLOTS[spare++] ?? [4 + spare, 1];
+    const s = ownValue(SLOTS, f) ?? SPARE_SLOTS[spare++] ?? [4 + spare, 1];
     slot.set(f, s);
   }
 
@@ -127,7 +129,7 @@ export function networkLayout(
     y += h + o.gap_px * 0.8;
   }
 
-  const species: NetworkLayout["species"] = {};
+  const species: NetworkLayout["species"] = idRecord();
   const frames: FrameLayout[] = [];
   for (const f of families) {
     const [c, r] = slot.get(f)!;
@@ -147,7 +149,7 @@ export function networkLayout(
     });
   }
 
-  const reactions: NetworkLayout["reactions"] = {};
+  const reactions: NetworkLayout["reactions"] = idRecord();
   const occupied: Box[] = drawn.map((s) => ({
     p: species[s.id],
     hw: chipWidth(s.label || s.id) / 2 + o.clearSpecies_px,
