@@ -9,6 +9,7 @@
  * Units: x in molecules cm⁻³, rates in molecules cm⁻³ s⁻¹.
  */
 import type { ChemSystem } from "./buildSystem";
+import type { SparseSystemMatrix } from "./sparseSystemMatrix";
 
 /** kEff_j = k_j × Π over held reactants [X]^coef. */
 export function effectiveConstants(sys: ChemSystem, k: ArrayLike<number>, out: Float64Array): Float64Array {
@@ -88,6 +89,61 @@ export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Ar
       if (d === 0) continue;
       const l = rUnknown[q];
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
+    }
+  }
+}
+
+/** dF/du (u = ln x) into the row-form values of the sparse structure `m` (overwrites vals). */
+export function jacobianLogSparse(
+  sys: ChemSystem,
+  m: SparseSystemMatrix,
+  rates: Float64Array,
+  vals: Float64Array,
+): void {
+  vals.fill(0);
+  const { rStart, rCoef, sStart, sNu } = sys;
+  const { termStart, termPosition } = m;
+  for (let j = 0; j < sys.nReactions; j++) {
+    const r = rates[j];
+    if (r === 0) continue;
+    let t = termStart[j];
+    for (let q = rStart[j]; q < rStart[j + 1]; q++) {
+      const d = rCoef[q] * r;
+      for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[termPosition[t++]] += sNu[s] * d;
+    }
+  }
+}
+
+/** dF/dx at x ≥ 0 into the row-form values of the sparse structure `m` (overwrites vals). */
+export function jacobianLinearSparse(
+  sys: ChemSystem,
+  m: SparseSystemMatrix,
+  kEff: Float64Array,
+  x: Float64Array,
+  vals: Float64Array,
+): void {
+  vals.fill(0);
+  const { rStart, rUnknown, rCoef, sStart, sNu } = sys;
+  const { termStart, termPosition } = m;
+  for (let j = 0; j < sys.nReactions; j++) {
+    const kj = kEff[j];
+    if (kj === 0) continue;
+    const q0 = rStart[j];
+    const q1 = rStart[j + 1];
+    const ns = sStart[j + 1] - sStart[j];
+    for (let q = q0; q < q1; q++) {
+      const c = rCoef[q];
+      const v = x[rUnknown[q]];
+      let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
+      for (let o = q0; o < q1; o++) {
+        if (o === q) continue;
+        const w = x[rUnknown[o]];
+        const co = rCoef[o];
+        d *= co === 1 ? w : co === 2 ? w * w : w ** co;
+      }
+      if (d === 0) continue;
+      const t0 = termStart[j] + (q - q0) * ns;
+      for (let s = 0; s < ns; s++) vals[termPosition[t0 + s]] += sNu[sStart[j] + s] * d;
     }
   }
 }

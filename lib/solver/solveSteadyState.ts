@@ -24,6 +24,7 @@ import { effectiveConstants, reactionRates } from "./massAction";
 import { evaluateResidual, NEWTON_DEFAULTS, type NewtonLogResult, NewtonWorkspace, newtonLog } from "./newtonLog";
 import { rateConstants } from "./rateConstants";
 import { integrateOde } from "./rosenbrock";
+import { sparseSystemMatrix } from "./sparseSystemMatrix";
 import { structuralChecks } from "./structuralChecks";
 import type { SolveConditions, SolveStatus, SteadyState, SteadyStateOptions } from "./types";
 
@@ -82,7 +83,11 @@ export function solveSteadyState(
   const tolerance = options.residualTolerance ?? STEADY_STATE_DEFAULTS.residualTolerance;
   const n = sys.n;
   const kEff = effectiveConstants(sys, k, new Float64Array(sys.nReactions));
-  const ws = new NewtonWorkspace(n, sys.nReactions);
+  const ws = new NewtonWorkspace(
+    n,
+    sys.nReactions,
+    n >= (options.sparseFromUnknowns ?? NEWTON_DEFAULTS.sparseFromUnknowns) ? sparseSystemMatrix(sys) : undefined,
+  );
   const x = new Float64Array(n);
   const warnings = [...sys.warnings];
   if (options.initial_cm3) {
