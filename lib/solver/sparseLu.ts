@@ -189,7 +189,10 @@ export class SparseLu {
     const { colStart: Ap, rowIndex: Ai } = this.pattern;
     this.refactorisations++;
     const scale = maxAbs(values, Ap[n]);
-    if (!(scale > 0) || !Number.isFinite(scale)) return (this.factored = false);
+    if (!(scale > 0) || !Number.isFinite(scale)) {
+      this.factored = false;
+      return false;
+    }
     const tiny = singularTolerance * scale;
     for (let k = 0; k < n; k++) {
       const col = q[k];
@@ -209,7 +212,8 @@ export class SparseLu {
       for (let t = Lp[k] + 1; t < Lp[k + 1]; t++) best = Math.max(best, Math.abs(x[Li[t]]));
       if (!(Math.abs(pivot) > tiny) || Math.abs(pivot) < SPARSE_LU_DEFAULTS.refactorTolerance * best) {
         x.fill(0);
-        return (this.factored = false);
+        this.factored = false;
+        return false;
       }
       Ux[uEnd] = pivot;
       for (let t = Lp[k] + 1; t < Lp[k + 1]; t++) {
