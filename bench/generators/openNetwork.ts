@@ -15,9 +15,12 @@ const HUBS = 20;
 /**
  * A JSON mechanism document of `nSolved` solved species (20 hubs, the rest
  * isomers; at least 60) and `nReactions` reactions (at least 4 per species, so
- * that every isomer is lost by some reaction).
+ * that every isomer is lost by some reaction). With `ozone`, also the Chapman
+ * reactions (O and O3 solved, O2 held) and O + O3 → 2 O2 catalysed by each hub,
+ * so that the cycle analysis has odd oxygen to follow (2 + nSolved solved
+ * species, nReactions + 24 reactions).
  */
-export function openNetwork(nSolved: number, nReactions: number): string {
+export function openNetwork(nSolved: number, nReactions: number, options: { ozone?: boolean } = {}): string {
   const chain = nSolved - HUBS;
   const species: object[] = [
     { id: "M", role: "third-body" },
@@ -56,6 +59,18 @@ export function openNetwork(nSolved: number, nReactions: number): string {
         kinf: 1e-11,
         m: 1,
       });
+  }
+  if (options.ozone) {
+    species.push(
+      { id: "O2", role: "held", mixingRatio: 0.2095 },
+      { id: "O", role: "solved" },
+      { id: "O3", role: "solved" },
+    );
+    add("O2 + hv -> 2 O", { law: "photolysis", channel: "O2" });
+    add("O + O2 + M -> O3 + M", { law: "termolecular", k0: 6.1e-34, n: 2.4, kinf: 1e-10, m: 0 });
+    add("O3 + hv -> O + O2", { law: "photolysis", channel: "O3_O" });
+    add("O + O3 -> 2 O2", { law: "arrhenius", A: 8e-12, "E/R": 2060 });
+    for (let h = 0; h < HUBS; h++) add(`H${h} + O + O3 -> H${h} + 2 O2`, { law: "arrhenius", A: 1e-30, "E/R": 0 });
   }
   return JSON.stringify({ title: "generated open network", version: "1", description: "invented", species, reactions });
 }

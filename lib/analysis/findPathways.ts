@@ -39,6 +39,7 @@ export const PATHWAY_DEFAULTS: Required<Omit<PathwayOptions, "track">> = {
   notBranching: [],
   lifetimeLimit_s: 1e7,
   maxPathways: 50_000,
+  maxJoins: 1_000_000,
 };
 
 /** A branching point whose production and loss differ by less than this fraction is balanced (solver round-off). */
@@ -220,6 +221,8 @@ export function findPathways(
   };
   const storage: PathwaySet["storage"] = [];
   let truncated = false;
+  let joins = 0;
+  let processedCount = 0;
 
   for (const { i: b } of order) {
     const producers: Work[] = [];
@@ -240,6 +243,16 @@ export function findPathways(
         current.delete(w.key);
       }
     }
+    if (joins + producers.length * consumers.length > opt.maxJoins) {
+      // over budget: b and the species after it stay as they are
+      for (const w of producers) current.set(w.key, w);
+      for (const w of consumers) current.set(w.key, w);
+      warnings.push(
+        `the pathway search stopped after ${processedCount} of ${order.length} branching points (${joins} joins made, ${producers.length * consumers.length} more needed at ${mech.species[b].id}, budget ${opt.maxJoins}): the species left are not split further, so pathways through them are reported as chains that make or use them (raise fminRelative to search further)`,
+      );
+      break;
+    }
+    processedCount++;
     processed[b] = 1;
     const dP = deletedPos[b];
     const dD = deletedNeg[b];
@@ -317,6 +330,7 @@ export function findPathways(
       }
     };
     const fdOf = consumers.map((l, il) => l.rate * (dq[il][0] / dq[il][1]));
+    joins += producers.length * consumers.length;
     producers.forEach((k, ik) => {
       const fp = k.rate * (pq[ik][0] / pq[ik][1]);
       const kSums = sums(k);
@@ -469,7 +483,7 @@ export function findPathways(
     }));
   return {
     pathways,
-    branchingPoints: order.map((o) => mech.species[o.i].id),
+    branchingPoints: order.slice(0, processedCount).map((o) => mech.species[o.i].id),
     fmin_cm3s: fmin,
     deleted: { net_cm3s: Array.from(deletedNet), flux_cm3s: Array.from(deletedFlux), tracked: deletedTracked },
     nullCycleRate_cm3s: nullRate,

@@ -2,6 +2,7 @@
  * Mechanism uploads and look-ups: validate, content-address, store.
  * Nothing is stored unless the document loads without error.
  */
+import { engineLimitWarnings } from "../engine/engineLimits";
 import "server-only";
 import { z } from "zod";
 import type { MechanismSource } from "../engine/mechanism-source";
@@ -85,7 +86,14 @@ export async function uploadMechanism(body: string, contentType: string) {
       conservation: s.conservation,
       photolysisChannels: s.photolysisChannels,
     },
-    warnings: loaded.warnings,
+    warnings: [
+      ...loaded.warnings,
+      ...engineLimitWarnings(loaded.mechanism).map((message) => ({
+        severity: "warning" as const,
+        code: "beyond-limit",
+        message,
+      })),
+    ],
   };
 }
 
