@@ -6,6 +6,7 @@
  */
 import { EngineError } from "../errors";
 import type { RateLaw } from "../kinetics/types";
+import { describeBidiControl } from "./bidiControls";
 import type { DiagnosticSink, DocPath } from "./diagnostics";
 import { externalReactions } from "./externalReactions";
 import { elementWeights, searchConservation } from "./findConservationRelations";
@@ -43,6 +44,15 @@ export function compileMechanism(
         [...path, "id"],
         "species-id",
         `"${s.id}" cannot be a species id (no spaces or "+"; "hv" is reserved for light)`,
+      );
+      return;
+    }
+    const bidi = describeBidiControl(s.id);
+    if (bidi) {
+      sink.error(
+        [...path, "id"],
+        "bidi-control",
+        `a species id cannot hold the bidirectional control character ${bidi}: it can make the id look like another one`,
       );
       return;
     }
@@ -86,6 +96,15 @@ export function compileMechanism(
   const pendingReverse: { r: number; path: DocPath; entry: (typeof doc.reactions)[number] }[] = [];
   doc.reactions.forEach((e, k) => {
     const path: DocPath = ["reactions", at.reactions[k]];
+    const bidi = describeBidiControl(e.id);
+    if (bidi) {
+      sink.error(
+        [...path, "id"],
+        "bidi-control",
+        `a reaction id cannot hold the bidirectional control character ${bidi}: it can make the id look like another one`,
+      );
+      return;
+    }
     if (byId.has(e.id)) {
       sink.error(
         [...path, "id"],

@@ -4,8 +4,10 @@
  * collects every problem with its document path, line and column. Throws
  * MechanismError with all errors; returns warnings with the mechanism.
  */
+
 import { LineCounter, parseDocument } from "yaml";
 import { type Diagnostic, MechanismError } from "../errors";
+import { warnBidiControls } from "./bidiControls";
 import { canonicalJson } from "./canonicalJson";
 import { compileMechanism } from "./compileMechanism";
 import { DiagnosticSink } from "./diagnostics";
@@ -136,6 +138,7 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
   }
 
   const sink = new DiagnosticSink();
+  warnBidiControls(data, sink);
   const read = readDocument(data, sink, limits);
   // compile even after shape errors, so that one pass reports every problem
   const mechanism = read ? compileMechanism(read, sink) : undefined;
