@@ -49,8 +49,9 @@ export function warnBidiControls(data: unknown, sink: DiagnosticSink, max = 20):
           `the text holds the bidirectional control character ${what}, which can make it read in another order than it is stored; it is shown isolated, but remove it unless it is meant`,
         );
       }
-    } else if (Array.isArray(v)) v.forEach((x, i) => walk(x, [...path, i]));
-    else if (v && typeof v === "object") for (const [k, x] of Object.entries(v)) walk(x, [...path, k]);
+    } else if (Array.isArray(v)) {
+      for (let i = 0; i < v.length; i++) walk(v[i], [...path, i]);
+    } else if (v && typeof v === "object") for (const [k, x] of Object.entries(v)) walk(x, [...path, k]);
   };
   walk(data, []);
 }

@@ -9,6 +9,7 @@ export * from "./familyOf";
 export * from "./familyStyle";
 export * from "./formatNumber";
 export * from "./graphSvg";
+export * from "./isolateText";
 export * from "./logScale";
 export * from "./networkElements";
 export * from "./networkLayout";

@@ -13,6 +13,7 @@ import { chipWidth, frameTitleWidth } from "./chipWidth";
 import { divergingColor } from "./divergingColor";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
+import { isolateText } from "./isolateText";
 import { logScale } from "./logScale";
 import type { NetworkLayout } from "./networkLayout";
 import { parseEquation } from "./parseEquation";
@@ -70,7 +71,7 @@ export function networkElements(
         id: frameNodeId(f),
         kind: "frame",
         family: f,
-        label: familyLabel(f),
+        label: isolateText(familyLabel(f)),
         minWidth: frameTitleWidth(familyLabel(f)),
         fill: st.frame,
         stroke: st.frameInk,
@@ -88,7 +89,7 @@ export function networkElements(
         id: speciesNodeId(s.id),
         kind: "species",
         speciesId: s.id,
-        label: s.label || s.id,
+        label: isolateText(s.label || s.id),
         family: p.family,
         parent: frameNodeId(p.family),
         role: s.role,
@@ -123,7 +124,7 @@ export function networkElements(
         id: reactionNodeId(r.id),
         kind: "reaction",
         reactionId: r.id,
-        label: r.id,
+        label: isolateText(r.id),
         equation: r.equation,
         rate_cm3s: rate,
         color,
