@@ -21,6 +21,18 @@ import type { CompiledMechanism, CompiledReaction, ConservedPool, Species, Term 
 
 const RESERVED = new Set(["hv", "->"]);
 
+/** Reports an id holding a bidi control character (it could pass for another id); true when it does. */
+function hasBidiControl(sink: DiagnosticSink, path: DocPath, kind: string, id: string): boolean {
+  const bidi = describeBidiControl(id);
+  if (bidi)
+    sink.error(
+      path,
+      "bidi-control",
+      `a ${kind} id cannot hold the bidirectional control character ${bidi}: it can make the id look like another one`,
+    );
+  return bidi !== undefined;
+}
+
 function closest(name: string, ids: Iterable<string>): string | undefined {
   const low = name.toLowerCase();
   for (const id of ids) if (id.toLowerCase() === low) return id;
@@ -47,15 +59,7 @@ export function compileMechanism(
       );
       return;
     }
-    const bidi = describeBidiControl(s.id);
-    if (bidi) {
-      sink.error(
-        [...path, "id"],
-        "bidi-control",
-        `a species id cannot hold the bidirectional control character ${bidi}: it can make the id look like another one`,
-      );
-      return;
-    }
+    if (hasBidiControl(sink, [...path, "id"], "species", s.id)) return;
     if (s.id in speciesIndex) {
       sink.error([...path, "id"], "duplicate-species", `species "${s.id}" is declared twice`);
       return;
@@ -96,15 +100,7 @@ export function compileMechanism(
   const pendingReverse: { r: number; path: DocPath; entry: (typeof doc.reactions)[number] }[] = [];
   doc.reactions.forEach((e, k) => {
     const path: DocPath = ["reactions", at.reactions[k]];
-    const bidi = describeBidiControl(e.id);
-    if (bidi) {
-      sink.error(
-        [...path, "id"],
-        "bidi-control",
-        `a reaction id cannot hold the bidirectional control character ${bidi}: it can make the id look like another one`,
-      );
-      return;
-    }
+    if (hasBidiControl(sink, [...path, "id"], "reaction", e.id)) return;
     if (byId.has(e.id)) {
       sink.error(
         [...path, "id"],

@@ -65,27 +65,33 @@ export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Arra
   }
 }
 
+/** ∂r_j/∂x of reaction j's q-th reactant term (terms q0..q1): k_j times Π x^c differentiated in that factor. */
+function rateDerivative(sys: ChemSystem, kj: number, x: Float64Array, q: number, q0: number, q1: number): number {
+  const { rUnknown, rCoef } = sys;
+  const c = rCoef[q];
+  const v = x[rUnknown[q]];
+  let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
+  for (let o = q0; o < q1; o++) {
+    if (o === q) continue;
+    const w = x[rUnknown[o]];
+    const co = rCoef[o];
+    d *= co === 1 ? w : co === 2 ? w * w : w ** co;
+  }
+  return d;
+}
+
 /** dF/dx, row-major n×n, at unknown amounts x ≥ 0 (exact also where some x are 0). Overwrites J. */
 export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Array, J: Float64Array): void {
   const n = sys.n;
   J.fill(0);
-  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
+  const { rStart, rUnknown, sStart, sUnknown, sNu } = sys;
   for (let j = 0; j < sys.nReactions; j++) {
     const kj = kEff[j];
     if (kj === 0) continue;
     const q0 = rStart[j];
     const q1 = rStart[j + 1];
     for (let q = q0; q < q1; q++) {
-      // derivative of Π x^c with respect to the q-th factor
-      const c = rCoef[q];
-      const v = x[rUnknown[q]];
-      let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
-      for (let o = q0; o < q1; o++) {
-        if (o === q) continue;
-        const w = x[rUnknown[o]];
-        const co = rCoef[o];
-        d *= co === 1 ? w : co === 2 ? w * w : w ** co;
-      }
+      const d = rateDerivative(sys, kj, x, q, q0, q1);
       if (d === 0) continue;
       const l = rUnknown[q];
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
@@ -123,7 +129,7 @@ export function jacobianLinearSparse(
   vals: Float64Array,
 ): void {
   vals.fill(0);
-  const { rStart, rUnknown, rCoef, sStart, sNu } = sys;
+  const { rStart, sStart, sNu } = sys;
   const { termStart, termPosition } = m;
   for (let j = 0; j < sys.nReactions; j++) {
     const kj = kEff[j];
@@ -132,15 +138,7 @@ export function jacobianLinearSparse(
     const q1 = rStart[j + 1];
     const ns = sStart[j + 1] - sStart[j];
     for (let q = q0; q < q1; q++) {
-      const c = rCoef[q];
-      const v = x[rUnknown[q]];
-      let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
-      for (let o = q0; o < q1; o++) {
-        if (o === q) continue;
-        const w = x[rUnknown[o]];
-        const co = rCoef[o];
-        d *= co === 1 ? w : co === 2 ? w * w : w ** co;
-      }
+      const d = rateDerivative(sys, kj, x, q, q0, q1);
       if (d === 0) continue;
       const t0 = termStart[j] + (q - q0) * ns;
       for (let s = 0; s < ns; s++) vals[termPosition[t0 + s]] += sNu[sStart[j] + s] * d;
