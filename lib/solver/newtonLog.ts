@@ -36,7 +36,7 @@ export const NEWTON_DEFAULTS = {
   /** a pseudo-time step that multiplies ‖r‖₂ by more than this is retried with Δτ/4 */
   maxPtcGrowth: 3,
   /** from this many unknowns on, the step's matrix is sparse (SparseLu); below it dense (denseLu), which is faster there */
-  sparseFromUnknowns: 120,
+  sparseFromUnknowns: 30,
   /** bounds of ln x: 1e-250 … 1e30 cm⁻³ */
   uMin: Math.log(1e-250),
   uMax: Math.log(1e30),

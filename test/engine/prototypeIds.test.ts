@@ -7,41 +7,14 @@
  * agree to round-off. The expected values are the engine's own results for
  * the ordinary names, so no outside source applies.
  */
-import fs from "node:fs";
-import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { parseAnalysisRequest } from "@/lib/engine/request-schema";
 import { runAnalysis } from "@/lib/engine/run-analysis";
 import type { AnalysisResult, ConditionInput } from "@/lib/engine/types";
 import { ownValue } from "@/lib/idRecord";
-import { builtinMechanismDir, loadMechanism } from "@/lib/mechanism";
+import { loadMechanism } from "@/lib/mechanism";
+import { RENAMED, referenceYaml, renamedDocument } from "../fixtures/prototypeIds";
 import { expectClose } from "../helpers/close";
-
-/** ordinary id → [id named like an Object member, its atoms] */
-const RENAMED: Record<string, [string, string]> = {
-  HOCl: ["__proto__", "{ H: 1, O: 1, Cl: 1 }"],
-  HOBr: ["constructor", "{ H: 1, O: 1, Br: 1 }"],
-  HBr: ["toString", "{ H: 1, Br: 1 }"],
-  H2O2: ["hasOwnProperty", "{ H: 2, O: 2 }"],
-  CH3OOH: ["valueOf", "{ C: 1, H: 4, O: 2 }"],
-};
-
-const referenceYaml = fs.readFileSync(path.join(builtinMechanismDir(), "reference.yaml"), "utf8");
-
-/** The reference document with species (in their declarations and equations) and the Cly total renamed. */
-function renamedDocument(species: string[], clyId?: string): string {
-  let out = referenceYaml;
-  for (const from of species) {
-    const [to, atoms] = RENAMED[from];
-    const declaration = `{ id: ${from}, role: solved,`;
-    expect(out).toContain(declaration);
-    out = out.replace(declaration, `{ id: "${to}", atoms: ${atoms}, role: solved,`);
-    const word = new RegExp(`(^|[\\s+])${from}(?=$|[\\s+])`, "g");
-    out = out.replace(/equation: "?([^"\n]*)"?$/gm, (_m, eq: string) => `equation: "${eq.replace(word, `$1${to}`)}"`);
-  }
-  if (clyId) out = out.replace("  - id: Cly\n", `  - id: "${clyId}"\n`);
-  return out;
-}
 
 const ordinary = loadMechanism(referenceYaml).mechanism;
 

@@ -47,8 +47,9 @@ describe("the sparse Newton step", () => {
     expectSameState(mech, solveConditionsOf(resolveCondition(mech, { altitude_km: 30, zenith_deg: 30 })));
   });
 
-  it("is chosen by size: from NEWTON_DEFAULTS.sparseFromUnknowns unknowns on", () => {
-    expect(NEWTON_DEFAULTS.sparseFromUnknowns).toBeGreaterThan(60);
+  it("is chosen by size, and solves a generated network of 2,000 solved species", () => {
+    // the dense step stays for the smallest mechanisms, where it was measured faster (DEVELOPERS.md)
+    expect(NEWTON_DEFAULTS.sparseFromUnknowns).toBeGreaterThan(7);
     const mech = loadMechanism(openNetwork(2000, 8000)).mechanism;
     const s = solveSteadyState(mech, solveConditionsOf(resolveCondition(mech, { altitude_km: 30, zenith_deg: 30 })));
     expect(s.status).toBe("converged");
