@@ -4,7 +4,7 @@
  * and lower layers only; a new import circle or an upward import fails the gate.
  */
 const LAYERS = [
-  ["base", "^lib/(errors\\.ts|caution\\.ts|csv/|mechanisms/|random/|store/|jobs/)"],
+  ["base", "^lib/(errors\\.ts|caution\\.ts|idRecord\\.ts|csv/|mechanisms/|random/|store/|jobs/)"],
   ["mechanism", "^lib/(mechanism|kinetics)/"],
   ["atmosphere", "^lib/atmosphere/"],
   ["photolysis", "^lib/photolysis/"],

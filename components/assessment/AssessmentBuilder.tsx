@@ -7,6 +7,7 @@
  */
 import { useId, useState } from "react";
 import type { QuestionKind, Tolerance } from "@/lib/assessment/types";
+import { isolateText } from "@/lib/viz/isolateText";
 import { Field } from "./Field";
 import type { ApiError, MechanismOption, Preview, TemplateOption } from "./types";
 
@@ -270,7 +271,7 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
             >
               {mechanisms.map((m) => (
                 <option key={m.id} value={m.id}>
-                  {m.title}
+                  {isolateText(m.title)}
                 </option>
               ))}
             </select>

@@ -22,7 +22,9 @@ export function StudentSheetView({ sheet, title, mechanismTitle, instructions, v
       data-variant={sheet.variant}
     >
       <header className="flex items-baseline justify-between border-b-2 border-stone-900 pb-2">
-        <h2 className="text-xl font-semibold">{title}</h2>
+        <h2 className="text-xl font-semibold">
+          <bdi>{title}</bdi>
+        </h2>
         <p className="text-[15px] font-semibold">
           Variant {sheet.variant} <span className="font-normal text-stone-600">of {variantCount}</span>
         </p>

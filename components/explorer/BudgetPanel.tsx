@@ -52,7 +52,8 @@ function BudgetChart({ budget }: { budget: OxBudget }) {
                     className={`max-w-[112px] truncate pr-1.5 text-right ${sub ? "font-normal text-stone-600" : "font-semibold text-stone-900"}`}
                     title={b.label}
                   >
-                    {sub ? `└ ${b.label}` : b.label}
+                    {sub ? "└ " : ""}
+                    <bdi>{b.label}</bdi>
                   </th>
                   <td className="w-[92px] p-0 align-middle">
                     <svg width={BAR_W} height={12} aria-hidden className="block">

@@ -10,6 +10,7 @@ import { cycleHighlight } from "@/lib/viz/cycleHighlight";
 import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import { graphSvg } from "@/lib/viz/graphSvg";
+import { isolateText } from "@/lib/viz/isolateText";
 import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
@@ -200,8 +201,8 @@ export function Explorer(props: Props) {
     setView((v) => ({ ...v, cycle: null, select: null }));
     setNotice(
       m.warnings?.length
-        ? `Uploaded “${m.title}” with ${m.warnings.length} warning(s): ${m.warnings.map((w) => w.message).join("; ")}`
-        : `Uploaded “${m.title}”.`,
+        ? `Uploaded “${isolateText(m.title)}” with ${m.warnings.length} warning(s): ${m.warnings.map((w) => w.message).join("; ")}`
+        : `Uploaded “${isolateText(m.title)}”.`,
     );
   };
 

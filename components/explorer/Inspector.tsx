@@ -66,7 +66,9 @@ function SpeciesDetails({ id, mechanism, result, onSelect }: { id: string } & Om
   const b = result ? speciesBudget(id, result.steadyState.reactions) : null;
   return (
     <>
-      <p className="text-[15px] font-semibold text-stone-900">{sp.label}</p>
+      <p className="text-[15px] font-semibold text-stone-900">
+        <bdi>{sp.label}</bdi>
+      </p>
       <p className="text-stone-500">
         {familyLabel(familyOf(sp))} · {sp.role === "held" ? "held at a fixed amount" : "solved for steady state"}
       </p>
@@ -207,7 +209,9 @@ function ReactionDetails({ id, mechanism, result, onSelect }: { id: string } & O
   return (
     <>
       <p className="text-[14px] font-semibold text-stone-900">{rx.equation}</p>
-      <p className="text-stone-500">id {rx.id}</p>
+      <p className="text-stone-500">
+        id <bdi>{rx.id}</bdi>
+      </p>
       <dl className="mt-2">
         <Row label="k at these conditions">{st ? `${formatNumber(st.k)} ${kUnit(rx.equation)}` : "—"}</Row>
         <Row label="rate">{st ? `${formatNumber(st.rate_cm3s)} cm⁻³ s⁻¹` : "—"}</Row>
@@ -228,10 +232,16 @@ function ReactionDetails({ id, mechanism, result, onSelect }: { id: string } & O
         {rx.uncertainty ? (
           <Row label="uncertainty">{`f(298) = ${rx.uncertainty.f298}, g = ${rx.uncertainty.g} K`}</Row>
         ) : null}
-        <Row label="source">{rx.source ?? "not given"}</Row>
+        <Row label="source">
+          <bdi>{rx.source ?? "not given"}</bdi>
+        </Row>
       </dl>
       {rx.rate.law === "photolysis" ? <PhotolysisDetails channel={rx.rate.channel} result={result} /> : null}
-      {rx.note ? <p className="mt-1 text-stone-600">{rx.note}</p> : null}
+      {rx.note ? (
+        <p className="mt-1 text-stone-600">
+          <bdi>{rx.note}</bdi>
+        </p>
+      ) : null}
       <h3 className="mt-2 text-[11px] font-semibold uppercase tracking-wider text-stone-500">Species</h3>
       <p className="flex flex-wrap gap-1">
         {[...eq.reactants, ...eq.products]

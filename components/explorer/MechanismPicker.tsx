@@ -1,6 +1,7 @@
 "use client";
 /** Choose a built-in or uploaded mechanism, or upload a new one. */
 import { useEffect, useRef, useState } from "react";
+import { isolateText } from "@/lib/viz/isolateText";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import type { Problem } from "./api";
 import { UploadBox } from "./UploadBox";
@@ -38,7 +39,7 @@ export function MechanismPicker({ mechanisms, mechanismId, mechanism, onMechanis
           onChange={(e) => onMechanism(e.target.value)}
           className="min-w-0 flex-1 rounded border border-stone-300 bg-white px-1 py-1 text-[13px] focus:outline-2 focus:outline-stone-800"
         >
-          {!known ? <option value={mechanismId}>{mechanism?.title ?? mechanismId}</option> : null}
+          {!known ? <option value={mechanismId}>{isolateText(mechanism?.title ?? mechanismId)}</option> : null}
           <optgroup label="Built-in">
             {builtins.map((m) => (
               <option key={m.id} value={m.id}>
@@ -50,7 +51,7 @@ export function MechanismPicker({ mechanisms, mechanismId, mechanism, onMechanis
             <optgroup label="Uploaded">
               {uploads.map((m) => (
                 <option key={m.id} value={m.id}>
-                  {m.title}
+                  {isolateText(m.title)}
                 </option>
               ))}
             </optgroup>

@@ -169,7 +169,9 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
           className="pointer-events-none absolute z-10 max-w-[280px] -translate-x-1/2 translate-y-3 rounded border border-stone-300 bg-white/95 px-2 py-1 text-[11px] shadow"
           style={{ left: tip.x, top: tip.y }}
         >
-          <div className="font-semibold text-stone-900">{tip.title}</div>
+          <div className="font-semibold text-stone-900">
+            <bdi>{tip.title}</bdi>
+          </div>
           <div className="tabular-nums text-stone-600">{tip.detail}</div>
         </div>
       ) : null}

@@ -7,6 +7,7 @@
 import { useId, useState } from "react";
 import { InputError } from "@/lib/errors";
 import { parseProfileCsv } from "@/lib/profiles/parseProfileCsv";
+import { isolateText } from "@/lib/viz/isolateText";
 import { NumberField } from "../NumberField";
 import type { SideState } from "./sideRequest";
 import type { MechanismOption, ProfileOption } from "./types";
@@ -136,7 +137,7 @@ export function SideFields({
               >
                 {mechanisms.map((m) => (
                   <option key={m.id} value={m.id}>
-                    {m.title}
+                    {isolateText(m.title)}
                   </option>
                 ))}
               </select>

@@ -64,9 +64,12 @@ export function SweepView({
   return (
     <div className="space-y-4">
       <header className="space-y-2">
-        <h1 className="text-2xl font-semibold tracking-tight">Profile sweep: {p.title}</h1>
+        <h1 className="text-2xl font-semibold tracking-tight">
+          Profile sweep: <bdi>{p.title}</bdi>
+        </h1>
         <p className="text-[13px] text-stone-700">
-          {result.mechanism.title} · {result.mode === "diurnal" ? "24-hour mean" : "instantaneous"} · O3 {result.ozone}
+          <bdi>{result.mechanism.title}</bdi> · {result.mode === "diurnal" ? "24-hour mean" : "instantaneous"} · O3{" "}
+          {result.ozone}
           {result.ozone === "solved"
             ? `, overhead column from the solved levels above (${result.timing.passes} passes)`
             : ""}

@@ -41,7 +41,7 @@ export function SensitivityTable({ report, top = 10 }: { report: SensitivityRepo
             <tr key={r.parameter} className="border-t border-stone-100">
               <td className="text-stone-500">{r.rank}</td>
               <td className="truncate" title={r.label}>
-                <span className="font-medium">{r.parameter}</span> <span className="text-stone-500">{r.label}</span>
+                <span className="font-medium">{r.parameter}</span> <bdi className="text-stone-500">{r.label}</bdi>
               </td>
               <td className={`text-right tabular-nums ${r.coefficient < 0 ? "text-blue-800" : "text-orange-800"}`}>
                 {r.coefficient.toFixed(3)}

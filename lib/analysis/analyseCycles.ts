@@ -8,6 +8,7 @@
  * Definitions: docs/cycle-analysis.md. Units: molecules cm⁻³ s⁻¹.
  */
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import { carrierWeights } from "./carrierFamilies";
@@ -80,7 +81,7 @@ export function analyseCycles(
     if (sp.role !== "solved") held[i] = 1;
   });
   for (const id of opt.heldSpecies) {
-    const i = mech.speciesIndex[id];
+    const i = ownValue(mech.speciesIndex, id);
     if (i === undefined) warnings.push(`held species "${id}" is not in mechanism "${mech.title}"; ignored`);
     else held[i] = 1;
   }
@@ -119,7 +120,7 @@ export function analyseCycles(
       if (d < 0) loss -= d;
       else prod += d;
     });
-    const present: Record<string, number> = {};
+    const present = idRecord<number>();
     mech.species.forEach((sp, i) => {
       if (w[i] > 0) present[sp.id] = w[i];
     });
@@ -217,8 +218,8 @@ export function analyseCycles(
   }));
 
   const heldTendencies = opt.heldSpecies
-    .map((id) => mech.speciesIndex[id])
-    .filter((i) => i !== undefined && mech.species[i].role === "solved")
+    .map((id) => ownValue(mech.speciesIndex, id))
+    .filter((i): i is number => i !== undefined && mech.species[i].role === "solved")
     .map((i) => ({
       species: mech.species[i].id,
       tendency_cm3s: nets.reduce((s, net, j) => {

@@ -16,6 +16,8 @@
  * Everything else holding the element (HCl, HOCl, ClONO2, HNO3, N2O5, HO2NO2,
  * H2O2, HOBr, BrONO2, HBr, …) is a reservoir or sink.
  */
+
+import { ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 
 export const FAMILY_ORDER = ["ClOx", "BrOx", "NOx", "HOx"] as const;
@@ -49,7 +51,7 @@ export function carrierWeights(mech: Pick<CompiledMechanism, "species">): Map<st
     let any = false;
     mech.species.forEach((sp, i) => {
       if (sp.role !== "solved") return;
-      const listed = CARRIER_MEMBERS[fam][sp.id];
+      const listed = ownValue(CARRIER_MEMBERS[fam], sp.id);
       const grouped = sp.group === fam ? (sp.atoms[ELEMENT_OF[fam]] ?? 0) : 0;
       const v = listed ?? grouped;
       if (v > 0) {

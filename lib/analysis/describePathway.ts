@@ -20,6 +20,8 @@
  *
  * Units: molecules cm⁻³ s⁻¹.
  */
+
+import { hasId, idRecord } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { familiesOfSpecies, familyName } from "./carrierFamilies";
 import { STANDARD_OX } from "./oxWeights";
@@ -76,7 +78,7 @@ export function describePathway(
   const netOf = new Map(p.net.map((t) => [t.species, t.coef]));
   const passive = (i: number) => {
     const sp = mech.species[i];
-    return held[i] === 1 || sp.role !== "solved" || STANDARD_OX[sp.id] !== undefined || sp.id === "O2";
+    return held[i] === 1 || sp.role !== "solved" || hasId(STANDARD_OX, sp.id) || sp.id === "O2";
   };
   const catalysts: string[] = [];
   const families = new Set<string>();
@@ -144,7 +146,7 @@ export function describePathway(
     chainLengthRateLimiting: chainLength === null ? null : perPass(slowest) / carrierLoss,
     entryStep: mech.reactions[entry.reaction].id,
     chainCarrier,
-    net: Object.fromEntries(p.net.map((t) => [mech.species[t.species].id, t.coef])),
+    net: idRecord(p.net.map((t) => [mech.species[t.species].id, t.coef])),
     catalytic,
   };
 }

@@ -10,6 +10,7 @@
 import { DirectedGraph } from "graphology";
 import { dijkstra } from "graphology-shortest-path";
 import { InputError } from "../errors";
+import { ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import {
@@ -35,7 +36,7 @@ export function dominantFluxPath(
     ["fromId", fromId],
     ["toId", toId],
   ])
-    if (mech.speciesIndex[id] === undefined)
+    if (ownValue(mech.speciesIndex, id) === undefined)
       throw new InputError(name, `unknown species "${id}": not in mechanism "${mech.title}"`);
   if (!state || state.rate_cm3s?.length !== mech.reactions.length)
     throw new InputError("state.rate_cm3s", `give one rate per reaction (${mech.reactions.length})`);

@@ -24,6 +24,7 @@
  * Units: rates in molecules cm⁻³ s⁻¹, lifetimes in s.
  */
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import { decomposeElementary, eliminationWork, isElementary } from "./elementaryModes";
@@ -38,6 +39,7 @@ export const PATHWAY_DEFAULTS: Required<Omit<PathwayOptions, "track">> = {
   notBranching: [],
   lifetimeLimit_s: 1e7,
   maxPathways: 50_000,
+  maxJoins: 1_000_000,
 };
 
 /** A branching point whose production and loss differ by less than this fraction is balanced (solver round-off). */
@@ -78,7 +80,7 @@ export function findPathways(
   if (!(opt.maxPathways >= 1))
     throw new InputError("options.maxPathways", `invalid limit ${opt.maxPathways}: give a count ≥ 1`);
   for (const id of opt.notBranching)
-    if (mech.speciesIndex[id] === undefined)
+    if (ownValue(mech.speciesIndex, id) === undefined)
       throw new InputError("options.notBranching", `unknown species "${id}": not in mechanism "${mech.title}"`);
 
   const nS = mech.species.length;
@@ -90,7 +92,7 @@ export function findPathways(
   const deletedNet = new Float64Array(nS);
   const deletedPos = new Float64Array(nS);
   const deletedNeg = new Float64Array(nS);
-  const deletedTracked: Record<string, { produced_cm3s: number; destroyed_cm3s: number }> = {};
+  const deletedTracked = idRecord<{ produced_cm3s: number; destroyed_cm3s: number }>();
   for (const [name] of tracked) deletedTracked[name] = { produced_cm3s: 0, destroyed_cm3s: 0 };
   const trackedSums = tracked.map(([name]) => deletedTracked[name]);
   let nullRate = 0;
@@ -188,7 +190,7 @@ export function findPathways(
     add(current, { rx: [j], mx: [1], net, rate: r, key: `${j}*1`, elementary: true });
   });
 
-  const excluded = new Set(opt.notBranching.map((id) => mech.speciesIndex[id]));
+  const excluded = new Set(opt.notBranching.map((id) => ownValue(mech.speciesIndex, id)));
   const order = mech.species
     .map((sp, i) => ({ i, tau: D0[i] > 0 ? state.numberDensity_cm3[i] / D0[i] : Number.POSITIVE_INFINITY, sp }))
     .filter((c) => c.sp.role === "solved" && !excluded.has(c.i) && c.tau < opt.lifetimeLimit_s)
@@ -219,6 +221,8 @@ export function findPathways(
   };
   const storage: PathwaySet["storage"] = [];
   let truncated = false;
+  let joins = 0;
+  let processedCount = 0;
 
   for (const { i: b } of order) {
     const producers: Work[] = [];
@@ -239,6 +243,16 @@ export function findPathways(
         current.delete(w.key);
       }
     }
+    if (joins + producers.length * consumers.length > opt.maxJoins) {
+      // over budget: b and the species after it stay as they are
+      for (const w of producers) current.set(w.key, w);
+      for (const w of consumers) current.set(w.key, w);
+      warnings.push(
+        `the pathway search stopped after ${processedCount} of ${order.length} branching points (${joins} joins made, ${producers.length * consumers.length} more needed at ${mech.species[b].id}, budget ${opt.maxJoins}): the species left are not split further, so pathways through them are reported as chains that make or use them (raise fminRelative to search further)`,
+      );
+      break;
+    }
+    processedCount++;
     processed[b] = 1;
     const dP = deletedPos[b];
     const dD = deletedNeg[b];
@@ -316,6 +330,7 @@ export function findPathways(
       }
     };
     const fdOf = consumers.map((l, il) => l.rate * (dq[il][0] / dq[il][1]));
+    joins += producers.length * consumers.length;
     producers.forEach((k, ik) => {
       const fp = k.rate * (pq[ik][0] / pq[ik][1]);
       const kSums = sums(k);
@@ -468,7 +483,7 @@ export function findPathways(
     }));
   return {
     pathways,
-    branchingPoints: order.map((o) => mech.species[o.i].id),
+    branchingPoints: order.slice(0, processedCount).map((o) => mech.species[o.i].id),
     fmin_cm3s: fmin,
     deleted: { net_cm3s: Array.from(deletedNet), flux_cm3s: Array.from(deletedFlux), tracked: deletedTracked },
     nullCycleRate_cm3s: nullRate,

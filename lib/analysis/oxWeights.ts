@@ -11,6 +11,8 @@
  *   fast null cycles (NO + O3 / NO2 + hv, Cl + O3 / ClO + NO, reservoir
  *   formation and photolysis back to the same radicals) change Ox by 0.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { OxDefinition } from "./types";
 
@@ -38,9 +40,9 @@ export function oxWeights(
 ): { weights: Float64Array; members: Record<string, number> } {
   const table = definition === "extended" ? EXTENDED_OX : STANDARD_OX;
   const weights = new Float64Array(mech.species.length);
-  const members: Record<string, number> = {};
+  const members = idRecord<number>();
   mech.species.forEach((sp, i) => {
-    const w = table[sp.id];
+    const w = ownValue(table, sp.id);
     if (w) {
       weights[i] = w;
       members[sp.id] = w;

@@ -169,6 +169,12 @@ export interface PathwayOptions {
   track?: Record<string, ArrayLike<number>>;
   /** at most this many pathways after each branching point; default 50000 */
   maxPathways?: number;
+  /**
+   * work budget: once this many producer–consumer joins are made, no further
+   * branching points are processed (with a warning), so that the search ends
+   * within the job time limit on a large network; default 1e6
+   */
+  maxJoins?: number;
 }
 
 /** Result of `findPathways`. */

@@ -4,6 +4,7 @@
  * tables/climatology.ts. Units: km → mol/mol.
  */
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import { CLIMATOLOGY } from "./tables/climatology";
 import type { ClimatologySpecies, MixingRatioProfile } from "./types";
 
@@ -18,7 +19,7 @@ export const climatologySources: Readonly<Record<ClimatologySpecies, string>> = 
 /** Mixing ratio (mol/mol) of every climatology species and pool at a geometric altitude (km, 0–86). */
 export function climatologyAt(z_km: number): Record<string, number> {
   checkAltitude(z_km);
-  const out: Record<string, number> = {};
+  const out = idRecord<number>();
   for (const id of climatologySpecies) out[id] = interpolateProfile(CLIMATOLOGY[id], z_km);
   return out;
 }
@@ -26,7 +27,7 @@ export function climatologyAt(z_km: number): Record<string, number> {
 /** Mixing ratio (mol/mol) of one climatology species or pool at a geometric altitude (km, 0–86). */
 export function climatologyMixingRatio(species: ClimatologySpecies, z_km: number): number {
   checkAltitude(z_km);
-  const profile = CLIMATOLOGY[species];
+  const profile = ownValue<MixingRatioProfile>(CLIMATOLOGY, species);
   if (!profile) throw new InputError("species", `climatologyMixingRatio: unknown species "${species}"`);
   return interpolateProfile(profile, z_km);
 }

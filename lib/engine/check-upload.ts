@@ -9,6 +9,7 @@ import { z } from "zod";
 import { type Diagnostic, EngineError, MechanismError } from "../errors";
 import { jsonTooDeep, loadMechanism, missingContent, NESTING_DEFAULTS } from "../mechanism";
 import { mechanismContentId } from "../store/ids";
+import { engineLimitWarnings } from "./engineLimits";
 import { parseWith } from "./request-schema";
 
 export interface UploadCheck {
@@ -73,6 +74,9 @@ export function checkUpload(text: string, format?: "yaml" | "json"): UploadCheck
     pools: m.pools.map((p) => ({ id: p.id, label: p.label, expression: p.expression, total: p.total })),
     conservation: m.conservation.map((c) => ({ id: c.id, label: c.label, expression: c.expression })),
     photolysisChannels: m.photolysisChannels,
-    warnings: loaded.warnings,
+    warnings: [
+      ...loaded.warnings,
+      ...engineLimitWarnings(m).map((message) => ({ severity: "warning" as const, code: "beyond-limit", message })),
+    ],
   };
 }

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { InputError } from "../errors";
+import { idRecordSchema } from "./idRecordSchema";
 import type { AnalysisRequest } from "./types";
 
 const finite = z.number().refine(Number.isFinite, "expected a finite number");
@@ -26,14 +27,11 @@ export const conditionSchema = z
       .optional(),
     zenith_deg: finite.refine((v) => v >= 0 && v <= 180, "expected a zenith angle between 0 and 180°").optional(),
     mode: z.enum(["instantaneous", "diurnal"]).optional(),
-    held: z.record(z.string(), mixingRatio).optional(),
-    poolTotals: z.record(z.string(), mixingRatio).optional(),
-    J: z
-      .record(
-        z.string(),
-        finite.refine((v) => v >= 0 && v < 10, "expected a photolysis frequency in s⁻¹ (0–10)"),
-      )
-      .optional(),
+    held: idRecordSchema(mixingRatio).optional(),
+    poolTotals: idRecordSchema(mixingRatio).optional(),
+    J: idRecordSchema(
+      finite.refine((v) => v >= 0 && v < 10, "expected a photolysis frequency in s⁻¹ (0–10)"),
+    ).optional(),
     jScale: finite.refine((v) => v >= 0 && v <= 100, "expected a factor between 0 and 100").optional(),
     ozone: z.enum(["held", "solved"]).optional(),
     o3ColumnAbove_DU: finite

@@ -20,6 +20,7 @@ import {
   standardAtmosphere,
 } from "../atmosphere";
 import { InputError } from "../errors";
+import { idRecord, ownValue } from "../idRecord";
 import type { Amount, CompiledMechanism } from "../mechanism/types";
 import { conditionAt, photolysisFrequencies } from "../photolysis";
 import type { SolveConditions } from "../solver/types";
@@ -41,12 +42,12 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
   checkIds(mech, input);
   const base = conditionAt(input);
   const { M_cm3 } = base;
-  const sources = { ...base.sources };
+  const sources = idRecord(base.sources);
 
-  const held_cm3: Record<string, number> = {};
+  const held_cm3 = idRecord<number>();
   for (const sp of mech.species) {
     if (sp.role !== "held" && !(sp.id === "O3" && base.ozone === "held")) continue;
-    const fromBase = base.held_cm3[sp.id];
+    const fromBase = ownValue(base.held_cm3, sp.id);
     if (fromBase !== undefined) held_cm3[sp.id] = fromBase;
     else if (sp.defaultAmount) {
       held_cm3[sp.id] = amountToNumberDensity(sp.defaultAmount, M_cm3);
@@ -54,9 +55,9 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
     } else throw new InputError(`condition.held.${sp.id}`, `no amount for held species ${sp.id}: give a mixing ratio`);
   }
 
-  const poolTotals_cm3: Record<string, number> = {};
+  const poolTotals_cm3 = idRecord<number>();
   for (const pool of mech.pools) {
-    const fromBase = base.poolTotals_cm3[pool.id];
+    const fromBase = ownValue(base.poolTotals_cm3, pool.id);
     if (fromBase !== undefined) poolTotals_cm3[pool.id] = fromBase;
     else if (pool.total) {
       poolTotals_cm3[pool.id] = amountToNumberDensity(pool.total, M_cm3);
@@ -88,7 +89,7 @@ export function resolveCondition(mech: CompiledMechanism, input: ConditionInput)
     J_s,
     held_cm3,
     poolTotals_cm3,
-    sources: Object.fromEntries(Object.entries(sources).filter(([k]) => keep.has(k))),
+    sources: idRecord(Object.entries(sources).filter(([k]) => keep.has(k))),
   };
 }
 
@@ -156,8 +157,8 @@ export function jAt(
 }
 
 function restrictJ(mech: CompiledMechanism, all: Record<string, number>): Record<string, number> {
-  const J: Record<string, number> = {};
-  for (const ch of mech.photolysisChannels) J[ch] = all[ch] ?? 0;
+  const J = idRecord<number>();
+  for (const ch of mech.photolysisChannels) J[ch] = ownValue(all, ch) ?? 0;
   return J;
 }
 
@@ -165,7 +166,7 @@ function restrictJ(mech: CompiledMechanism, all: Record<string, number>): Record
 function checkIds(mech: CompiledMechanism, input: ConditionInput): void {
   const ozoneHeld = (input.ozone ?? CONDITION_DEFAULTS.ozone) === "held";
   for (const id of Object.keys(input.held ?? {})) {
-    const sp = mech.species[mech.speciesIndex[id] ?? -1];
+    const sp = mech.species[ownValue(mech.speciesIndex, id) ?? -1];
     if (!sp) throw new InputError(`condition.held.${id}`, `unknown species ${id}`);
     if (sp.role !== "held" && !(id === "O3" && ozoneHeld))
       throw new InputError(`condition.held.${id}`, `${id} is solved in this mechanism and cannot be given an amount`);

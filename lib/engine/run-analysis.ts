@@ -10,6 +10,7 @@ import type { CompiledMechanism } from "../mechanism/types";
 import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
 import { analysisUncertainty } from "../uncertainty/analysisUncertainty";
+import { checkEngineLimits } from "./engineLimits";
 import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
 import type { AnalysisOptions, AnalysisRequest, AnalysisResult, DiurnalSummary } from "./types";
 import { ENGINE_VERSION } from "./version";
@@ -90,6 +91,7 @@ export function analyse(
   const t0 = performance.now();
   const options = { ...ANALYSIS_DEFAULTS, ...request.options };
   const condition = resolveCondition(mech, request.condition);
+  checkEngineLimits(mech, condition.mode);
   const initialState =
     run.initialState && run.initialM_cm3 && run.initialM_cm3 > 0
       ? run.initialState.map((v) => v * (condition.M_cm3 / (run.initialM_cm3 as number)))

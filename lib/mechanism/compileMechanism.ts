@@ -6,6 +6,7 @@
  */
 import { EngineError } from "../errors";
 import type { RateLaw } from "../kinetics/types";
+import { describeBidiControl } from "./bidiControls";
 import type { DiagnosticSink, DocPath } from "./diagnostics";
 import { externalReactions } from "./externalReactions";
 import { elementWeights, searchConservation } from "./findConservationRelations";
@@ -20,6 +21,18 @@ import { surfaceEquationProblem } from "./surfaceEquation";
 import type { CompiledMechanism, CompiledReaction, ConservedPool, Species, Term } from "./types";
 
 const RESERVED = new Set(["hv", "->"]);
+
+/** Reports an id holding a bidi control character (it could pass for another id); true when it does. */
+function hasBidiControl(sink: DiagnosticSink, path: DocPath, kind: string, id: string): boolean {
+  const bidi = describeBidiControl(id);
+  if (bidi)
+    sink.error(
+      path,
+      "bidi-control",
+      `a ${kind} id cannot hold the bidirectional control character ${bidi}: it can make the id look like another one`,
+    );
+  return bidi !== undefined;
+}
 
 function closest(name: string, ids: Iterable<string>): string | undefined {
   const low = name.toLowerCase();
@@ -47,6 +60,7 @@ export function compileMechanism(
       );
       return;
     }
+    if (hasBidiControl(sink, [...path, "id"], "species", s.id)) return;
     if (s.id in speciesIndex) {
       sink.error([...path, "id"], "duplicate-species", `species "${s.id}" is declared twice`);
       return;
@@ -87,6 +101,7 @@ export function compileMechanism(
   const pendingReverse: { r: number; path: DocPath; entry: (typeof doc.reactions)[number] }[] = [];
   doc.reactions.forEach((e, k) => {
     const path: DocPath = ["reactions", at.reactions[k]];
+    if (hasBidiControl(sink, [...path, "id"], "reaction", e.id)) return;
     if (byId.has(e.id)) {
       sink.error(
         [...path, "id"],

@@ -6,6 +6,7 @@
  */
 import { LineCounter, parseDocument } from "yaml";
 import { type Diagnostic, jsonParseMessage, MechanismError, printable } from "../errors";
+import { warnBidiControls } from "./bidiControls";
 import { canonicalJson } from "./canonicalJson";
 import { compileMechanism } from "./compileMechanism";
 import { DiagnosticSink } from "./diagnostics";
@@ -154,6 +155,7 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
   }
 
   const sink = new DiagnosticSink();
+  warnBidiControls(data, sink);
   const read = readDocument(data, sink, limits);
   // compile even after shape errors, so that one pass reports every problem
   const mechanism = read ? compileMechanism(read, sink) : undefined;

@@ -23,6 +23,7 @@ import {
 } from "../atmosphere";
 import type { ConditionInput, ResolvedCondition } from "../engine/types";
 import { InputError } from "../errors";
+import { idRecord } from "../idRecord";
 import { DEFAULTS as PHOTOLYSIS_DEFAULTS } from "./actinicFlux";
 import { photolysisFrequencies } from "./photolysisFrequencies";
 
@@ -116,7 +117,7 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
 
   const albedo = input.albedo ?? PHOTOLYSIS_DEFAULTS.albedo;
   const aerosolOpticalDepth = input.aerosolOpticalDepth ?? PHOTOLYSIS_DEFAULTS.aerosolOpticalDepth;
-  const sources: Record<string, string> = {
+  const sources: Record<string, string> = idRecord({
     T_K: input.T_K !== undefined ? "given" : "U.S. Standard Atmosphere 1976",
     p_hPa: input.p_hPa !== undefined ? "given" : "U.S. Standard Atmosphere 1976",
     zenith_deg:
@@ -126,11 +127,11 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
     o3Column: `default climatology O3 × standard atmosphere: ${climatologySources.O3}`,
     J: `photolysisFrequencies (lib/photolysis): direct beam and delta-Eddington two-stream scattered light, ground albedo ${albedo}${aerosolOpticalDepth > 0 ? `, aerosol optical depth ${aerosolOpticalDepth} at 550 nm` : ""}; cross sections and solar spectrum approximate, from memory (lib/photolysis/tables/README.md)`,
     aerosol: input.aerosolSurface_um2cm3 !== undefined ? "given" : BACKGROUND_SULFATE_SOURCE,
-  };
+  });
 
   const clim = climatologyAt(z);
-  const held_cm3: Record<string, number> = {};
-  const poolTotals_cm3: Record<string, number> = {};
+  const held_cm3 = idRecord<number>();
+  const poolTotals_cm3 = idRecord<number>();
   for (const [id, x] of Object.entries(clim)) {
     const target = POOLS.has(id) ? poolTotals_cm3 : held_cm3;
     target[id] = x * M_cm3;

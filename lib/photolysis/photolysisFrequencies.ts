@@ -7,6 +7,8 @@
  * Hot path: one module-level work buffer (single-threaded use; the result is
  * a new object every call). Units: s⁻¹.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import { fillActinicFlux, newFluxWork, resolveColumns } from "./actinicFlux";
 import { photolysisChannels } from "./channels";
 import { checkPhotolysisInput } from "./checkPhotolysisInput";
@@ -28,13 +30,14 @@ export function photolysisFrequencies(input: PhotolysisInput, options: Photolysi
   const ids = options.channels ?? photolysisChannels;
   const scale = options.jScale ?? DEFAULTS.jScale;
   const fixed = options.fixed ?? {};
-  const out: Record<string, number> = {};
+  const out = idRecord<number>();
   const sunlit = fillActinicFlux(resolveColumns(input), options, WORK);
   const { flux, o2Absorbed } = WORK;
   const { k, w } = temperatureWeights(input.T_K);
   for (const id of ids) {
-    if (fixed[id] !== undefined) {
-      out[id] = fixed[id];
+    const given = ownValue(fixed, id);
+    if (given !== undefined) {
+      out[id] = given;
       continue;
     }
     if (!sunlit) {

@@ -8,6 +8,7 @@
  * Rates in molecules cm⁻³ s⁻¹.
  */
 import { InputError } from "../errors";
+import { idRecord } from "../idRecord";
 import { familyRank } from "../viz/familyOf";
 import type {
   ComparisonLevel,
@@ -32,8 +33,8 @@ export interface CompareOptions extends Partial<typeof COMPARE_DEFAULTS> {
 }
 
 function side(l: SweepLevel): ComparisonSideLevel {
-  const oxLoss_cm3s: Record<string, number> = {};
-  const fraction: Record<string, number> = {};
+  const oxLoss_cm3s = idRecord<number>();
+  const fraction = idRecord<number>();
   for (const f of l.budget?.byFamily ?? []) {
     oxLoss_cm3s[f.family] = f.oxLoss_cm3s;
     fraction[f.family] = f.fraction;
@@ -94,8 +95,8 @@ export function compareSweeps(a: SweepResult, b: SweepResult, options: CompareOp
     let difference: ComparisonLevel["difference"] = null;
     if (la.budget && lb.budget) {
       const families = new Set([...Object.keys(sa.oxLoss_cm3s), ...Object.keys(sb.oxLoss_cm3s)]);
-      const dLoss: Record<string, number> = {};
-      const dFrac: Record<string, number> = {};
+      const dLoss = idRecord<number>();
+      const dFrac = idRecord<number>();
       for (const f of families) {
         dLoss[f] = (sb.oxLoss_cm3s[f] ?? 0) - (sa.oxLoss_cm3s[f] ?? 0);
         dFrac[f] = (sb.fraction[f] ?? 0) - (sa.fraction[f] ?? 0);

@@ -5,6 +5,8 @@
  * practice). An amount given at only one of the two levels is left out, so
  * the level falls back to the climatology for it. Null outside the profile.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import type { Profile, ProfileLevel } from "./types";
 
 function logLinear(a: number, b: number, f: number): number {
@@ -17,8 +19,11 @@ function mixRecords(
   f: number,
 ): Record<string, number> | undefined {
   if (!a || !b) return f === 0 ? a : f === 1 ? b : undefined;
-  const out: Record<string, number> = {};
-  for (const id of Object.keys(a)) if (b[id] !== undefined) out[id] = logLinear(a[id], b[id], f);
+  const out = idRecord<number>();
+  for (const id of Object.keys(a)) {
+    const bv = ownValue(b, id);
+    if (bv !== undefined) out[id] = logLinear(a[id], bv, f);
+  }
   return Object.keys(out).length ? out : undefined;
 }
 

@@ -9,6 +9,7 @@
 
 import type { AnalysisRequest } from "../engine/types";
 import { InputError } from "../errors";
+import { idRecord } from "../idRecord";
 import { interpolateProfile } from "./interpolateProfile";
 import { GRID_DEFAULTS, levelGrid } from "./levelGrid";
 import { profileOzoneColumns } from "./ozoneColumns";
@@ -70,12 +71,12 @@ export function planSweep(request: SweepRequest, profile: Profile, mech: Mechani
 
   const tasks = altitudes_km.map((z): LevelTask => {
     const at = useProfile ? interpolateProfile(profile, z) : null;
-    const held: Record<string, number> = {};
+    const held = idRecord<number>();
     for (const [id, x] of Object.entries(at?.held ?? {})) {
       if (heldIds.has(id)) held[id] = x;
       else dropped.set(id, id === "O3" ? "O3 is solved in this sweep" : `the mechanism does not hold ${id}`);
     }
-    const poolTotals: Record<string, number> = {};
+    const poolTotals = idRecord<number>();
     for (const [id, x] of Object.entries(at?.poolTotals ?? {})) {
       if (poolIds.has(id)) poolTotals[id] = x;
       else dropped.set(id, `the mechanism has no pool ${id}`);

@@ -33,6 +33,7 @@ const STATUS_BY_CODE: Record<string, number> = {
   "not-found": 404,
   "unknown-mechanism": 404,
   timeout: 422,
+  "beyond-limit": 422,
   busy: 503,
   cancelled: 409,
   "engine-failure": 500,

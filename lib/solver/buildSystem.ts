@@ -7,6 +7,7 @@
  * Units: number densities in molecules cm⁻³.
  */
 import { InputError } from "../errors";
+import { hasId, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { type DependentRate, dependentRates } from "./dependentRates";
 import type { SolveConditions } from "./types";
@@ -90,7 +91,7 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
 
   for (const [id, v] of Object.entries(held)) {
     checkNumber(`conditions.held_cm3.${id}`, v, false);
-    if (!(id in mech.speciesIndex)) warnings.push(`held_cm3.${id} ignored: not a species of this mechanism`);
+    if (!hasId(mech.speciesIndex, id)) warnings.push(`held_cm3.${id} ignored: not a species of this mechanism`);
   }
   for (const [id, v] of Object.entries(totals)) {
     checkNumber(`conditions.poolTotals_cm3.${id}`, v, false);
@@ -102,7 +103,7 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
     const sp = mech.species[s];
     if (sp.role === "third-body") fixed[s] = M;
     else if (sp.role === "held") {
-      const v = held[sp.id];
+      const v = ownValue(held, sp.id);
       if (v !== undefined) fixed[s] = v;
       else if (sp.defaultAmount)
         fixed[s] = checkNumber(`species.${sp.id}.defaultAmount`, amountOf(sp.defaultAmount, M), false);
@@ -111,13 +112,14 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
           `conditions.held_cm3.${sp.id}`,
           `no number density for held species ${sp.id} and the mechanism gives no default amount`,
         );
-    } else if (held[sp.id] !== undefined) fixed[s] = held[sp.id];
+    } else if (hasId(held, sp.id)) fixed[s] = held[sp.id];
     else isUnknown[s] = 1;
   }
 
   // A pool with total 0 forces its members to 0: hold them there.
   for (const pool of mech.pools) {
-    if (totals[pool.id] === 0) for (const w of pool.weights) if (isUnknown[w.species]) isUnknown[w.species] = 0;
+    if (ownValue(totals, pool.id) === 0)
+      for (const w of pool.weights) if (isUnknown[w.species]) isUnknown[w.species] = 0;
   }
 
   const unknownOf = new Int32Array(ns).fill(-1);
@@ -176,7 +178,7 @@ export function buildSystem(mech: CompiledMechanism, cond: SolveConditions): Che
   const constraints: PoolConstraint[] = [];
   const unconstrainedPools: number[] = [];
   mech.pools.forEach((pool, p) => {
-    const total = totals[pool.id];
+    const total = ownValue(totals, pool.id);
     if (total === undefined) {
       unconstrainedPools.push(p);
       return;

@@ -3,9 +3,9 @@
  * Float64Array, and the matching forward/back substitution.
  *
  * Method: Doolittle elimination with row interchanges (Golub & Van Loan,
- * "Matrix Computations", 4th ed., Algorithm 3.4.1). Chosen over a sparse LU
- * because the mechanisms have at most ~60 solved species: a 60×60 dense
- * factorisation is ~7·10⁴ flops and runs from cache without index indirection.
+ * "Matrix Computations", 4th ed., Algorithm 3.4.1). The Newton step uses it
+ * below NEWTON_DEFAULTS.sparseFromUnknowns, where it beats the sparse LU
+ * (sparseLu.ts); the Rosenbrock integrator and the adjoint solves use it always.
  */
 
 /**

@@ -12,6 +12,7 @@
  */
 import type { ChemSystem } from "./buildSystem";
 import { gatherAmounts, linearDerivative, logDerivative } from "./dependentRates";
+import { entryOf, type SparseSystemMatrix } from "./sparseSystemMatrix";
 
 /** kEff_j = k_j × Π over held reactants [X]^coef. */
 export function effectiveConstants(sys: ChemSystem, k: ArrayLike<number>, out: Float64Array): Float64Array {
@@ -127,6 +128,102 @@ export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Ar
       const a = d.amounts[q];
       const dr = a > 0 ? (mass * d.gamma(d.amounts) * logDerivative(d, q)) / a : mass * linearDerivative(d, q);
       if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * dr;
+    }
+  }
+}
+
+/** ∂r_j/∂x of reaction j's q-th reactant term (terms q0..q1): k_j times Π x^c differentiated in that factor. */
+function rateDerivative(sys: ChemSystem, kj: number, x: Float64Array, q: number, q0: number, q1: number): number {
+  const { rUnknown, rCoef } = sys;
+  const c = rCoef[q];
+  const v = x[rUnknown[q]];
+  let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
+  for (let o = q0; o < q1; o++) {
+    if (o === q) continue;
+    const w = x[rUnknown[o]];
+    const co = rCoef[o];
+    d *= co === 1 ? w : co === 2 ? w * w : w ** co;
+  }
+  return d;
+}
+
+/**
+ * dF/du (u = ln x) into the row-form values of the sparse structure `m` (overwrites vals); the same
+ * terms as `jacobianLog`, amount-dependent reactions included (their entries are in the pattern:
+ * sparseSystemMatrix.ts).
+ */
+export function jacobianLogSparse(
+  sys: ChemSystem,
+  m: SparseSystemMatrix,
+  rates: Float64Array,
+  vals: Float64Array,
+  x?: ArrayLike<number>,
+): void {
+  vals.fill(0);
+  const { rStart, rCoef, sStart, sUnknown, sNu } = sys;
+  const { termStart, termPosition } = m;
+  for (let j = 0; j < sys.nReactions; j++) {
+    const r = rates[j];
+    if (r === 0) continue;
+    let t = termStart[j];
+    for (let q = rStart[j]; q < rStart[j + 1]; q++) {
+      const d = rCoef[q] * r;
+      for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[termPosition[t++]] += sNu[s] * d;
+    }
+  }
+  for (const d of sys.dependent) {
+    const j = d.reaction;
+    const r = rates[j];
+    if (r === 0) continue;
+    if (x) gatherAmounts(d, x, sys.unknownOf, sys.fixed);
+    for (let q = 0; q < d.species.length; q++) {
+      const l = sys.unknownOf[d.species[q]];
+      if (l < 0) continue;
+      const dr = r * logDerivative(d, q);
+      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[entryOf(m, sUnknown[s], l)] += sNu[s] * dr;
+    }
+  }
+}
+
+/** dF/dx at x ≥ 0 into the row-form values of the sparse structure `m` (overwrites vals); the terms of `jacobianLinear`. */
+export function jacobianLinearSparse(
+  sys: ChemSystem,
+  m: SparseSystemMatrix,
+  kEff: Float64Array,
+  x: Float64Array,
+  vals: Float64Array,
+): void {
+  vals.fill(0);
+  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
+  const { termStart, termPosition } = m;
+  const gammaOf = new Map<number, number>();
+  for (const d of sys.dependent) gammaOf.set(d.reaction, d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed)));
+  for (let j = 0; j < sys.nReactions; j++) {
+    const kj = kEff[j] * (gammaOf.get(j) ?? 1);
+    if (kj === 0) continue;
+    const q0 = rStart[j];
+    const q1 = rStart[j + 1];
+    const ns = sStart[j + 1] - sStart[j];
+    for (let q = q0; q < q1; q++) {
+      const d = rateDerivative(sys, kj, x, q, q0, q1);
+      if (d === 0) continue;
+      const t0 = termStart[j] + (q - q0) * ns;
+      for (let s = 0; s < ns; s++) vals[termPosition[t0 + s]] += sNu[sStart[j] + s] * d;
+    }
+  }
+  for (const d of sys.dependent) {
+    const j = d.reaction;
+    let mass = kEff[j];
+    if (mass === 0) continue;
+    for (let q = rStart[j]; q < rStart[j + 1]; q++) mass *= x[rUnknown[q]] ** rCoef[q];
+    if (mass === 0) continue;
+    gatherAmounts(d, x, sys.unknownOf, sys.fixed);
+    for (let q = 0; q < d.species.length; q++) {
+      const l = sys.unknownOf[d.species[q]];
+      if (l < 0) continue;
+      const a = d.amounts[q];
+      const dr = a > 0 ? (mass * d.gamma(d.amounts) * logDerivative(d, q)) / a : mass * linearDerivative(d, q);
+      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[entryOf(m, sUnknown[s], l)] += sNu[s] * dr;
     }
   }
 }

@@ -16,7 +16,9 @@
 import type { ChemSystem } from "./buildSystem";
 import { chooseReplaced } from "./chooseReplaced";
 import { luFactor, luSolve } from "./denseLu";
-import { jacobianLog, productionLoss, reactionRates } from "./massAction";
+import { jacobianLog, jacobianLogSparse, productionLoss, reactionRates } from "./massAction";
+import { SparseLu } from "./sparseLu";
+import { entryOf, type SparseSystemMatrix } from "./sparseSystemMatrix";
 
 export const NEWTON_DEFAULTS = {
   /** max |r_i| for convergence */
@@ -36,6 +38,8 @@ export const NEWTON_DEFAULTS = {
   /** Newton steps accepted with a line-search factor below crawlLambda, crawlSteps in a row, send the iteration back to pseudo-time stepping */
   crawlLambda: 1 / 32,
   crawlSteps: 4,
+  /** from this many unknowns on, the step's matrix is sparse (SparseLu); below it dense (denseLu), which is faster there */
+  sparseFromUnknowns: 30,
   /** bounds of ln x: 1e-250 … 1e30 cm⁻³ */
   uMin: Math.log(1e-250),
   uMax: Math.log(1e30),
@@ -65,7 +69,20 @@ export interface NewtonLogResult {
 /** ln of the factor by which a species falls when the linear step would make it ≤ 0 */
 const OVERSHOOT = Math.log(1e3);
 
-/** Work buffers for one system size; reused across calls of the same solve. */
+/** The sparse form of the step's matrix: structure, values (row form and column form) and LU factors. */
+export interface SparseStep {
+  m: SparseSystemMatrix;
+  lu: SparseLu;
+  /** row-form values */
+  rowValues: Float64Array;
+  /** the same values in the compressed columns the LU takes */
+  colValues: Float64Array;
+}
+
+/**
+ * Work buffers for one system size; reused across calls of the same solve.
+ * With a sparse structure the step's matrix is sparse (no n×n buffer).
+ */
 export class NewtonWorkspace {
   readonly x: Float64Array;
   readonly rates: Float64Array;
@@ -79,7 +96,8 @@ export class NewtonWorkspace {
   readonly du: Float64Array;
   readonly uTrial: Float64Array;
   readonly isConstraintRow: Uint8Array;
-  constructor(n: number, nReactions: number) {
+  readonly sparse: SparseStep | undefined;
+  constructor(n: number, nReactions: number, sparse?: SparseSystemMatrix) {
     this.x = new Float64Array(n);
     this.rates = new Float64Array(nReactions);
     this.P = new Float64Array(n);
@@ -87,7 +105,13 @@ export class NewtonWorkspace {
     this.F = new Float64Array(n);
     this.r = new Float64Array(n);
     this.scale = new Float64Array(n);
-    this.A = new Float64Array(n * n);
+    this.A = new Float64Array(sparse ? 0 : n * n);
+    this.sparse = sparse && {
+      m: sparse,
+      lu: new SparseLu(sparse.pattern, sparse.order),
+      rowValues: new Float64Array(sparse.nnz),
+      colValues: new Float64Array(sparse.nnz),
+    };
     this.pivot = new Int32Array(n);
     this.du = new Float64Array(n);
     this.uTrial = new Float64Array(n);
@@ -136,6 +160,7 @@ function halfSquare(r: Float64Array): number {
  * τ = Infinity gives the Newton step. Returns −1 or the singular unknown index.
  */
 function step(sys: ChemSystem, tau: number, ws: NewtonWorkspace): number {
+  if (ws.sparse) return sparseStep(sys, tau, ws, ws.sparse);
   const n = sys.n;
   const { A, x, scale, r, du, isConstraintRow } = ws;
   jacobianLog(sys, ws.rates, A, x);
@@ -160,6 +185,41 @@ function step(sys: ChemSystem, tau: number, ws: NewtonWorkspace): number {
   const bad = luFactor(A, n, ws.pivot, 1e-22);
   if (bad >= 0) return bad;
   luSolve(A, n, ws.pivot, du);
+  for (let i = 0; i < n; i++) if (!Number.isFinite(du[i])) return i;
+  return -1;
+}
+
+/** `step` on the sparse structure: the same matrix, row scaling and equilibration, factorised by SparseLu. */
+function sparseStep(sys: ChemSystem, tau: number, ws: NewtonWorkspace, sp: SparseStep): number {
+  const n = sys.n;
+  const { x, scale, r, du, isConstraintRow } = ws;
+  const { m, lu, rowValues: v, colValues } = sp;
+  const { rowStart, diagonal, cscPosition } = m;
+  jacobianLogSparse(sys, m, ws.rates, v, x);
+  for (const c of sys.constraints) {
+    const row = c.replaced;
+    v.fill(0, rowStart[row], rowStart[row + 1]);
+    for (let q = 0; q < c.members.length; q++) v[entryOf(m, row, c.members[q])] += c.weights[q] * x[c.members[q]];
+  }
+  const invTau = Number.isFinite(tau) ? 1 / tau : 0;
+  for (let i = 0; i < n; i++) {
+    const s = scale[i];
+    const e0 = rowStart[i];
+    const e1 = rowStart[i + 1];
+    for (let e = e0; e < e1; e++) v[e] = -v[e] * s;
+    if (invTau !== 0 && !isConstraintRow[i]) v[diagonal[i]] += x[i] * invTau * s;
+    let big = 0;
+    for (let e = e0; e < e1; e++) big = Math.max(big, Math.abs(v[e]));
+    const f = big > 0 ? 1 / big : 1;
+    for (let e = e0; e < e1; e++) {
+      v[e] *= f;
+      colValues[cscPosition[e]] = v[e];
+    }
+    du[i] = r[i] * f;
+  }
+  const bad = lu.factorise(colValues, 1e-22);
+  if (bad >= 0) return m.order[bad];
+  lu.solve(du);
   for (let i = 0; i < n; i++) if (!Number.isFinite(du[i])) return i;
   return -1;
 }

@@ -11,7 +11,8 @@
  *   y₁ = y + Σ m_i k_i,   error = Σ e_i k_i,
  * with step-size control h_new = h·min(6, max(0.2, 0.9·err^(−1/3))) on the
  * RMS norm of the error scaled by atol + rtol·|y| (Hairer & Wanner §IV.8).
- * A dense LU of the n×n iteration matrix is used (n ≤ ~60).
+ * A dense LU of the n×n iteration matrix is used: the 24-hour mode, its main
+ * user, is limited to 150 solved species (lib/engine/engineLimits.ts).
  */
 import { luFactor, luSolve, luSolveMatrix } from "./denseLu";
 import type { IntegrateOptions, IntegrationResult } from "./types";

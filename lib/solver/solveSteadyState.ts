@@ -13,6 +13,7 @@
  * Units: molecules cm⁻³, molecules cm⁻³ s⁻¹, s.
  */
 import { InputError } from "../errors";
+import { hasId, idRecord, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { assembleSteadyState } from "./assembleSteadyState";
 import { buildSystem, type ChemSystem } from "./buildSystem";
@@ -23,6 +24,7 @@ import { effectiveConstants, reactionRates } from "./massAction";
 import { evaluateResidual, NEWTON_DEFAULTS, type NewtonLogResult, NewtonWorkspace, newtonLog } from "./newtonLog";
 import { rateConstants } from "./rateConstants";
 import { integrateOde } from "./rosenbrock";
+import { sparseSystemMatrix } from "./sparseSystemMatrix";
 import { structuralChecks } from "./structuralChecks";
 import type { SolveConditions, SolveStatus, SteadyState, SteadyStateOptions } from "./types";
 
@@ -81,12 +83,16 @@ export function solveSteadyState(
   const tolerance = options.residualTolerance ?? STEADY_STATE_DEFAULTS.residualTolerance;
   const n = sys.n;
   const kEff = effectiveConstants(sys, k, new Float64Array(sys.nReactions));
-  const ws = new NewtonWorkspace(n, sys.nReactions);
+  const ws = new NewtonWorkspace(
+    n,
+    sys.nReactions,
+    n >= (options.sparseFromUnknowns ?? NEWTON_DEFAULTS.sparseFromUnknowns) ? sparseSystemMatrix(sys) : undefined,
+  );
   const x = new Float64Array(n);
   const warnings = [...sys.warnings];
   if (options.initial_cm3) {
     for (const id of Object.keys(options.initial_cm3)) {
-      if (!(id in mech.speciesIndex)) warnings.push(`initial_cm3.${id} ignored: not a species of this mechanism`);
+      if (!hasId(mech.speciesIndex, id)) warnings.push(`initial_cm3.${id} ignored: not a species of this mechanism`);
     }
   }
 
@@ -130,7 +136,7 @@ export function solveSteadyState(
   if (structure.noSource.length > 0) {
     // Solve the rest with the source-less species at 0, and say so.
     const ids = structure.noSource.map((i) => mech.species[sys.unknownSpecies[i]].id);
-    const held_cm3: Record<string, number> = { ...cond.held_cm3 };
+    const held_cm3 = idRecord(cond.held_cm3);
     for (const id of ids) held_cm3[id] = 0;
     const rest = solveSteadyState(
       mech,
@@ -175,7 +181,7 @@ export function solveSteadyState(
   if (options.initialState || options.initial_cm3) {
     const byIndex = options.initialState;
     const byId = options.initial_cm3;
-    const used = applyWarmStart(sys, (s) => byId?.[mech.species[s].id] ?? byIndex?.[s], x);
+    const used = applyWarmStart(sys, (s) => ownValue(byId, mech.species[s].id) ?? byIndex?.[s], x);
     warm = used > 0;
   }
 

@@ -10,6 +10,7 @@
  * Units: dimensionless.
  */
 import { InputError } from "../errors";
+import { hasId, ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { buildSystem } from "./buildSystem";
 import { luFactor, luSolveTransposed } from "./denseLu";
@@ -37,7 +38,7 @@ export function steadyStateSensitivities(
   options: Pick<SteadyStateOptions, "rateConstants" | "rateMultipliers"> = {},
 ): SensitivityResult {
   for (const id of outputs)
-    if (!(id in mech.speciesIndex)) throw new InputError(`outputs.${id}`, `unknown species ${id}`);
+    if (!hasId(mech.speciesIndex, id)) throw new InputError(`outputs.${id}`, `unknown species ${id}`);
   if (!state || state.numberDensity_cm3?.length !== mech.species.length) {
     throw new InputError("state", `must be a SteadyState of this mechanism (${mech.species.length} species)`);
   }
@@ -56,7 +57,7 @@ export function steadyStateSensitivities(
   const n = sys.n;
   for (const c of sys.constraints) {
     const p = state.pools.find((q) => q.pool === c.poolId);
-    const s = p ? mech.speciesIndex[p.replacedEquation] : undefined;
+    const s = p ? ownValue(mech.speciesIndex, p.replacedEquation) : undefined;
     c.replaced = s !== undefined ? sys.unknownOf[s] : -1;
     if (c.replaced < 0) throw new InputError("state.pools", `no replaced equation for pool ${c.poolId} in the state`);
   }
@@ -96,7 +97,7 @@ export function steadyStateSensitivities(
   const coefficients = zero();
   const lambda = new Float64Array(n);
   outputs.forEach((id, o) => {
-    const i = sys.unknownOf[mech.speciesIndex[id]];
+    const i = sys.unknownOf[ownValue(mech.speciesIndex, id) ?? -1] ?? -1;
     if (i < 0) return; // held: insensitive
     lambda.fill(0);
     lambda[i] = 1;

@@ -115,6 +115,8 @@ export interface SteadyStateOptions {
   rateConstants?: ArrayLike<number>;
   /** factors on the rate constants by reaction index (sensitivity studies); default all 1 */
   rateMultipliers?: ArrayLike<number>;
+  /** from this many unknowns on, the Newton step uses the sparse LU (below it the dense one); default 30 */
+  sparseFromUnknowns?: number;
 }
 
 /** Options of the Rosenbrock integrator. */

@@ -10,6 +10,7 @@
  */
 import type { CycleReport } from "../analysis/types";
 import { InputError } from "../errors";
+import { hasId } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { SteadyState } from "../solver/types";
 import type { OutputDef } from "./types";
@@ -83,7 +84,7 @@ export function defineOutputs(
       .filter((sp) => sp.group !== undefined && OUTPUT_DEFAULTS.radicalGroups.includes(sp.group))
       .map((sp) => sp.id);
   for (const id of ids) {
-    if (!(id in mech.speciesIndex))
+    if (!hasId(mech.speciesIndex, id))
       throw new InputError("options.species", `unknown species ${id} in mechanism "${mech.title}"`);
     if (!solved.has(id)) continue; // a held species (O3 by default) is an input, not an output
     out.push({ key: `density:${id}`, kind: "number-density", label: `[${id}]`, unit: "cm⁻³", species: id });

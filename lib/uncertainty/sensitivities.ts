@@ -24,6 +24,7 @@
 import { analyseCycles } from "../analysis";
 import type { CycleOptions, CycleReport } from "../analysis/types";
 import { InputError } from "../errors";
+import { ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 import { steadyStateSensitivities } from "../solver";
 import type { SolveConditions, SteadyState } from "../solver/types";
@@ -124,7 +125,7 @@ export function sensitivities(
   // dlnx[s] = row of ∂ln x_s/∂ln k_j by reaction (zeros for held species)
   const dlnx: (number[] | null)[] = mech.species.map(() => null);
   solvedIds.forEach((id, o) => {
-    dlnx[mech.speciesIndex[id]] = ss.coefficients[o];
+    dlnx[ownValue(mech.speciesIndex, id) ?? -1] = ss.coefficients[o];
   });
 
   const warnings: string[] = [];
@@ -155,7 +156,8 @@ export function sensitivities(
     const active = r0[j] > 0;
     outputs.forEach((o, i) => {
       if (o.kind === "number-density")
-        byReaction[i][j] = lnY0[i] === null ? null : (dlnx[mech.speciesIndex[o.species ?? ""]]?.[j] ?? 0);
+        byReaction[i][j] =
+          lnY0[i] === null ? null : (dlnx[ownValue(mech.speciesIndex, o.species ?? "") ?? -1]?.[j] ?? 0);
       else if (lnY0[i] === null) byReaction[i][j] = null;
       else if (!active || method === "none") byReaction[i][j] = active ? null : 0;
     });

@@ -1,3 +1,5 @@
+import { ownValue } from "../idRecord";
+
 /** Printed names of the family frames. */
 const LABELS: Record<string, string> = {
   Ox: "Ox · odd oxygen",
@@ -14,4 +16,4 @@ const LABELS: Record<string, string> = {
   other: "Other species",
 };
 
-export const familyLabel = (family: string): string => LABELS[family] ?? family;
+export const familyLabel = (family: string): string => ownValue(LABELS, family) ?? family;

@@ -5,6 +5,8 @@
  * two of H, N, Cl, Br are reservoirs). Common practice in stratospheric
  * chemistry texts; the exact rule is this project's.
  */
+
+import { ownValue } from "../idRecord";
 import type { MechanismSpeciesView } from "./types";
 
 /** Families in display order; unknown groups follow, sorted by name. */
@@ -45,7 +47,7 @@ const ALIASES: Record<string, string> = {
 };
 
 export function familyOf(sp: Pick<MechanismSpeciesView, "role" | "group" | "atoms">): string {
-  if (sp.group) return ALIASES[sp.group.toLowerCase()] ?? sp.group;
+  if (sp.group) return ownValue(ALIASES, sp.group.toLowerCase()) ?? sp.group;
   if (sp.role !== "solved") return "held";
   const a = sp.atoms;
   const has = (el: string) => (a[el] ?? 0) > 0;

@@ -4,6 +4,8 @@
  * secondary cue, so the tints are soft and share one lightness (OKLCh,
  * Ottosson 2020), with hues spaced around the circle.
  */
+
+import { ownValue } from "../idRecord";
 import { oklchToHex } from "./colorSpace";
 
 export interface FamilyStyle {
@@ -29,7 +31,7 @@ const HUES: Record<string, number> = {
 };
 
 export function familyStyle(family: string): FamilyStyle {
-  const h = HUES[family];
+  const h = ownValue(HUES, family);
   if (h === undefined) {
     return { frame: "#f4f4f2", frameInk: "#6b6b66", chip: "#ececea", chipStroke: "#9a9a94" };
   }

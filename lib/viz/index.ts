@@ -12,6 +12,7 @@ export * from "./familyOf";
 export * from "./familyStyle";
 export * from "./formatNumber";
 export * from "./graphSvg";
+export * from "./isolateText";
 export * from "./labelBox";
 export * from "./logScale";
 export * from "./networkElements";

@@ -16,6 +16,7 @@ import { chipWidth, frameTitleWidth } from "./chipWidth";
 import { divergingColor } from "./divergingColor";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
+import { isolateText } from "./isolateText";
 import { stubWidth } from "./labelBox";
 import { logScale } from "./logScale";
 import { type NetworkLayout, netCoefficients } from "./networkLayout";
@@ -92,7 +93,7 @@ export function networkElements(
         id: frameNodeId(f),
         kind: "frame",
         family: f,
-        label: familyLabel(f),
+        label: isolateText(familyLabel(f)),
         minWidth: frameTitleWidth(familyLabel(f)),
         fill: st.frame,
         stroke: st.frameInk,
@@ -122,7 +123,7 @@ export function networkElements(
         id: speciesNodeId(s.id),
         kind: "species",
         speciesId: s.id,
-        label: s.label || s.id,
+        label: isolateText(s.label || s.id),
         family: p.family,
         parent: frameNodeId(p.family),
         role: s.role,
@@ -157,7 +158,7 @@ export function networkElements(
         id: reactionNodeId(r.id),
         kind: "reaction",
         reactionId: r.id,
-        label: r.id,
+        label: isolateText(r.id),
         equation: r.equation,
         rate_cm3s: rate,
         color,

@@ -16,6 +16,8 @@
  * detail changes. Every label box is returned, so that tests can check that
  * no two overlap. Units: px.
  */
+
+import { idRecord, ownValue } from "../idRecord";
 import { CHIP_HEIGHT_PX, chipWidth, frameTitleWidth } from "./chipWidth";
 import { familyLabel } from "./familyLabel";
 import { familyOf, familyRank } from "./familyOf";
@@ -125,7 +127,7 @@ export function networkLayout(
   const slot = new Map<string, [number, number]>();
   let spare = 0;
   for (const f of families) {
-    const s = SLOTS[f] ?? SPARE_SLOTS[spare++] ?? [4 + spare, 1];
+    const s = ownValue(SLOTS, f) ?? SPARE_SLOTS[spare++] ?? [4 + spare, 1];
     slot.set(f, s);
   }
 
@@ -166,7 +168,7 @@ export function networkLayout(
     y += h + o.gap_px * 0.8;
   }
 
-  const species: NetworkLayout["species"] = {};
+  const species: NetworkLayout["species"] = idRecord();
   const frames: FrameLayout[] = [];
   const labels: LabelBox[] = [];
   for (const f of families) {
@@ -204,8 +206,8 @@ export function networkLayout(
 
   const occupied = new RectIndex();
   for (const b of labels) occupied.add(b.kind === "species" ? grown(b, o.clearSpecies_px) : grown(b, 2));
-  const reactions: NetworkLayout["reactions"] = {};
-  const stubs: NetworkLayout["stubs"] = {};
+  const reactions: NetworkLayout["reactions"] = idRecord();
+  const stubs: NetworkLayout["stubs"] = idRecord();
   const solved = new Set(drawn.filter((s) => s.role === "solved").map((s) => s.id));
   const stubOrder = mech.species.filter((s) => stubbed.has(s.id)).map((s) => s.id);
   let lane = 0;

@@ -33,9 +33,11 @@ export default async function InstructorPage({ params }: { params: Promise<{ id:
         <p className="text-[12px] font-semibold uppercase tracking-wider text-red-800">
           Instructor copy — contains the answer key
         </p>
-        <h1 className="text-2xl font-semibold tracking-tight">{a.title}</h1>
+        <h1 className="text-2xl font-semibold tracking-tight">
+          <bdi>{a.title}</bdi>
+        </h1>
         <p className="text-[13px] text-stone-700">
-          {a.mechanism.title} · {a.variants.length} variants × {a.questions.length} questions · seed{" "}
+          <bdi>{a.mechanism.title}</bdi> · {a.variants.length} variants × {a.questions.length} questions · seed{" "}
           <span className="font-mono">{a.spec.seed}</span> · engine {a.engineVersion} · built{" "}
           {a.createdAt.slice(0, 16).replace("T", " ")} UTC
         </p>

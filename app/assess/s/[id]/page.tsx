@@ -30,10 +30,12 @@ export default async function StudentSheetsPage({
   return (
     <div className="px-4 py-6 print:p-0">
       <div className="no-print mx-auto mb-6 max-w-3xl space-y-3">
-        <h1 className="text-2xl font-semibold tracking-tight">{a.title}</h1>
+        <h1 className="text-2xl font-semibold tracking-tight">
+          <bdi>{a.title}</bdi>
+        </h1>
         <p className="text-[14px] text-stone-700">
-          {a.sheets.length} variants on {a.mechanism.title}. Print for paper copies, or choose “Save as PDF” in the
-          print dialogue; each variant starts on a new page.
+          {a.sheets.length} variants on <bdi>{a.mechanism.title}</bdi>. Print for paper copies, or choose “Save as PDF”
+          in the print dialogue; each variant starts on a new page.
         </p>
         <div className="flex flex-wrap items-center gap-3">
           <PrintButton label={sheets.length === 1 ? "Print this sheet" : `Print ${sheets.length} sheets`} />
