@@ -107,13 +107,19 @@ export function prototypeKeyPath(value: unknown, path: (string | number)[] = [])
     }
     return null;
   }
-  if (Object.hasOwn(value, "__proto__")) return [...path, "__proto__"];
+  // the keys of an id-keyed map are the mechanism's ids, which may be "__proto__" (idRecordSchema keeps
+  // them; an id the mechanism does not have is refused against the mechanism, like any unknown id)
+  const idKeyed = ID_KEYED_MAPS.has(String(path[path.length - 1])) && path[path.length - 2] === "condition";
+  if (!idKeyed && Object.hasOwn(value, "__proto__")) return [...path, "__proto__"];
   for (const [k, v] of Object.entries(value)) {
     const found = prototypeKeyPath(v, [...path, k]);
     if (found) return found;
   }
   return null;
 }
+
+/** Condition maps keyed by species, pool or channel ids (conditionSchema: held, poolTotals, J). */
+const ID_KEYED_MAPS = new Set(["held", "poolTotals", "J"]);
 
 const formatPath = (path: PropertyKey[]) =>
   path

@@ -38,9 +38,15 @@ test("the explorer, its network, charts and exports work under the CSP with no v
   await expect(page.getByTestId("network")).toHaveAttribute("data-ready", "true", { timeout: 30_000 });
   await expect(page.getByTestId("status")).toContainText("converged", { timeout: 60_000 });
   await expect(page.getByTestId("cycle").first()).toBeVisible();
-  const [png] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "PNG" }).click()]);
+  const [png] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByTestId("export").getByRole("button", { name: "PNG" }).click(),
+  ]);
   expect(png.suggestedFilename()).toMatch(/\.png$/);
-  const [svg] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "SVG" }).click()]);
+  const [svg] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByTestId("export").getByRole("button", { name: "SVG" }).click(),
+  ]);
   expect(svg.suggestedFilename()).toMatch(/\.svg$/);
   await page.screenshot({ path: "test-results/screenshots/csp-explorer.png" });
   expect(await violations(page, console)).toEqual([]);

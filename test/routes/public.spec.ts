@@ -262,16 +262,23 @@ test.describe("refusals of hostile and over-limit documents", () => {
   });
 
   for (const map of ["held", "poolTotals", "J"]) {
+    // The keys of these maps are the mechanism's ids (a mechanism may name a species or pool
+    // "__proto__": test/engine/prototypeIds.test.ts), so the key is refused against the mechanism,
+    // exactly like an id it does not have.
     test(`the key __proto__ in condition.${map} is a 400 like every unknown key`, async ({ baseURL }) => {
-      const body = `{"mechanismId":"reference","condition":{"altitude_km":30,"${map}":{"__proto__":0.001}}}`;
-      const r = await fetch(`${baseURL}/api/analyses`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body,
-      });
-      expect(r.status).toBe(400);
-      const { error } = await r.json();
-      expect(error).toMatchObject({ code: "invalid-request", path: `condition.${map}.__proto__` });
+      const post = async (key: string) => {
+        const r = await fetch(`${baseURL}/api/analyses`, {
+          method: "POST",
+          headers: { "content-type": "application/json" },
+          body: `{"mechanismId":"reference","condition":{"altitude_km":30,"${map}":{"${key}":0.001}}}`,
+        });
+        return { status: r.status, error: (await r.json()).error };
+      };
+      const proto = await post("__proto__");
+      const other = await post("NotAnId");
+      expect(proto.status).toBe(400);
+      expect(proto.error).toMatchObject({ code: other.error.code, path: `condition.${map}.__proto__` });
+      expect(proto.error.message).toBe(other.error.message.replaceAll("NotAnId", "__proto__"));
     });
   }
 
