@@ -125,7 +125,7 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
           })) ?? []) as { id: string; color: string; width: number; classes: string[] }[],
         rendered: (id: string) => {
           const n = cyRef.current?.getElementById(id);
-          return n && n.nonempty() ? { ...n.renderedPosition() } : null;
+          return n?.nonempty() ? { ...n.renderedPosition() } : null;
         },
         nodes: () =>
           cyRef.current
