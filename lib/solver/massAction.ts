@@ -72,18 +72,9 @@ export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Arra
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
     }
   }
-  for (const d of sys.dependent) {
-    const j = d.reaction;
-    const r = rates[j];
-    if (r === 0) continue;
-    if (x) gatherAmounts(d, x, sys.unknownOf, sys.fixed);
-    for (let q = 0; q < d.species.length; q++) {
-      const l = sys.unknownOf[d.species[q]];
-      if (l < 0) continue;
-      const dr = r * logDerivative(d, q);
-      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * dr;
-    }
-  }
+  dependentLogTerms(sys, rates, x, (row, col, v) => {
+    J[row * n + col] += v;
+  });
 }
 
 /** dF/dx, row-major n×n, at unknown amounts x ≥ 0 (exact also where some x are 0). Overwrites J. */
@@ -114,22 +105,9 @@ export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Ar
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
     }
   }
-  for (const d of sys.dependent) {
-    const j = d.reaction;
-    let mass = kEff[j];
-    if (mass === 0) continue;
-    for (let q = rStart[j]; q < rStart[j + 1]; q++) mass *= x[rUnknown[q]] ** rCoef[q];
-    if (mass === 0) continue;
-    gatherAmounts(d, x, sys.unknownOf, sys.fixed);
-    for (let q = 0; q < d.species.length; q++) {
-      const l = sys.unknownOf[d.species[q]];
-      if (l < 0) continue;
-      // the same difference as the log form where a > 0, so that both forms agree to rounding
-      const a = d.amounts[q];
-      const dr = a > 0 ? (mass * d.gamma(d.amounts) * logDerivative(d, q)) / a : mass * linearDerivative(d, q);
-      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * dr;
-    }
-  }
+  dependentLinearTerms(sys, kEff, x, (row, col, v) => {
+    J[row * n + col] += v;
+  });
 }
 
 /** ∂r_j/∂x of reaction j's q-th reactant term (terms q0..q1): k_j times Π x^c differentiated in that factor. */
@@ -160,7 +138,7 @@ export function jacobianLogSparse(
   x?: ArrayLike<number>,
 ): void {
   vals.fill(0);
-  const { rStart, rCoef, sStart, sUnknown, sNu } = sys;
+  const { rStart, rCoef, sStart, sNu } = sys;
   const { termStart, termPosition } = m;
   for (let j = 0; j < sys.nReactions; j++) {
     const r = rates[j];
@@ -171,18 +149,9 @@ export function jacobianLogSparse(
       for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[termPosition[t++]] += sNu[s] * d;
     }
   }
-  for (const d of sys.dependent) {
-    const j = d.reaction;
-    const r = rates[j];
-    if (r === 0) continue;
-    if (x) gatherAmounts(d, x, sys.unknownOf, sys.fixed);
-    for (let q = 0; q < d.species.length; q++) {
-      const l = sys.unknownOf[d.species[q]];
-      if (l < 0) continue;
-      const dr = r * logDerivative(d, q);
-      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[entryOf(m, sUnknown[s], l)] += sNu[s] * dr;
-    }
-  }
+  dependentLogTerms(sys, rates, x, (row, col, v) => {
+    vals[entryOf(m, row, col)] += v;
+  });
 }
 
 /** dF/dx at x ≥ 0 into the row-form values of the sparse structure `m` (overwrites vals); the terms of `jacobianLinear`. */
@@ -194,7 +163,7 @@ export function jacobianLinearSparse(
   vals: Float64Array,
 ): void {
   vals.fill(0);
-  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
+  const { rStart, sStart, sNu } = sys;
   const { termStart, termPosition } = m;
   const gammaOf = new Map<number, number>();
   for (const d of sys.dependent) gammaOf.set(d.reaction, d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed)));
@@ -211,6 +180,36 @@ export function jacobianLinearSparse(
       for (let s = 0; s < ns; s++) vals[termPosition[t0 + s]] += sNu[sStart[j] + s] * d;
     }
   }
+  dependentLinearTerms(sys, kEff, x, (row, col, v) => {
+    vals[entryOf(m, row, col)] += v;
+  });
+}
+
+type AddTerm = (row: number, col: number, value: number) => void;
+
+/**
+ * The ∂F/∂u terms of the amount-dependent reactions: r_j ∂ln γ/∂ln a for every amount γ reads, at x
+ * when given, else at the amounts of the `reactionRates` call that gave `rates`.
+ */
+function dependentLogTerms(sys: ChemSystem, rates: Float64Array, x: ArrayLike<number> | undefined, add: AddTerm) {
+  const { sStart, sUnknown, sNu } = sys;
+  for (const d of sys.dependent) {
+    const j = d.reaction;
+    const r = rates[j];
+    if (r === 0) continue;
+    if (x) gatherAmounts(d, x, sys.unknownOf, sys.fixed);
+    for (let q = 0; q < d.species.length; q++) {
+      const l = sys.unknownOf[d.species[q]];
+      if (l < 0) continue;
+      const dr = r * logDerivative(d, q);
+      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) add(sUnknown[s], l, sNu[s] * dr);
+    }
+  }
+}
+
+/** The ∂F/∂x terms of the amount-dependent reactions (mass-action part × ∂γ/∂a), at x. */
+function dependentLinearTerms(sys: ChemSystem, kEff: Float64Array, x: Float64Array, add: AddTerm) {
+  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
   for (const d of sys.dependent) {
     const j = d.reaction;
     let mass = kEff[j];
@@ -221,9 +220,10 @@ export function jacobianLinearSparse(
     for (let q = 0; q < d.species.length; q++) {
       const l = sys.unknownOf[d.species[q]];
       if (l < 0) continue;
+      // the same difference as the log form where a > 0, so that both forms agree to rounding
       const a = d.amounts[q];
       const dr = a > 0 ? (mass * d.gamma(d.amounts) * logDerivative(d, q)) / a : mass * linearDerivative(d, q);
-      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) vals[entryOf(m, sUnknown[s], l)] += sNu[s] * dr;
+      if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) add(sUnknown[s], l, sNu[s] * dr);
     }
   }
 }
