@@ -81,25 +81,15 @@ export function jacobianLog(sys: ChemSystem, rates: Float64Array, J: Float64Arra
 export function jacobianLinear(sys: ChemSystem, kEff: Float64Array, x: Float64Array, J: Float64Array): void {
   const n = sys.n;
   J.fill(0);
-  const { rStart, rUnknown, rCoef, sStart, sUnknown, sNu } = sys;
-  const gammaOf = new Map<number, number>();
-  for (const d of sys.dependent) gammaOf.set(d.reaction, d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed)));
+  const { rStart, rUnknown, sStart, sUnknown, sNu } = sys;
+  const gammaOf = gammasAt(sys, x);
   for (let j = 0; j < sys.nReactions; j++) {
     const kj = kEff[j] * (gammaOf.get(j) ?? 1);
     if (kj === 0) continue;
     const q0 = rStart[j];
     const q1 = rStart[j + 1];
     for (let q = q0; q < q1; q++) {
-      // derivative of Π x^c with respect to the q-th factor
-      const c = rCoef[q];
-      const v = x[rUnknown[q]];
-      let d = kj * (c === 1 ? 1 : c === 2 ? 2 * v : c * v ** (c - 1));
-      for (let o = q0; o < q1; o++) {
-        if (o === q) continue;
-        const w = x[rUnknown[o]];
-        const co = rCoef[o];
-        d *= co === 1 ? w : co === 2 ? w * w : w ** co;
-      }
+      const d = rateDerivative(sys, kj, x, q, q0, q1);
       if (d === 0) continue;
       const l = rUnknown[q];
       for (let s = sStart[j]; s < sStart[j + 1]; s++) J[sUnknown[s] * n + l] += sNu[s] * d;
@@ -165,8 +155,7 @@ export function jacobianLinearSparse(
   vals.fill(0);
   const { rStart, sStart, sNu } = sys;
   const { termStart, termPosition } = m;
-  const gammaOf = new Map<number, number>();
-  for (const d of sys.dependent) gammaOf.set(d.reaction, d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed)));
+  const gammaOf = gammasAt(sys, x);
   for (let j = 0; j < sys.nReactions; j++) {
     const kj = kEff[j] * (gammaOf.get(j) ?? 1);
     if (kj === 0) continue;
@@ -226,4 +215,11 @@ function dependentLinearTerms(sys: ChemSystem, kEff: Float64Array, x: Float64Arr
       if (dr !== 0) for (let s = sStart[j]; s < sStart[j + 1]; s++) add(sUnknown[s], l, sNu[s] * dr);
     }
   }
+}
+
+/** γ of every amount-dependent reaction at x, by reaction index. */
+function gammasAt(sys: ChemSystem, x: ArrayLike<number>): Map<number, number> {
+  const out = new Map<number, number>();
+  for (const d of sys.dependent) out.set(d.reaction, d.gamma(gatherAmounts(d, x, sys.unknownOf, sys.fixed)));
+  return out;
 }
