@@ -12,8 +12,8 @@ import { compileMechanism } from "./compileMechanism";
 import { DiagnosticSink } from "./diagnostics";
 import { type Locator, lazyLocator, makeLocator } from "./locateInDocument";
 import { jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
-import { findRecursiveAlias } from "./recursiveAlias";
 import { readDocument } from "./readDocument";
+import { findRecursiveAlias } from "./recursiveAlias";
 import type { LoadedMechanism, MechanismLimits } from "./types";
 
 export const DEFAULTS: MechanismLimits = {
