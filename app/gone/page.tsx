@@ -18,10 +18,12 @@ export default async function GonePage({ searchParams }: { searchParams: Search 
         Whoever held its deletion token removed it, or, for an explorer draft that was never shared, it expired. The
         link will not work again: nothing of the record is kept but the note that it existed.
       </p>
-      <p className="mt-6">
+      <p className="mt-6 text-stone-700">
+        A new analysis starts in the{" "}
         <Link href="/explore" className="underline">
-          Open the explorer
+          explorer
         </Link>
+        .
       </p>
     </div>
   );
