@@ -13,7 +13,7 @@ export default async function GonePage({ searchParams }: { searchParams: Search 
   const label = typeof what === "string" && Object.hasOwn(GONE_WHAT, what) ? GONE_WHAT[what as GoneWhat] : "record";
   return (
     <div className="mx-auto max-w-xl px-4 py-16">
-      <h1 className="text-2xl font-semibold">This {label} was deleted</h1>
+      <h1 className="text-2xl font-semibold">{`This ${label} was deleted`}</h1>
       <p className="mt-3 text-stone-700">
         Whoever held its deletion token removed it, or, for an explorer draft that was never shared, it expired. The
         link will not work again: nothing of the record is kept but the note that it existed.
