@@ -5,6 +5,7 @@ import path from "node:path";
 import { type APIRequestContext, expect, test } from "@playwright/test";
 import { openSqliteStore } from "../../lib/store/sqlite-store";
 import { finish } from "./finishJob";
+import { smallAssessment } from "./smallAssessment";
 
 // The pages of stored records (issue 21: deleted records answer 410 Gone; issue 24: a store that
 // cannot be read is an error page, not a 404). Against the started server (playwright.config.ts),
@@ -63,17 +64,7 @@ test.describe("pages of deleted records answer 410 Gone with a page saying so", 
 
   test("an assessment: the student link alone, then both links", async ({ request }) => {
     const a = await (
-      await request.post("/api/assessments", {
-        data: {
-          title: "Route test: gone pages",
-          mechanismId: "oxygen-chlorine",
-          variants: 2,
-          seed: 11,
-          base: { altitude_km: 35, latitude_deg: 45, date: "2026-03-20", localSolarTime_h: 12 },
-          ranges: { altitude_km: { min: 30, max: 40 } },
-          questions: [{ kind: "dominant-family" }],
-        },
-      })
+      await request.post("/api/assessments", { data: smallAssessment("Route test: gone pages", 11) })
     ).json();
     const headers = { "x-deletion-token": a.deletionToken };
     expect((await request.get(`/assess/s/${a.studentId}`)).status()).toBe(200);
