@@ -31,7 +31,7 @@ export async function onServer<T>(url: string, work: () => Promise<T>): Promise<
     return await work();
   } catch (e) {
     if (e instanceof ApiError) {
-      throw new CliError(`the service at ${url} answered ${e.message}${e.path ? ` (at ${e.path})` : ""}`);
+      throw new CliError(`the service at ${url} answered ${e.message}`);
     }
     if (e instanceof TypeError && /fetch failed/i.test(e.message)) {
       const cause = (e as { cause?: { code?: string; message?: string } }).cause;
