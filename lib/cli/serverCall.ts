@@ -22,8 +22,8 @@ export async function serverMechanismId(client: OzoneCyclesClient, src: Mechanis
   return (await client.uploadMechanism(src.text)).id;
 }
 
-/** The absolute address of a page path the service answered with (e.g. /a/{id}). */
-export const serverPermalink = (url: string, page: string) => new URL(page, `${url.replace(/\/+$/, "")}/`).href;
+/** The address of a page path the service answered with (e.g. /a/{id}), under the service's address as the client forms its calls. */
+export const serverPermalink = (url: string, page: string) => `${url.replace(/\/+$/, "")}${page}`;
 
 /** Runs `work` against the service at `url`; a refusal or an unreachable service is a CliError naming it. */
 export async function onServer<T>(url: string, work: () => Promise<T>): Promise<T> {
