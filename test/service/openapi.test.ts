@@ -137,6 +137,7 @@ describe("the document's request schemas and the routes' zod schemas", () => {
   // request schemas). Each is given to the route's parser and to ajv with the document's schema.
   const at30 = { mechanismId: "reference", condition: { altitude_km: 30 } };
   const sweep = { mechanismId: "reference", profile: { kind: "standard" } };
+  const quiz = { title: "Quiz", mechanismId: "reference", variants: 3, base: { altitude_km: 30 } };
   const cases: Record<string, { parse: (b: unknown) => unknown; bodies: unknown[] }> = {
     AnalysisRequest: {
       parse: (b) => analysisRequestSchema.parse(b),
@@ -211,43 +212,16 @@ describe("the document's request schemas and the routes' zod schemas", () => {
     AssessmentSpec: {
       parse: (b) => GENERATED_SCHEMAS.AssessmentSpec.parse(b),
       bodies: [
+        { ...quiz, questions: [{ kind: "dominant-family" }] },
+        { ...quiz, variants: 41, questions: [{ kind: "dominant-family" }] },
+        { ...quiz, questions: [] },
+        { ...quiz, questions: [{ kind: "essay" }] },
         {
-          title: "Quiz",
-          mechanismId: "reference",
-          variants: 3,
-          base: { altitude_km: 30 },
-          questions: [{ kind: "dominant-family" }],
-        },
-        {
-          title: "Quiz",
-          mechanismId: "reference",
-          variants: 41,
-          base: { altitude_km: 30 },
-          questions: [{ kind: "dominant-family" }],
-        },
-        { title: "Quiz", mechanismId: "reference", variants: 3, base: { altitude_km: 30 }, questions: [] },
-        {
-          title: "Quiz",
-          mechanismId: "reference",
-          variants: 3,
-          base: { altitude_km: 30 },
-          questions: [{ kind: "essay" }],
-        },
-        {
-          title: "Quiz",
-          mechanismId: "reference",
-          variants: 3,
-          base: { altitude_km: 30 },
+          ...quiz,
           ranges: { altitude_km: { min: 25, max: 35, step: 1 } },
           questions: [{ kind: "chain-length", cycleId: "c1", tolerance: { kind: "relative", rel: 0.05 }, points: 2 }],
         },
-        {
-          title: "Quiz",
-          mechanismId: "reference",
-          variants: 3,
-          base: { altitude_km: 30 },
-          questions: [{ kind: "chain-length", tolerance: { kind: "relative", rel: 0 } }],
-        },
+        { ...quiz, questions: [{ kind: "chain-length", tolerance: { kind: "relative", rel: 0 } }] },
       ],
     },
     UncertaintyJob: {
