@@ -3,9 +3,15 @@
 // (the engine's worker thread, for sweeps). The key hashes the path, size
 // and modification time of every source file, so a clone runs without a
 // build step and an unchanged tree starts without bundling (tens of ms).
+// The engine's spectral tables (lib/photolysis/spectralTables.ts, ~0.3 s of
+// CPU to build) and the loaded built-in mechanisms (the reference YAML takes
+// ~0.15 s to parse) are made once here and stored in both bundles in place of
+// lib/photolysis/prebuiltSpectralTables.ts and lib/mechanism/prebuiltMechanisms.ts,
+// so a run does neither.
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, statSync } from "node:fs";
+import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from "node:fs";
 import path from "node:path";
+import { pathToFileURL } from "node:url";
 import { NODE_BUNDLE, serverOnlyStub } from "./node-bundle.mjs";
 
 function sourceKey(root) {
@@ -34,7 +40,9 @@ export async function ensureCliBundles(root) {
   const key = sourceKey(root);
   const cli = path.join(dir, `cli-${key}.mjs`);
   const worker = path.join(dir, `cli-worker-${key}.mjs`);
-  if (existsSync(cli) && existsSync(worker)) return { cli, worker };
+  const stored = path.join(dir, `cli-stored-${key}.mjs`);
+  // the bundles read the stored data (storeComputed) at run time
+  if (existsSync(cli) && existsSync(worker) && existsSync(stored.replace(/\.mjs$/, ".json"))) return { cli, worker };
   let build;
   try {
     ({ build } = await import("esbuild"));
@@ -44,9 +52,12 @@ export async function ensureCliBundles(root) {
   mkdirSync(dir, { recursive: true });
   // bundles of older sources go; several processes may build at once, so each writes a temporary file and renames it
   for (const f of readdirSync(dir)) {
-    if (/^cli-(worker-)?[0-9a-f]{16}\.mjs$/.test(f) && !f.includes(key)) rmSync(path.join(dir, f), { force: true });
+    if (/^cli-(worker-|stored-|tables-)?[0-9a-f]{16}\.(mjs|json)$/.test(f) && !f.includes(key))
+      rmSync(path.join(dir, f), { force: true });
   }
-  const common = { ...NODE_BUNDLE, absWorkingDir: root, packages: "external", plugins: [serverOnlyStub] };
+  const base = { ...NODE_BUNDLE, absWorkingDir: root, packages: "external", plugins: [serverOnlyStub] };
+  await storeComputed(build, base, root, stored);
+  const common = { ...base, plugins: [serverOnlyStub, prebuilt(stored)] };
   await Promise.all(
     [
       [cli, "lib/cli/main.ts"],
@@ -59,3 +70,53 @@ export async function ensureCliBundles(root) {
   );
   return { cli, worker };
 }
+
+/** Builds the spectral tables and loads the built-in mechanisms once, and writes the module that returns them. */
+async function storeComputed(build, options, root, out) {
+  const tmp = `${out}.${process.pid}.build.mjs`;
+  const entry = [
+    'export { SPECTRAL_TABLES, spectralTablesJson } from "./lib/photolysis/spectralTables.ts";',
+    'export { loadBuiltinMechanism } from "./lib/mechanism/builtinMechanisms.ts";',
+    'export { BUILTIN_MECHANISMS } from "./lib/mechanisms/index.ts";',
+  ].join("\n");
+  await build({ ...options, stdin: { contents: entry, resolveDir: root, loader: "ts" }, outfile: tmp });
+  const cwd = process.cwd();
+  try {
+    const m = await import(pathToFileURL(tmp).href);
+    process.chdir(root); // the built-in documents are read relative to the working folder
+    const mechanisms = Object.fromEntries(m.BUILTIN_MECHANISMS.map((b) => [b.id, m.loadBuiltinMechanism(b.id)]));
+    // the data in a JSON file beside the bundles, read on first use: a --help run neither compiles nor reads it
+    const json = out.replace(/\.mjs$/, ".json");
+    const part = `${json}.${process.pid}.tmp`;
+    writeFileSync(
+      part,
+      `{"spectralTables":${m.spectralTablesJson(m.SPECTRAL_TABLES)},"mechanisms":${JSON.stringify(mechanisms)}}`,
+    );
+    renameSync(part, json);
+    writeFileSync(
+      `${out}.${process.pid}.tmp`,
+      [
+        'import { readFileSync } from "node:fs";',
+        "let data;",
+        `const stored = () => (data ??= JSON.parse(readFileSync(new URL(${JSON.stringify(`./${path.basename(json)}`)}, import.meta.url), "utf8")));`,
+        "export const prebuiltSpectralTables = () => stored().spectralTables;",
+        "export const prebuiltMechanisms = () => stored().mechanisms;",
+        "",
+      ].join("\n"),
+    );
+    renameSync(`${out}.${process.pid}.tmp`, out);
+  } finally {
+    process.chdir(cwd);
+    rmSync(tmp, { force: true });
+  }
+}
+
+/** Resolves lib/photolysis/prebuiltSpectralTables.ts and lib/mechanism/prebuiltMechanisms.ts to the stored module. */
+const prebuilt = (file) => ({
+  name: "prebuilt",
+  setup(b) {
+    b.onResolve({ filter: /^\.\/prebuilt(SpectralTables|Mechanisms)$/ }, (args) =>
+      /lib[\\/](photolysis|mechanism)[\\/]/.test(args.importer) ? { path: file } : undefined,
+    );
+  },
+});

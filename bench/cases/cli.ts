@@ -2,15 +2,19 @@
  * The command line (bin/ozone-cycles.mjs) as a user runs it: a new Node
  * process each time, its bundles already built. "First output" is the time
  * from spawning to the first bytes on stdout; the sweep is the whole process
- * over the 51 levels of the standard profile (10–60 km), to set beside the
- * service's sweep in bench/cases/profiles.ts.
+ * over the 51 levels of the standard profile (10–60 km), set beside the same
+ * sweep as a job of a really started production server (POST /api/profiles,
+ * polled every 20 ms until done; scripts/serve.mjs on BENCH_CLI_PORT, default
+ * 3294). Without a build (npm run build) the service cases are left out.
  */
 import { spawn } from "node:child_process";
+import { existsSync } from "node:fs";
 import { DEMO_PROFILES } from "../../lib/atmosphere/demo-profiles";
 import { compileSource } from "../../lib/engine/mechanism-source";
 import { prepareSweep, runPreparedSweep } from "../../lib/profiles/prepareSweep";
 import { runLevelBatch } from "../../lib/profiles/runLevelBatch";
 import { inlineExecutor } from "../../lib/profiles/runSweep";
+import { startBenchServer } from "../server.mjs";
 import type { BenchCase } from "../types";
 
 const BIN = "bin/ozone-cycles.mjs";
@@ -30,7 +34,59 @@ function firstOutput(args: string[]): Promise<number> {
   });
 }
 
-export const cases: BenchCase[] = [
+const PORT = Number(process.env.BENCH_CLI_PORT ?? 3294);
+const base = `http://127.0.0.1:${PORT}`;
+let server: { stop(): void } | null = null;
+
+async function post(path: string, body: unknown): Promise<{ id: string }> {
+  const r = await fetch(`${base}${path}`, {
+    method: "POST",
+    headers: { "content-type": "application/json" },
+    body: JSON.stringify(body),
+  });
+  if (!r.ok) throw new Error(`${path}: ${r.status} ${await r.text()}`);
+  return r.json();
+}
+
+/** A sweep as a job of the service, from the POST to the job's done state. */
+async function serviceSweep(): Promise<string> {
+  const job = await post("/api/profiles", { mechanismId: "reference", profile: { kind: "standard" } });
+  for (;;) {
+    const s = await (await fetch(`${base}/api/jobs/${job.id}`)).json();
+    if (s.state === "done") return s.resultId;
+    if (s.state !== "queued" && s.state !== "running") throw new Error(`sweep ${s.state}: ${s.error?.message}`);
+    await new Promise((r) => setTimeout(r, 20));
+  }
+}
+
+const serviceCases: BenchCase[] = [
+  {
+    name: "service sweep, reference over the 51-level standard profile (POST to job done)",
+    run: serviceSweep,
+    iterations: 3,
+    note: "set beside the cli sweep above: the issue's aim is within 20 %",
+  },
+  {
+    name: "service analysis, reference at 30 km (POST /api/analyses, stored)",
+    run: () => post("/api/analyses", { mechanismId: "reference", condition: { altitude_km: 30 } }),
+    iterations: 10,
+  },
+];
+
+export async function setup(): Promise<BenchCase[]> {
+  if (!existsSync(".next/BUILD_ID") || !existsSync(".engine/worker.mjs")) {
+    console.log("cli: no build found, the service cases are left out (run npm run build first)");
+    return cases;
+  }
+  server = await startBenchServer(PORT);
+  return [...cases, ...serviceCases];
+}
+
+export async function teardown(): Promise<void> {
+  server?.stop();
+}
+
+const cases: BenchCase[] = [
   { name: "cli --help: start to first output", run: () => firstOutput(["--help"]), iterations: 10 },
   {
     name: "cli analyse, reference at 30 km: start to first output",

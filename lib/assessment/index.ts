@@ -12,7 +12,13 @@ export { qtiFiles, qtiPackage } from "./qti";
 export { formatMixingRatio, sheetConditions } from "./sheetConditions";
 export { formatSignificant, roundToSignificant } from "./significant";
 export type { MechanismOffer } from "./specSchema";
-export { assessmentSpecSchema, checkAgainstMechanism, LIMITS as SPEC_LIMITS, parseAssessmentSpec } from "./specSchema";
+export {
+  assessmentPreviewSchema,
+  assessmentSpecSchema,
+  checkAgainstMechanism,
+  LIMITS as SPEC_LIMITS,
+  parseAssessmentSpec,
+} from "./specSchema";
 export { studentView } from "./studentView";
 export { QUESTION_TEMPLATES, templateOf } from "./templates";
 export type * from "./types";

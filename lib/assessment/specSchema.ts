@@ -38,7 +38,7 @@ const BOUNDS: Record<string, [number, number]> = {
 function rangeSchema(field: string) {
   const [lo, hi] = BOUNDS[field];
   return z
-    .object({ min: finite, max: finite, step: finite.refine((v) => v > 0, "expected a positive step").optional() })
+    .object({ min: finite, max: finite, step: finite.gt(0, "expected a positive step").optional() })
     .strict()
     .refine((r) => r.min <= r.max, "expected min ≤ max")
     .refine((r) => r.min >= lo && r.max <= hi, `expected a range within ${lo}–${hi}`);
@@ -48,12 +48,10 @@ const toleranceSchema = z.discriminatedUnion("kind", [
   z
     .object({
       kind: z.literal("relative"),
-      rel: finite.refine((v) => v > 0 && v <= 1, "expected a fraction in (0, 1]"),
+      rel: finite.gt(0, "expected a fraction in (0, 1]").max(1, "expected a fraction in (0, 1]"),
     })
     .strict(),
-  z
-    .object({ kind: z.literal("absolute"), abs: finite.refine((v) => v >= 0, "expected a non-negative number") })
-    .strict(),
+  z.object({ kind: z.literal("absolute"), abs: finite.min(0, "expected a non-negative number") }).strict(),
   z.object({ kind: z.literal("exact") }).strict(),
 ]);
 
@@ -67,7 +65,8 @@ const questionSchema = z
     speciesB: speciesId.optional(),
     tolerance: toleranceSchema.optional(),
     points: finite
-      .refine((v) => v > 0 && v <= LIMITS.maxPoints, `expected marks between 0 and ${LIMITS.maxPoints}`)
+      .gt(0, `expected marks between 0 and ${LIMITS.maxPoints}`)
+      .max(LIMITS.maxPoints, `expected marks between 0 and ${LIMITS.maxPoints}`)
       .optional(),
   })
   .strict();
@@ -83,12 +82,14 @@ export const assessmentSpecSchema = z
     seed: z
       .number()
       .int("expected an integer seed")
-      .refine((v) => v >= 0 && v <= 0xffffffff, "expected a seed between 0 and 4294967295")
+      .min(0, "expected a seed between 0 and 4294967295")
+      .max(0xffffffff, "expected a seed between 0 and 4294967295")
       .optional(),
     variants: z
       .number()
       .int("expected a whole number of variants")
-      .refine((v) => v >= 1 && v <= LIMITS.maxVariants, `expected 1–${LIMITS.maxVariants} variants`),
+      .min(1, `expected 1–${LIMITS.maxVariants} variants`)
+      .max(LIMITS.maxVariants, `expected 1–${LIMITS.maxVariants} variants`),
     base: conditionSchema,
     ranges: z
       .object({
@@ -112,6 +113,14 @@ export const assessmentSpecSchema = z
       .string()
       .max(LIMITS.maxInstructions, `expected at most ${LIMITS.maxInstructions} characters`)
       .optional(),
+  })
+  .strict();
+
+/** The body of POST /api/assessments/preview: a mechanism and a base condition. */
+export const assessmentPreviewSchema = z
+  .object({
+    mechanismId: z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected a mechanism id"),
+    condition: conditionSchema,
   })
   .strict();
 

@@ -6,8 +6,11 @@
 import { type CsvProvenance, provenanceBlock } from "../service/provenanceBlock";
 import { CliError, EXIT } from "./io";
 
+/** The file name of a table named on the command line: "cycles" or "cycles.csv" is cycles.csv. */
+export const csvFileName = (name: string) => (name.endsWith(".csv") ? name : `${name}.csv`);
+
 export function csvChoice<T>(tables: Record<string, T>, name: string): T {
-  const file = name.endsWith(".csv") ? name : `${name}.csv`;
+  const file = csvFileName(name);
   if (Object.hasOwn(tables, file)) return tables[file];
   const names = Object.keys(tables).map((f) => f.replace(/\.csv$/, ""));
   throw new CliError(`unknown table "${name}"; the tables are ${names.join(", ")}`, EXIT.usage);

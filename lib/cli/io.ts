@@ -37,16 +37,7 @@ export function readTextFile(io: CliIo, file: string, what: string): string {
   try {
     return fs.readFileSync(full, "utf8");
   } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    const why =
-      code === "ENOENT"
-        ? "no such file"
-        : code === "EISDIR"
-          ? "it is a folder"
-          : code === "EACCES"
-            ? "permission denied"
-            : (e as Error).message;
-    throw new CliError(`cannot read ${what} ${file}: ${why}`);
+    throw new CliError(`cannot read ${what} ${file}: ${fileProblem(e, "no such file")}`);
   }
 }
 
@@ -59,6 +50,15 @@ export function writeOutput(io: CliIo, text: string, file: string | undefined): 
   try {
     fs.writeFileSync(path.resolve(io.cwd, file), text);
   } catch (e) {
-    throw new CliError(`cannot write ${file}: ${(e as Error).message}`);
+    throw new CliError(`cannot write ${file}: ${fileProblem(e, "no such folder")}`);
   }
+}
+
+/** A file system error in a few words; `missing` for ENOENT (a missing file, or a missing folder to write in). */
+function fileProblem(e: unknown, missing: string): string {
+  const code = (e as NodeJS.ErrnoException).code;
+  if (code === "ENOENT") return missing;
+  if (code === "EISDIR") return "it is a folder";
+  if (code === "EACCES" || code === "EPERM") return "permission denied";
+  return (e as Error).message;
 }

@@ -52,7 +52,11 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
     .option("--no-comments", "CSV without its # provenance lines")
     .option("--top <n>", "cycles in the summary", integer, SUMMARY_DEFAULTS.topCycles)
     .option("-o, --output <file>", "write to a file instead of stdout")
-    .action(async (flags: AnalyseFlags) => done((await import("./analyseCommand")).analyseCommand(io, flags)));
+    .option(
+      "--server <url>",
+      "send the analysis to a running service (e.g. http://localhost:3000) and print its permalink",
+    )
+    .action(async (flags: AnalyseFlags) => done(await (await import("./analyseCommand")).analyseCommand(io, flags)));
 
   const sweep = program
     .command("sweep")
@@ -77,6 +81,7 @@ export function buildProgram(io: CliIo, done: (code: number) => void): Command {
     .option("--csv <table>", "levels, cycles or profile", "levels")
     .option("--no-comments", "CSV without its # provenance lines")
     .option("-o, --output <file>", "write to a file instead of stdout")
+    .option("--server <url>", "run the sweep as a job of a running service and print its permalink")
     .action(async (flags: SweepFlags) => done(await (await import("./sweepCommand")).sweepCommand(io, flags)));
 
   program

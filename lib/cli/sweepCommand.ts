@@ -3,10 +3,13 @@
  * profile, or a profile CSV file) prepared and run as the service's sweep
  * jobs are (lib/profiles/prepareSweep.ts). Writes one CSV table after its
  * provenance block (levels by default), or the whole result as JSON, which
- * `compare` reads.
+ * `compare` reads. With --server the sweep runs as a job of a running
+ * service instead (serverCall.ts), and its permalink is printed on stderr.
  */
 import path from "node:path";
 import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
+import { CLIENT_DEFAULTS } from "../client";
+import type { MechanismSource } from "../engine/mechanism-source";
 import { compileSource } from "../engine/mechanism-source";
 import { prepareSweep, runPreparedSweep } from "../profiles/prepareSweep";
 import { parseSweepRequest } from "../profiles/requestSchema";
@@ -14,11 +17,12 @@ import { useParallel } from "../profiles/runSweep";
 import { STANDARD_PROFILE_ID } from "../profiles/standardProfile";
 import type { ProfileSpec, SweepRequest } from "../profiles/types";
 import { SWEEP_CSV_TABLES, sweepCondition } from "../service/sweepCsvTables";
-import { cliCsv, csvChoice } from "./cliCsv";
+import { cliCsv, csvChoice, csvFileName } from "./cliCsv";
 import { conditionFromFlags } from "./conditionFlags";
-import { type CliIo, EXIT, readTextFile, writeOutput } from "./io";
+import { CliError, type CliIo, EXIT, readTextFile, writeOutput } from "./io";
 import { mechanismArgument } from "./mechanismArgument";
 import { progressBar } from "./progressBar";
+import { onServer, serverClient, serverMechanismId, serverPermalink } from "./serverCall";
 import { sweepExecutor } from "./sweepExecutor";
 
 export interface SweepFlags extends Record<string, unknown> {
@@ -37,6 +41,8 @@ export interface SweepFlags extends Record<string, unknown> {
   csv: string;
   comments: boolean;
   output?: string;
+  /** a running service to send the sweep to */
+  server?: string;
 }
 
 /** "standard", a demo profile's id, or else a CSV file. */
@@ -75,6 +81,7 @@ export async function sweepCommand(io: CliIo, flags: SweepFlags): Promise<number
     ...(condition ? { condition } : {}),
     ...(options ? { options } : {}),
   });
+  if (flags.server) return sweepOnServer(io, flags, flags.server, src, request);
   const prepared = prepareSweep(request, src, DEMO_PROFILES);
   const severalChains = useParallel(request.options?.parallel ?? "auto", prepared.plan.mode);
   const executor = sweepExecutor(src, io.workerScript, severalChains);
@@ -105,5 +112,42 @@ export async function sweepCommand(io: CliIo, flags: SweepFlags): Promise<number
   }
   writeOutput(io, text, flags.output);
   for (const w of result.warnings) io.stderr(`warning: ${w}\n`);
+  return EXIT.ok;
+}
+
+/** The sweep as a job of the service: progress from its status, then the stored result or one of its tables. */
+async function sweepOnServer(
+  io: CliIo,
+  flags: SweepFlags,
+  url: string,
+  src: MechanismSource,
+  request: SweepRequest,
+): Promise<number> {
+  const client = serverClient(url);
+  const bar = progressBar(io);
+  const { text, warnings } = await onServer(url, async () => {
+    const mechanismId = await serverMechanismId(client, src);
+    let job = await client.startSweep({ ...request, mechanismId });
+    try {
+      while (job.state === "queued" || job.state === "running") {
+        bar.update(job.done, job.total, "levels on the service");
+        await new Promise((r) => setTimeout(r, CLIENT_DEFAULTS.pollInterval_ms / 2));
+        job = await client.getJob(job.id);
+      }
+    } finally {
+      bar.end();
+    }
+    if (job.state !== "done" || !job.resultId) {
+      throw new CliError(`the sweep on ${url} ${job.state}: ${job.error?.message ?? "no result"}`);
+    }
+    io.stderr(`permalink: ${serverPermalink(url, job.resultUrl ?? `/api/profiles/${job.resultId}`)}\n`);
+    const record = await client.getSweep(job.resultId);
+    if (flags.json)
+      return { text: `${JSON.stringify(record.body.result, null, 2)}\n`, warnings: record.body.result.warnings };
+    const file = csvFileName(flags.csv) as Parameters<typeof client.sweepCsv>[1];
+    return { text: await client.sweepCsv(job.resultId, file, flags.comments), warnings: record.body.result.warnings };
+  });
+  writeOutput(io, text, flags.output);
+  for (const w of warnings) io.stderr(`warning: ${w}\n`);
   return EXIT.ok;
 }

@@ -26,7 +26,7 @@ export interface UploadCheck {
   warnings: Diagnostic[];
 }
 
-const uploadSchema = z
+export const uploadSchema = z
   .object({ text: z.string().min(1, "expected the document text"), format: z.enum(["yaml", "json"]).optional() })
   .strict();
 

@@ -7,8 +7,11 @@
 import { z } from "zod";
 import { type IdRecord, idRecord } from "../idRecord";
 
+/** The value schema of every id-keyed record schema, for the OpenAPI document (a custom schema has no JSON Schema). */
+export const idRecordValues = new WeakMap<z.core.$ZodType, z.ZodType>();
+
 export function idRecordSchema<T extends z.ZodType>(value: T) {
-  return z
+  const schema = z
     .custom<Record<string, unknown>>(
       (v) => typeof v === "object" && v !== null && !Array.isArray(v),
       "expected an object of id: value entries",
@@ -24,4 +27,6 @@ export function idRecordSchema<T extends z.ZodType>(value: T) {
       }
       return out;
     });
+  idRecordValues.set(schema, value);
+  return schema;
 }

@@ -9,54 +9,54 @@ import { idRecordSchema } from "./idRecordSchema";
 import type { AnalysisRequest } from "./types";
 
 const finite = z.number().refine(Number.isFinite, "expected a finite number");
-const mixingRatio = finite.refine((v) => v >= 0 && v <= 1, "expected a mixing ratio between 0 and 1");
+
+/**
+ * A finite number within [min, max], `open` leaving out an end (a pressure above 0), with one message for
+ * every bound. Bounds as checks, not refinements, so that z.toJSONSchema writes them into the OpenAPI document.
+ */
+export function finiteIn(min: number, max: number, message: string, open: { min?: boolean; max?: boolean } = {}) {
+  const low = open.min ? finite.gt(min, message) : finite.min(min, message);
+  return open.max ? low.lt(max, message) : low.max(max, message);
+}
+const mixingRatio = finiteIn(0, 1, "expected a mixing ratio between 0 and 1");
 
 export const conditionSchema = z
   .object({
-    altitude_km: finite.refine((v) => v >= 0 && v <= 86, "expected an altitude between 0 and 86 km"),
-    T_K: finite.refine((v) => v >= 150 && v <= 350, "expected a temperature between 150 and 350 K").optional(),
-    p_hPa: finite.refine((v) => v > 0 && v <= 1100, "expected a pressure above 0 and at most 1100 hPa").optional(),
-    latitude_deg: finite.refine((v) => v >= -90 && v <= 90, "expected a latitude between -90 and 90°").optional(),
+    altitude_km: finiteIn(0, 86, "expected an altitude between 0 and 86 km"),
+    T_K: finiteIn(150, 350, "expected a temperature between 150 and 350 K").optional(),
+    p_hPa: finiteIn(0, 1100, "expected a pressure above 0 and at most 1100 hPa", { min: true }).optional(),
+    latitude_deg: finiteIn(-90, 90, "expected a latitude between -90 and 90°").optional(),
     date: z
       .string()
       .regex(/^\d{4}-\d{2}-\d{2}$/, "expected a date YYYY-MM-DD")
       .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), "expected a real calendar date")
       .optional(),
-    localSolarTime_h: finite
-      .refine((v) => v >= 0 && v <= 24, "expected a local solar time between 0 and 24 h")
-      .optional(),
-    zenith_deg: finite.refine((v) => v >= 0 && v <= 180, "expected a zenith angle between 0 and 180°").optional(),
+    localSolarTime_h: finiteIn(0, 24, "expected a local solar time between 0 and 24 h").optional(),
+    zenith_deg: finiteIn(0, 180, "expected a zenith angle between 0 and 180°").optional(),
     mode: z.enum(["instantaneous", "diurnal"]).optional(),
     held: idRecordSchema(mixingRatio).optional(),
     poolTotals: idRecordSchema(mixingRatio).optional(),
-    J: idRecordSchema(
-      finite.refine((v) => v >= 0 && v < 10, "expected a photolysis frequency in s⁻¹ (0–10)"),
-    ).optional(),
-    jScale: finite.refine((v) => v >= 0 && v <= 100, "expected a factor between 0 and 100").optional(),
+    J: idRecordSchema(finiteIn(0, 10, "expected a photolysis frequency in s⁻¹ (0–10)", { max: true })).optional(),
+    jScale: finiteIn(0, 100, "expected a factor between 0 and 100").optional(),
     ozone: z.enum(["held", "solved"]).optional(),
-    o3ColumnAbove_DU: finite
-      .refine((v) => v >= 0 && v <= 2000, "expected an overhead ozone column between 0 and 2000 DU")
-      .optional(),
-    aerosolSurface_um2cm3: finite
-      .refine(
-        (v) => v >= 0 && v <= 10000,
-        "expected an aerosol surface area density between 0 and 10000 µm² cm⁻³ (background ~1, after an eruption ~10–100)",
-      )
-      .optional(),
+    o3ColumnAbove_DU: finiteIn(0, 2000, "expected an overhead ozone column between 0 and 2000 DU").optional(),
+    aerosolSurface_um2cm3: finiteIn(
+      0,
+      10000,
+      "expected an aerosol surface area density between 0 and 10000 µm² cm⁻³ (background ~1, after an eruption ~10–100)",
+    ).optional(),
     cloud: z.enum(["none", "NAT", "ice", "auto"], "expected a cloud type: none, NAT, ice or auto").optional(),
-    cloudSurface_um2cm3: finite
-      .refine(
-        (v) => v >= 0 && v <= 10000,
-        "expected a cloud surface area density between 0 and 10000 µm² cm⁻³ (NAT ~1, at most 100; ice ~200)",
-      )
-      .optional(),
-    albedo: finite.refine((v) => v >= 0 && v <= 1, "expected a ground albedo between 0 and 1").optional(),
-    aerosolOpticalDepth: finite
-      .refine(
-        (v) => v >= 0 && v <= 10,
-        "expected an aerosol optical depth at 550 nm between 0 and 10 (background stratosphere ~0.005, after a large eruption ~0.1–0.3)",
-      )
-      .optional(),
+    cloudSurface_um2cm3: finiteIn(
+      0,
+      10000,
+      "expected a cloud surface area density between 0 and 10000 µm² cm⁻³ (NAT ~1, at most 100; ice ~200)",
+    ).optional(),
+    albedo: finiteIn(0, 1, "expected a ground albedo between 0 and 1").optional(),
+    aerosolOpticalDepth: finiteIn(
+      0,
+      10,
+      "expected an aerosol optical depth at 550 nm between 0 and 10 (background stratosphere ~0.005, after a large eruption ~0.1–0.3)",
+    ).optional(),
   })
   .strict();
 
@@ -66,7 +66,7 @@ export const analysisRequestSchema = z
     condition: conditionSchema,
     options: z
       .object({
-        fminRelative: finite.refine((v) => v > 0 && v < 0.5, "expected a fraction between 0 and 0.5").optional(),
+        fminRelative: finiteIn(0, 0.5, "expected a fraction between 0 and 0.5", { min: true, max: true }).optional(),
         oxDefinition: z.enum(["standard", "extended"]).optional(),
         uncertaintySamples: z
           .number()

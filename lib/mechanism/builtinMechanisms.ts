@@ -1,15 +1,25 @@
 /**
  * The built-in mechanism documents, lib/mechanisms/<id>.yaml, read with
- * node:fs from the working directory and compiled once per process.
+ * node:fs from the working directory and compiled once per process, or
+ * taken as a bundle stored them (prebuiltMechanisms.ts).
  */
 import fs from "node:fs";
 import path from "node:path";
 import { EngineError } from "../errors";
+import { idRecord } from "../idRecord";
 import { BUILTIN_MECHANISMS } from "../mechanisms";
 import { loadMechanism } from "./loadMechanism";
+import { prebuiltMechanisms } from "./prebuiltMechanisms";
 import type { BuiltinMechanismInfo, LoadedMechanism } from "./types";
 
 const cache = new Map<string, LoadedMechanism>();
+const prebuilt = prebuiltMechanisms() as Record<string, LoadedMechanism> | undefined;
+
+/** A loaded mechanism from its JSON form (JSON.stringify of a LoadedMechanism, parsed): the species index keyed by id again. */
+export function reviveLoadedMechanism(data: LoadedMechanism): LoadedMechanism {
+  const speciesIndex = idRecord<number>(data.mechanism.speciesIndex);
+  return { ...data, mechanism: { ...data.mechanism, speciesIndex } };
+}
 
 /** Id, title and description of every built-in mechanism. */
 export function builtinMechanisms(): BuiltinMechanismInfo[] {
@@ -32,8 +42,10 @@ export function loadBuiltinMechanism(id: string): LoadedMechanism {
       { path: "mechanismId" },
     );
   }
-  const text = fs.readFileSync(path.join(builtinMechanismDir(), `${id}.yaml`), "utf8");
-  const loaded = loadMechanism(text, { format: "yaml" });
+  const stored = prebuilt?.[id];
+  const loaded = stored
+    ? reviveLoadedMechanism(stored)
+    : loadMechanism(fs.readFileSync(path.join(builtinMechanismDir(), `${id}.yaml`), "utf8"), { format: "yaml" });
   cache.set(id, loaded);
   return loaded;
 }

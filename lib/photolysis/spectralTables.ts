@@ -15,6 +15,7 @@ import { interpolateNodes, type Nodes } from "./interpolateNodes";
 import { n2oCrossSection_cm2 } from "./n2oCrossSection";
 import { o1dQuantumYield } from "./o1dQuantumYield";
 import { o3CrossSection_cm2 } from "./o3CrossSection";
+import { prebuiltSpectralTables } from "./prebuiltSpectralTables";
 import { rayleighCrossSection_cm2 } from "./rayleighCrossSection";
 import { CROSS_SECTIONS, LYMAN_ALPHA_CROSS_SECTIONS, NO_DELTA_BANDS } from "./tables/crossSections";
 import { BRONO2_BR_YIELD, QUANTUM_YIELDS } from "./tables/quantumYields";
@@ -95,7 +96,7 @@ const FIXED_SPECS: Record<string, (l: number) => number> = {
   CF2Cl2: xs(CROSS_SECTIONS.CF2Cl2.points),
 };
 
-function buildTables(): SpectralTables {
+export function buildSpectralTables(): SpectralTables {
   const o2NonBand = (l: number) =>
     l <= 175.44
       ? interpolateNodes(CROSS_SECTIONS.O2_SRC.points, l)
@@ -157,8 +158,34 @@ function buildTables(): SpectralTables {
   return { fixed, byTemperature, o3ByTemperature, o2, srMin, srMax, rayleigh, binRange };
 }
 
-/** The tables (built once at first import). */
-export const SPECTRAL_TABLES: SpectralTables = buildTables();
+/** The tables as plain JSON (every Float64Array as its numbers), for a bundle to keep them between runs. */
+export function spectralTablesJson(t: SpectralTables): string {
+  return JSON.stringify(t, (_, v) => (v instanceof Float64Array ? Array.from(v) : v));
+}
+
+/** Tables from their JSON form (spectralTablesJson, parsed). */
+export function reviveSpectralTables(data: unknown): SpectralTables {
+  const d = data as Record<string, unknown>;
+  const arr = (v: unknown) => Float64Array.from(v as number[]);
+  const each = <T>(o: unknown, f: (v: unknown) => T) =>
+    Object.fromEntries(Object.entries(o as Record<string, unknown>).map(([k, v]) => [k, f(v)]));
+  return {
+    fixed: each(d.fixed, arr),
+    byTemperature: each(d.byTemperature, (v) => (v as unknown[]).map(arr)),
+    o3ByTemperature: (d.o3ByTemperature as unknown[]).map(arr),
+    o2: arr(d.o2),
+    srMin: arr(d.srMin),
+    srMax: arr(d.srMax),
+    rayleigh: arr(d.rayleigh),
+    binRange: d.binRange as Record<string, [number, number]>,
+  };
+}
+
+const prebuilt = prebuiltSpectralTables();
+
+/** The tables: built once at first import, or the ones a bundle stored (prebuiltSpectralTables.ts). */
+export const SPECTRAL_TABLES: SpectralTables =
+  prebuilt === undefined ? buildSpectralTables() : reviveSpectralTables(prebuilt);
 
 /** Index and weight of a temperature on the grid (clamped to 180–320 K). */
 export function temperatureWeights(T_K: number): { k: number; w: number } {

@@ -3,11 +3,10 @@
  * routes and the pages. The per-level condition reuses the analysis schema.
  */
 import { z } from "zod";
-import { conditionSchema, parseWith } from "../engine/request-schema";
+import { conditionSchema, finiteIn, parseWith } from "../engine/request-schema";
 import { InputError } from "../errors";
 import type { ComparisonRequest, SweepRequest } from "./types";
 
-const finite = z.number().refine(Number.isFinite, "expected a finite number");
 const id = z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected an id");
 
 /** Largest CSV profile accepted inline, characters. */
@@ -34,27 +33,27 @@ export const sweepRequestSchema = z
     profile: profileSpecSchema,
     grid: z
       .object({
-        from_km: finite.refine((v) => v >= 0 && v <= 86, "expected an altitude between 0 and 86 km").optional(),
-        to_km: finite.refine((v) => v >= 0 && v <= 86, "expected an altitude between 0 and 86 km").optional(),
-        step_km: finite.refine((v) => v >= 0.05 && v <= 86, "expected a step between 0.05 and 86 km").optional(),
+        from_km: finiteIn(0, 86, "expected an altitude between 0 and 86 km").optional(),
+        to_km: finiteIn(0, 86, "expected an altitude between 0 and 86 km").optional(),
+        step_km: finiteIn(0.05, 86, "expected a step between 0.05 and 86 km").optional(),
       })
       .strict()
       .optional(),
     condition: conditionSchema.omit({ altitude_km: true, T_K: true, p_hPa: true }).optional(),
     options: z
       .object({
-        fminRelative: finite.refine((v) => v > 0 && v < 0.5, "expected a fraction between 0 and 0.5").optional(),
+        fminRelative: finiteIn(0, 0.5, "expected a fraction between 0 and 0.5", { min: true, max: true }).optional(),
         oxDefinition: z.enum(["standard", "extended"]).optional(),
         parallel: z.enum(["auto", "parallel", "sequential"]).optional(),
         maxColumnPasses: z.number().int().min(1).max(10).optional(),
-        columnTolerance: finite.refine((v) => v > 0 && v < 1, "expected a fraction between 0 and 1").optional(),
+        columnTolerance: finiteIn(0, 1, "expected a fraction between 0 and 1", { min: true, max: true }).optional(),
       })
       .strict()
       .optional(),
   })
   .strict();
 
-const storedSideSchema = z.object({ sweepId: id }).strict();
+export const storedSideSchema = z.object({ sweepId: id }).strict();
 
 export const comparisonRequestSchema = z
   .object({

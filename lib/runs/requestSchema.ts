@@ -5,7 +5,7 @@
  * 1 MiB (and 10,000 rows, parseTrajectoryCsv.ts).
  */
 import { z } from "zod";
-import { conditionSchema, parseWith } from "../engine/request-schema";
+import { conditionSchema, finiteIn, parseWith } from "../engine/request-schema";
 import type { RunRequest } from "./types";
 
 export const RUN_LIMITS = {
@@ -14,7 +14,6 @@ export const RUN_LIMITS = {
   maxTrajectoryCsv: 1024 * 1024,
 };
 
-const finite = z.number().refine(Number.isFinite, "expected a finite number");
 const id = z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected an id");
 
 export const runStartSchema = z.discriminatedUnion("kind", [
@@ -23,10 +22,7 @@ export const runStartSchema = z.discriminatedUnion("kind", [
   z
     .object({
       kind: z.literal("amounts"),
-      mixingRatios: z.record(
-        z.string(),
-        finite.refine((v) => v >= 0 && v <= 1, "expected a mixing ratio between 0 and 1"),
-      ),
+      mixingRatios: z.record(z.string(), finiteIn(0, 1, "expected a mixing ratio between 0 and 1")),
       ozone: z.enum(["held", "solved"]).optional(),
     })
     .strict(),
@@ -55,7 +51,7 @@ export const runRequestSchema = z
     title: z.string().max(200).optional(),
     options: z
       .object({
-        fminRelative: finite.refine((v) => v > 0 && v < 0.5, "expected a fraction between 0 and 0.5").optional(),
+        fminRelative: finiteIn(0, 0.5, "expected a fraction between 0 and 0.5", { min: true, max: true }).optional(),
         oxDefinition: z.enum(["standard", "extended"]).optional(),
         sunFollowsDate: z.boolean().optional(),
       })

@@ -7,10 +7,10 @@
  */
 import "server-only";
 import { randomBytes } from "node:crypto";
-import { z } from "zod";
 import {
   type AssessmentSpec,
   answerTemplateCsv,
+  assessmentPreviewSchema,
   type ClassMarks,
   checkAgainstMechanism,
   generateAssessment,
@@ -26,7 +26,7 @@ import {
 } from "../assessment";
 import { sortFamilies, stepsInMechanismOrder, stepText } from "../assessment/templates/cycleText";
 import { enginePool } from "../engine/pool";
-import { conditionSchema, parseWith } from "../engine/request-schema";
+import { parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
@@ -60,16 +60,9 @@ async function offerOf(mechanismId: string) {
   };
 }
 
-const previewSchema = z
-  .object({
-    mechanismId: z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected a mechanism id"),
-    condition: conditionSchema,
-  })
-  .strict();
-
 /** What the builder needs to offer questions: the cycles, families and species at the base condition. Nothing is stored. */
 export async function previewAssessment(body: unknown) {
-  const { mechanismId, condition } = parseWith(previewSchema, body) as {
+  const { mechanismId, condition } = parseWith(assessmentPreviewSchema, body) as {
     mechanismId: string;
     condition: ConditionInput;
   };

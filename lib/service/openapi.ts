@@ -1,5 +1,17 @@
-/** The OpenAPI 3.1 description of the service's routes. */
+/**
+ * The OpenAPI 3.1 description of the service's routes. The request bodies' schemas are generated from the
+ * zod schemas the routes parse with (jsonSchemaOf); summaries, descriptions, examples, defaults and the
+ * responses are written here.
+ */
+import { z } from "zod";
 import packageJson from "../../package.json";
+import { assessmentPreviewSchema, assessmentSpecSchema } from "../assessment/specSchema";
+import { uploadSchema } from "../engine/check-upload";
+import { analysisRequestSchema, conditionSchema } from "../engine/request-schema";
+import { comparisonRequestSchema, storedSideSchema, sweepRequestSchema } from "../profiles/requestSchema";
+import { runRequestSchema } from "../runs/requestSchema";
+import { type JsonSchema, jsonSchemaOf, type Prose } from "./jsonSchemaOf";
+import { uncertaintyJobSchema } from "./uncertaintyJobSchema";
 
 const error = {
   type: "object",
@@ -223,135 +235,157 @@ const runPaths = {
   "/api/runs/{id}/daily.csv": runCsv("Each day's O3 change, Ox budget and closure, loss by family and pool totals"),
 };
 
-const runSchemas = {
-  RunRequest: {
-    type: "object",
-    required: ["mechanismId", "condition", "days"],
-    additionalProperties: false,
-    properties: {
-      mechanismId: { type: "string", examples: ["reference"] },
-      condition: {
-        type: "object",
-        description:
-          "the AnalysisRequest condition of the place (or the base of every trajectory row: date, held, poolTotals, …); the run starts at local midnight of its date, O3 solved unless ozone is held",
-      },
-      days: { type: "integer", minimum: 1, maximum: 60 },
-      start: {
-        oneOf: [
-          { type: "object", required: ["kind"], properties: { kind: { const: "periodic" } } },
-          {
-            type: "object",
-            required: ["kind", "analysisId"],
-            properties: { kind: { const: "analysis" }, analysisId: { type: "string" } },
-          },
-          {
-            type: "object",
-            required: ["kind", "mixingRatios"],
-            properties: {
-              kind: { const: "amounts" },
-              mixingRatios: { type: "object", additionalProperties: { type: "number", minimum: 0, maximum: 1 } },
-            },
-          },
-        ],
-        description: "default periodic: the 24-hour periodic solution at the first condition, at local midnight",
-      },
-      trajectory: {
-        type: "object",
-        required: ["csv"],
-        properties: {
-          csv: {
-            type: "string",
-            description:
-              "time_h,T_K,p_hPa,latitude_deg[,altitude_km][,aerosolSurface_um2cm3][,other condition fields]; at most 10,000 rows and 1 MiB; see docs/runs.md",
-          },
-          name: { type: "string" },
-        },
-      },
-      title: { type: "string" },
-      options: {
-        type: "object",
-        additionalProperties: false,
-        properties: {
-          fminRelative: { type: "number", default: 1e-4 },
-          oxDefinition: { enum: ["standard", "extended"], default: "standard" },
-          sunFollowsDate: { type: "boolean", default: true },
-        },
-      },
-    },
+// Request bodies: generated from the routes' zod schemas (jsonSchemaOf); only the words below are by hand.
+const CONDITION_PROSE: Prose = {
+  T_K: { description: "default: U.S. Standard Atmosphere 1976" },
+  p_hPa: { description: "default: U.S. Standard Atmosphere 1976" },
+  latitude_deg: { default: 45 },
+  date: { default: "2026-03-20", description: "YYYY-MM-DD" },
+  localSolarTime_h: { default: 12 },
+  zenith_deg: { description: "overrides latitude/date/time for the sun" },
+  mode: { default: "instantaneous" },
+  held: { description: "mixing ratios by species" },
+  poolTotals: { description: "mixing ratios of atoms by pool (Cly, Bry, NOy)" },
+  J: { description: "fixed photolysis frequencies, s-1, by channel" },
+  jScale: { default: 1 },
+  ozone: { default: "held" },
+  o3ColumnAbove_DU: {
+    description: "overhead ozone column for the light, Dobson units; default from the climatology",
+  },
+  aerosolSurface_um2cm3: {
+    description: "sulfate aerosol surface area density for uptake reactions, um2 cm-3; default: background profile",
+  },
+  cloud: {
+    default: "none",
+    description:
+      "polar stratospheric cloud: none, NAT, ice, or auto (ice below the frost point, Marti and Mauersberger 1993; NAT below the NAT existence temperature, Hanson and Mauersberger 1988, at the local H2O and NOy as HNO3)",
+  },
+  cloudSurface_um2cm3: {
+    description: "surface area density of the cloud present, um2 cm-3 (NAT at most 100); default NAT 1, ice 200",
+  },
+  albedo: {
+    default: 0.3,
+    description: "Lambertian ground albedo for the scattered light (two-stream radiative transfer)",
+  },
+  aerosolOpticalDepth: {
+    default: 0,
+    description: "column aerosol optical depth at 550 nm for the light, spread like the background sulfate profile",
   },
 };
 
-const storedSweep = { type: "object", required: ["sweepId"], properties: { sweepId: { type: "string" } } };
+/** The sweep's request-wide condition: the condition without the fields the profile gives. */
+const SWEEP_CONDITION_PROSE: Prose = Object.fromEntries(
+  Object.entries(CONDITION_PROSE)
+    .filter(([k]) => !["T_K", "p_hPa"].includes(k))
+    .map(([k, v]) => [`condition.${k}`, v]),
+);
 
-const profileSchemas = {
-  SweepRequest: {
-    type: "object",
-    required: ["mechanismId", "profile"],
-    additionalProperties: false,
-    properties: {
-      mechanismId: { type: "string", examples: ["reference", "oxygen-chlorine"] },
-      profile: {
-        oneOf: [
-          { type: "object", required: ["kind"], properties: { kind: { const: "standard" } } },
-          { type: "object", required: ["kind", "id"], properties: { kind: { const: "demo" }, id: { type: "string" } } },
-          {
-            type: "object",
-            required: ["kind", "csv"],
-            properties: {
-              kind: { const: "csv" },
-              csv: { type: "string", description: "profile CSV, see docs/profile-format.md; at most 512 KiB" },
-              name: { type: "string", description: "file name used in error paths" },
-            },
-          },
-        ],
-      },
-      grid: {
-        type: "object",
-        additionalProperties: false,
-        properties: {
-          from_km: { type: "number", default: 10, description: "default 10 km, or the profile's lowest level" },
-          to_km: { type: "number", default: 60, description: "default 60 km, or the profile's highest level" },
-          step_km: { type: "number", default: 1, minimum: 0.05 },
-        },
-      },
-      condition: {
-        type: "object",
-        description:
-          "the AnalysisRequest condition without altitude_km, T_K and p_hPa (they come from the profile); held and poolTotals here win over the profile's columns",
-      },
-      options: {
-        type: "object",
-        additionalProperties: false,
-        properties: {
-          fminRelative: { type: "number", default: 1e-4 },
-          oxDefinition: { enum: ["standard", "extended"], default: "standard" },
-          parallel: {
-            enum: ["auto", "parallel", "sequential"],
-            default: "auto",
-            description:
-              "parallel: one warm-started chain per engine worker; sequential: one chain from the top down; auto: parallel for the 24-hour mode only",
-          },
-          maxColumnPasses: {
-            type: "integer",
-            default: 3,
-            description: "with O3 solved: passes of the overhead-column iteration",
-          },
-          columnTolerance: { type: "number", default: 0.01 },
-        },
-      },
+const FMIN_PROSE = {
+  default: 1e-4,
+  description: "pathway threshold, fraction of the gross Ox destruction (extended weights)",
+};
+
+const REQUEST_PROSE: Record<string, Prose> = {
+  Condition: CONDITION_PROSE,
+  AnalysisRequest: {
+    mechanismId: { examples: ["reference", "oxygen", "oxygen-chlorine"] },
+    "options.fminRelative": FMIN_PROSE,
+    "options.oxDefinition": { default: "standard" },
+    "options.uncertaintySamples": {
+      default: 0,
+      description: "Monte Carlo samples over the JPL rate-constant uncertainties (docs/uncertainty.md)",
     },
+    "options.uncertaintySeed": { default: 1 },
+    "options.sensitivity": {
+      default: false,
+      description: "normalised sensitivity coefficients d ln(output)/d ln(k) of the key outputs",
+    },
+  },
+  SweepRequest: {
+    mechanismId: { examples: ["reference", "oxygen-chlorine"] },
+    "profile.csv": { description: "profile CSV, see docs/profile-format.md; at most 512 KiB" },
+    "profile.name": { description: "file name used in error paths" },
+    "grid.from_km": { default: 10, description: "default 10 km, or the profile's lowest level" },
+    "grid.to_km": { default: 60, description: "default 60 km, or the profile's highest level" },
+    "grid.step_km": { default: 1 },
+    condition: {
+      description:
+        "the AnalysisRequest condition without altitude_km, T_K and p_hPa (they come from the profile); held and poolTotals here win over the profile's columns",
+    },
+    ...SWEEP_CONDITION_PROSE,
+    "options.fminRelative": FMIN_PROSE,
+    "options.oxDefinition": { default: "standard" },
+    "options.parallel": {
+      default: "auto",
+      description:
+        "parallel: one warm-started chain per engine worker; sequential: one chain from the top down; auto: parallel for the 24-hour mode only",
+    },
+    "options.maxColumnPasses": { default: 3, description: "with O3 solved: passes of the overhead-column iteration" },
+    "options.columnTolerance": { default: 0.01 },
   },
   ComparisonRequest: {
-    type: "object",
-    required: ["a", "b"],
-    additionalProperties: false,
-    properties: {
-      a: { oneOf: [storedSweep, { $ref: "#/components/schemas/SweepRequest" }] },
-      b: { oneOf: [storedSweep, { $ref: "#/components/schemas/SweepRequest" }] },
-      labels: { type: "object", properties: { a: { type: "string" }, b: { type: "string" } } },
-      topCycles: { type: "integer", minimum: 1, maximum: 50, default: 5 },
-    },
+    a: { description: "sweep A: a stored sweep by id, or a sweep to run" },
+    b: { description: "sweep B: a stored sweep by id, or a sweep to run" },
+    topCycles: { default: 5 },
   },
+  RunRequest: {
+    mechanismId: { examples: ["reference"] },
+    condition: {
+      description:
+        "the condition of the place (or the base of every trajectory row: date, held, poolTotals, …); the run starts at local midnight of its date, O3 solved unless ozone is held",
+    },
+    start: {
+      description: "default periodic: the 24-hour periodic solution at the first condition, at local midnight",
+    },
+    "trajectory.csv": {
+      description:
+        "time_h,T_K,p_hPa,latitude_deg[,altitude_km][,aerosolSurface_um2cm3][,other condition fields]; at most 10,000 rows and 1 MiB; see docs/runs.md",
+    },
+    "options.fminRelative": FMIN_PROSE,
+    "options.oxDefinition": { default: "standard" },
+    "options.sunFollowsDate": { default: true },
+  },
+  AssessmentSpec: {
+    seed: { description: "default: random, recorded with the key" },
+    base: { description: "the condition every variant starts from" },
+    ranges: {
+      description: "{ min, max, step? } of each field drawn per variant; pool totals as mixing ratios",
+    },
+    "questions[].points": { default: 1 },
+  },
+};
+
+/** Where a schema appears inside another, it is a $ref to its component. */
+const COMPONENT_REFS = new Map<z.core.$ZodType, string>([
+  [conditionSchema, "Condition"],
+  [analysisRequestSchema, "AnalysisRequest"],
+  [sweepRequestSchema, "SweepRequest"],
+]);
+
+/** Each side of a comparison, as parseComparisonRequest reads it: a stored sweep, or a whole sweep request. */
+const comparisonSide = z.union([storedSideSchema, sweepRequestSchema]);
+
+/** The component schemas generated from zod, by the schema each comes from. */
+export const GENERATED_SCHEMAS = {
+  Condition: conditionSchema,
+  AnalysisRequest: analysisRequestSchema,
+  SweepRequest: sweepRequestSchema,
+  ComparisonRequest: comparisonRequestSchema.extend({ a: comparisonSide, b: comparisonSide }),
+  RunRequest: runRequestSchema,
+  AssessmentSpec: assessmentSpecSchema,
+  AssessmentPreview: assessmentPreviewSchema,
+  MechanismUpload: uploadSchema,
+  UncertaintyJob: uncertaintyJobSchema,
+} satisfies Record<string, z.ZodType>;
+
+const requestSchemas = Object.fromEntries(
+  Object.entries(GENERATED_SCHEMAS).map(([name, schema]) => [
+    name,
+    jsonSchemaOf(schema, { prose: REQUEST_PROSE[name], refs: COMPONENT_REFS }),
+  ]),
+) as Record<keyof typeof GENERATED_SCHEMAS, JsonSchema>;
+
+const profileSchemas = {
   JobStatus: {
     type: "object",
     required: ["id", "kind", "state", "done", "total"],
@@ -411,11 +445,7 @@ export const openApiDocument = {
             "application/json": {
               schema: {
                 oneOf: [
-                  {
-                    type: "object",
-                    required: ["text"],
-                    properties: { text: { type: "string" }, format: { enum: ["yaml", "json"] } },
-                  },
+                  { $ref: "#/components/schemas/MechanismUpload" },
                   { type: "object", description: "the JSON form of a mechanism document" },
                 ],
               },
@@ -509,11 +539,7 @@ export const openApiDocument = {
           required: true,
           content: {
             "application/json": {
-              schema: {
-                type: "object",
-                required: ["mechanismId", "condition"],
-                properties: { mechanismId: { type: "string" }, condition: { type: "object" } },
-              },
+              schema: { $ref: "#/components/schemas/AssessmentPreview" },
             },
           },
         },
@@ -603,6 +629,10 @@ export const openApiDocument = {
       post: {
         summary:
           "Start Monte Carlo ranges (and sensitivities) as a job: { analysis: AnalysisRequest } stores an analysis with result.uncertainty; { profileId, samples, seed?, sensitivity? } runs every level of a stored sweep",
+        requestBody: {
+          required: true,
+          content: { "application/json": { schema: { $ref: "#/components/schemas/UncertaintyJob" } } },
+        },
         responses: { 202: { description: "job status with statusUrl" }, ...errors(400, 404, 413) },
       },
     },
@@ -632,8 +662,8 @@ export const openApiDocument = {
       id: { name: "id", in: "path", required: true, schema: { type: "string", pattern: "^[A-Za-z0-9_-]{1,80}$" } },
     },
     schemas: {
+      ...requestSchemas,
       ...profileSchemas,
-      ...runSchemas,
       Error: error,
       Diagnostic: {
         type: "object",
@@ -644,174 +674,6 @@ export const openApiDocument = {
           path: { type: "string" },
           line: { type: "integer" },
           column: { type: "integer" },
-        },
-      },
-      AssessmentSpec: {
-        type: "object",
-        required: ["title", "mechanismId", "variants", "base", "questions"],
-        additionalProperties: false,
-        properties: {
-          title: { type: "string", maxLength: 120 },
-          mechanismId: { type: "string" },
-          seed: {
-            type: "integer",
-            minimum: 0,
-            maximum: 4294967295,
-            description: "default: random, recorded with the key",
-          },
-          variants: { type: "integer", minimum: 1, maximum: 40 },
-          base: { type: "object", description: "a condition as in AnalysisRequest.condition" },
-          ranges: {
-            type: "object",
-            description:
-              "{ min, max, step? } for altitude_km, latitude_deg, localSolarTime_h, zenith_deg, T_K, jScale, and poolTotals.<pool> (mixing ratio)",
-          },
-          questions: {
-            type: "array",
-            minItems: 1,
-            maxItems: 12,
-            items: {
-              type: "object",
-              required: ["kind"],
-              properties: {
-                kind: {
-                  enum: [
-                    "dominant-family",
-                    "rate-limiting-step",
-                    "chain-length",
-                    "species-ratio",
-                    "clox-share-change",
-                    "ozone-per-catalyst",
-                  ],
-                },
-                cycleId: { type: "string" },
-                speciesA: { type: "string" },
-                speciesB: { type: "string" },
-                tolerance: {
-                  type: "object",
-                  description: "{ kind: relative, rel } | { kind: absolute, abs } | { kind: exact }",
-                },
-                points: { type: "number", default: 1 },
-              },
-            },
-          },
-          instructions: { type: "string", maxLength: 600 },
-        },
-      },
-      AnalysisRequest: {
-        type: "object",
-        required: ["mechanismId", "condition"],
-        additionalProperties: false,
-        properties: {
-          mechanismId: { type: "string", examples: ["reference", "oxygen", "oxygen-chlorine"] },
-          condition: {
-            type: "object",
-            required: ["altitude_km"],
-            additionalProperties: false,
-            properties: {
-              altitude_km: { type: "number", minimum: 0, maximum: 86 },
-              T_K: {
-                type: "number",
-                minimum: 150,
-                maximum: 350,
-                description: "default: U.S. Standard Atmosphere 1976",
-              },
-              p_hPa: { type: "number", exclusiveMinimum: 0, description: "default: U.S. Standard Atmosphere 1976" },
-              latitude_deg: { type: "number", minimum: -90, maximum: 90, default: 45 },
-              date: { type: "string", format: "date", default: "2026-03-20" },
-              localSolarTime_h: { type: "number", minimum: 0, maximum: 24, default: 12 },
-              zenith_deg: {
-                type: "number",
-                minimum: 0,
-                maximum: 180,
-                description: "overrides latitude/date/time for the sun",
-              },
-              mode: { enum: ["instantaneous", "diurnal"], default: "instantaneous" },
-              held: {
-                type: "object",
-                additionalProperties: { type: "number" },
-                description: "mixing ratios by species",
-              },
-              poolTotals: {
-                type: "object",
-                additionalProperties: { type: "number" },
-                description: "mixing ratios of atoms by pool (Cly, Bry, NOy)",
-              },
-              J: {
-                type: "object",
-                additionalProperties: { type: "number" },
-                description: "fixed photolysis frequencies, s-1, by channel",
-              },
-              jScale: { type: "number", minimum: 0, default: 1 },
-              ozone: { enum: ["held", "solved"], default: "held" },
-              o3ColumnAbove_DU: {
-                type: "number",
-                minimum: 0,
-                maximum: 2000,
-                description: "overhead ozone column for the light, Dobson units; default from the climatology",
-              },
-              aerosolSurface_um2cm3: {
-                type: "number",
-                minimum: 0,
-                maximum: 10000,
-                description:
-                  "sulfate aerosol surface area density for uptake reactions, um2 cm-3; default: background profile",
-              },
-              cloud: {
-                enum: ["none", "NAT", "ice", "auto"],
-                default: "none",
-                description:
-                  "polar stratospheric cloud: none, NAT, ice, or auto (ice below the frost point, Marti and Mauersberger 1993; NAT below the NAT existence temperature, Hanson and Mauersberger 1988, at the local H2O and NOy as HNO3)",
-              },
-              cloudSurface_um2cm3: {
-                type: "number",
-                minimum: 0,
-                maximum: 10000,
-                description:
-                  "surface area density of the cloud present, um2 cm-3 (NAT at most 100); default NAT 1, ice 200",
-              },
-              albedo: {
-                type: "number",
-                minimum: 0,
-                maximum: 1,
-                default: 0.3,
-                description: "Lambertian ground albedo for the scattered light (two-stream radiative transfer)",
-              },
-              aerosolOpticalDepth: {
-                type: "number",
-                minimum: 0,
-                maximum: 10,
-                default: 0,
-                description:
-                  "column aerosol optical depth at 550 nm for the light, spread like the background sulfate profile",
-              },
-            },
-          },
-          options: {
-            type: "object",
-            additionalProperties: false,
-            properties: {
-              fminRelative: {
-                type: "number",
-                default: 1e-4,
-                description: "pathway threshold, fraction of the gross Ox destruction (extended weights)",
-              },
-              oxDefinition: { enum: ["standard", "extended"], default: "standard" },
-              uncertaintySamples: {
-                type: "integer",
-                minimum: 0,
-                maximum: 100000,
-                default: 0,
-                description: "Monte Carlo samples over the JPL rate-constant uncertainties (docs/uncertainty.md)",
-              },
-              uncertaintySeed: { type: "integer", minimum: 0, maximum: 4294967295, default: 1 },
-              sensitivity: {
-                type: "boolean",
-                default: false,
-                description: "normalised sensitivity coefficients d ln(output)/d ln(k) of the key outputs",
-              },
-            },
-          },
         },
       },
     },

@@ -15,10 +15,9 @@
  */
 import { solveConditionsOf } from "../engine/resolve-condition";
 import "server-only";
-import { z } from "zod";
 import { compileSource, type MechanismSource } from "../engine/mechanism-source";
 import { enginePool, POOL_DEFAULTS } from "../engine/pool";
-import { analysisRequestSchema, parseWith } from "../engine/request-schema";
+import { parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import type { JobContext } from "../jobs/types";
@@ -35,24 +34,12 @@ import {
 import { notFound } from "./http";
 import { mechanismSource } from "./mechanisms";
 import { getProfileRecord } from "./profiles";
+import { type UncertaintyJobInput, uncertaintyJobSchema } from "./uncertaintyJobSchema";
+
+export type { UncertaintyJobInput };
 
 export const UNCERTAINTY_PROFILE_KIND = "uncertainty-profile";
 export const MAX_UNCERTAINTY_BODY = 256 * 1024;
-
-const seed = z.number().int().min(0).max(0xffffffff);
-const jobSchema = z.union([
-  z.object({ analysis: analysisRequestSchema }).strict(),
-  z
-    .object({
-      profileId: z.string().regex(/^[A-Za-z0-9_-]{1,80}$/, "expected a stored profile sweep id"),
-      samples: z.number().int("expected a whole number of samples").min(0).max(100_000),
-      seed: seed.optional(),
-      sensitivity: z.boolean().optional(),
-    })
-    .strict(),
-]);
-
-export type UncertaintyJobInput = z.infer<typeof jobSchema>;
 
 export interface UncertaintyProfileLevel {
   altitude_km: number;
@@ -284,7 +271,7 @@ export async function uncertaintyJob(input: UncertaintyJobInput, ctx: JobContext
 
 /** Validates a job's input; throws InputError (400) before anything is queued. */
 export async function validateUncertaintyJob(body: unknown): Promise<UncertaintyJobInput> {
-  const input = parseWith(jobSchema, body) as UncertaintyJobInput;
+  const input = parseWith(uncertaintyJobSchema, body) as UncertaintyJobInput;
   if ("analysis" in input) await mechanismSource(input.analysis.mechanismId);
   else await getProfileRecord(input.profileId, "profileId");
   return input;
