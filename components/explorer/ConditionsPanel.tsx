@@ -12,7 +12,7 @@ import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { NumberField } from "../NumberField";
-import type { Problem } from "./api";
+import type { Problem } from "../ui/apiClient";
 import { MechanismPicker } from "./MechanismPicker";
 import { Panel } from "./Panel";
 

@@ -9,7 +9,7 @@ import { GridFields } from "./GridFields";
 import { JobProgress } from "./JobProgress";
 import { SideFields } from "./SideFields";
 import { defaultSide, type SideState, sideOf } from "./sideRequest";
-import { submitJob } from "./submitJob";
+import { submitJob } from "../ui/apiClient";
 import type { MechanismOption, ProfileOption } from "./types";
 
 export function ComparisonForm({

@@ -12,7 +12,7 @@ import { lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
 import type { ComparisonResult } from "@/lib/profiles/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
 import { ProfileUncertaintyRunner } from "../uncertainty";
-import { CopyLink } from "./CopyLink";
+import { CopyLink } from "../ui/CopyLink";
 import { DifferenceChart } from "./DifferenceChart";
 import { LossChart } from "./LossChart";
 import { ScaleToggle } from "./ScaleToggle";

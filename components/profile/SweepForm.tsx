@@ -6,7 +6,7 @@ import { GridFields } from "./GridFields";
 import { JobProgress } from "./JobProgress";
 import { SideFields } from "./SideFields";
 import { defaultSide, type SideState, sweepRequestOf } from "./sideRequest";
-import { submitJob } from "./submitJob";
+import { submitJob } from "../ui/apiClient";
 import type { MechanismOption, ProfileOption } from "./types";
 
 export function SweepForm({ mechanisms, profiles }: { mechanisms: MechanismOption[]; profiles: ProfileOption[] }) {

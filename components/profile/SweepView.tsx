@@ -11,7 +11,7 @@ import { lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
 import type { SweepResult } from "@/lib/profiles/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
 import { ProfileUncertaintyRunner } from "../uncertainty";
-import { CopyLink } from "./CopyLink";
+import { CopyLink } from "../ui/CopyLink";
 import { LossChart } from "./LossChart";
 import { ScaleToggle } from "./ScaleToggle";
 import { SplitChart } from "./SplitChart";

@@ -2,7 +2,7 @@
 /** A run at a fixed place or along an uploaded trajectory, or one of the invented demos, started as a job. */
 import { useCallback, useState } from "react";
 import { JobProgress } from "@/components/profile/JobProgress";
-import { submitJob } from "@/components/profile/submitJob";
+import { submitJob } from "@/components/ui/apiClient";
 import type { RunRequest } from "@/lib/runs/types";
 
 export interface DemoOption {

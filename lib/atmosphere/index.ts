@@ -4,6 +4,12 @@ export {
   BACKGROUND_SULFATE_SURFACE,
   backgroundSulfateSurface_um2cm3,
 } from "./backgroundAerosol";
+export {
+  type AnalysisMode,
+  CONDITION_DEFAULTS,
+  type ConditionInput,
+  type ResolvedCondition,
+} from "./condition";
 export { chapmanGrazing } from "./chapmanGrazing";
 export { climatologyAt, climatologyMixingRatio, climatologySources, climatologySpecies } from "./climatologyAt";
 export {

@@ -1,5 +1,6 @@
 /** The OpenAPI 3.1 description of the service's routes. */
 import packageJson from "../../package.json";
+import { CONDITION_DEFAULTS as D } from "../atmosphere/condition";
 
 const error = {
   type: "object",
@@ -717,16 +718,16 @@ export const openApiDocument = {
                 description: "default: U.S. Standard Atmosphere 1976",
               },
               p_hPa: { type: "number", exclusiveMinimum: 0, description: "default: U.S. Standard Atmosphere 1976" },
-              latitude_deg: { type: "number", minimum: -90, maximum: 90, default: 45 },
-              date: { type: "string", format: "date", default: "2026-03-20" },
-              localSolarTime_h: { type: "number", minimum: 0, maximum: 24, default: 12 },
+              latitude_deg: { type: "number", minimum: -90, maximum: 90, default: D.latitude_deg },
+              date: { type: "string", format: "date", default: D.date },
+              localSolarTime_h: { type: "number", minimum: 0, maximum: 24, default: D.localSolarTime_h },
               zenith_deg: {
                 type: "number",
                 minimum: 0,
                 maximum: 180,
                 description: "overrides latitude/date/time for the sun",
               },
-              mode: { enum: ["instantaneous", "diurnal"], default: "instantaneous" },
+              mode: { enum: ["instantaneous", "diurnal"], default: D.mode },
               held: {
                 type: "object",
                 additionalProperties: { type: "number" },
@@ -742,8 +743,8 @@ export const openApiDocument = {
                 additionalProperties: { type: "number" },
                 description: "fixed photolysis frequencies, s-1, by channel",
               },
-              jScale: { type: "number", minimum: 0, default: 1 },
-              ozone: { enum: ["held", "solved"], default: "held" },
+              jScale: { type: "number", minimum: 0, default: D.jScale },
+              ozone: { enum: ["held", "solved"], default: D.ozone },
               o3ColumnAbove_DU: {
                 type: "number",
                 minimum: 0,
@@ -759,7 +760,7 @@ export const openApiDocument = {
               },
               cloud: {
                 enum: ["none", "NAT", "ice", "auto"],
-                default: "none",
+                default: D.cloud,
                 description:
                   "polar stratospheric cloud: none, NAT, ice, or auto (ice below the frost point, Marti and Mauersberger 1993; NAT below the NAT existence temperature, Hanson and Mauersberger 1988, at the local H2O and NOy as HNO3)",
               },
@@ -774,14 +775,14 @@ export const openApiDocument = {
                 type: "number",
                 minimum: 0,
                 maximum: 1,
-                default: 0.3,
+                default: D.albedo,
                 description: "Lambertian ground albedo for the scattered light (two-stream radiative transfer)",
               },
               aerosolOpticalDepth: {
                 type: "number",
                 minimum: 0,
                 maximum: 10,
-                default: 0,
+                default: D.aerosolOpticalDepth,
                 description:
                   "column aerosol optical depth at 550 nm for the light, spread like the background sulfate profile",
               },
