@@ -98,7 +98,11 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
   const [building, setBuilding] = useState(false);
   const [error, setError] = useState<{ message: string; path?: string; during: "preview" | "build" } | null>(null);
   const failed = (e: unknown, during: "preview" | "build") =>
-    setError({ message: e instanceof Error ? e.message : String(e), path: e instanceof ApiError ? e.path : undefined, during });
+    setError({
+      message: e instanceof Error ? e.message : String(e),
+      path: e instanceof ApiError ? e.path : undefined,
+      during,
+    });
 
   const templateOf = (k: QuestionKind) => templates.find((t) => t.kind === k) as TemplateOption;
 

@@ -20,7 +20,9 @@ export function MarkingPanel({ instructorId, questions }: { instructorId: string
     setBusy(true);
     setError(null);
     try {
-      setMarks(await postText<ClassMarks & { csv: string }>(`/api/assessments/${instructorId}/marks`, text, "text/csv"));
+      setMarks(
+        await postText<ClassMarks & { csv: string }>(`/api/assessments/${instructorId}/marks`, text, "text/csv"),
+      );
     } catch (e) {
       setMarks(null);
       setError(e instanceof ApiError ? e : new ApiError(0, "client", String(e)));

@@ -4,12 +4,6 @@ export {
   BACKGROUND_SULFATE_SURFACE,
   backgroundSulfateSurface_um2cm3,
 } from "./backgroundAerosol";
-export {
-  type AnalysisMode,
-  CONDITION_DEFAULTS,
-  type ConditionInput,
-  type ResolvedCondition,
-} from "./condition";
 export { chapmanGrazing } from "./chapmanGrazing";
 export { climatologyAt, climatologyMixingRatio, climatologySources, climatologySpecies } from "./climatologyAt";
 export {
@@ -22,6 +16,12 @@ export {
   ozoneColumnAbove_cm2,
 } from "./columnAbove";
 export { type ColumnsAboveLevelsOptions, columnsAboveLevels } from "./columnsAboveLevels";
+export {
+  type AnalysisMode,
+  CONDITION_DEFAULTS,
+  type ConditionInput,
+  type ResolvedCondition,
+} from "./condition";
 export {
   AVOGADRO_mol,
   BOLTZMANN_J_K,

@@ -50,7 +50,12 @@ const CONDITION_FLAGS: FlagSpec[] = [
     parse: number,
     levelOnly: true,
   },
-  { flags: "--latitude <deg>", help: `latitude, degrees north; default ${CONDITION_DEFAULTS.latitude_deg}`, field: "latitude_deg", parse: number },
+  {
+    flags: "--latitude <deg>",
+    help: `latitude, degrees north; default ${CONDITION_DEFAULTS.latitude_deg}`,
+    field: "latitude_deg",
+    parse: number,
+  },
   { flags: "--date <YYYY-MM-DD>", help: `date; default "${CONDITION_DEFAULTS.date}"`, field: "date" },
   {
     flags: "--solar-time <h>",

@@ -12,8 +12,8 @@
 
 import {
   airColumnAbove_cm2,
-  CONDITION_DEFAULTS,
   type CloudState,
+  CONDITION_DEFAULTS,
   type ConditionInput,
   DOBSON_UNIT_cm2,
   O2_FRACTION,

@@ -3,7 +3,7 @@
  * returns, and what the views read. Plain JSON throughout.
  */
 import type { CycleReport } from "../analysis/types";
-import type { AnalysisMode, ConditionInput, ResolvedCondition } from "../atmosphere/condition";
+import type { ConditionInput, ResolvedCondition } from "../atmosphere/condition";
 import type { SteadyState } from "../solver/types";
 import type { UncertaintyResult } from "../uncertainty/types";
 

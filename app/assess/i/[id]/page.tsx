@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { MarkingPanel, PrintButton } from "@/components/assessment";
-import { CopyLink } from "@/components/ui/CopyLink";
 import { DeletionTokenNote } from "@/components/DeletionTokenNote";
+import { CopyLink } from "@/components/ui/CopyLink";
 import { formatTolerance } from "@/lib/assessment";
 import type { InstructorAssessment } from "@/lib/assessment/types";
 import { CAUTION_LINE } from "@/lib/caution";
