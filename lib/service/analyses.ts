@@ -9,11 +9,10 @@ import "server-only";
 import { enginePool } from "../engine/pool";
 import { parseAnalysisRequest } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
-import { ENGINE_VERSION } from "../engine/version";
 import { getStore } from "../store";
 import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";
-import { liveAnalysis, putNewAnalysis } from "./records";
+import { liveAnalysis, provenanceOf, putNewAnalysis } from "./records";
 import { keepWithinBudget } from "./retention";
 
 export const MAX_ANALYSIS_BODY = 256 * 1024;
@@ -62,12 +61,5 @@ export interface AnalysisRecord {
 
 export async function getAnalysisRecord(id: string): Promise<AnalysisRecord> {
   const a = await liveAnalysis(id);
-  return {
-    id: a.id,
-    createdAt: a.createdAt,
-    engineVersion: a.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    request: a.request as AnalysisRequest,
-    result: a.result as AnalysisResult,
-  };
+  return { ...provenanceOf(a), request: a.request as AnalysisRequest, result: a.result as AnalysisResult };
 }

@@ -67,13 +67,14 @@ export async function liveAnalysis(id: string): Promise<StoredAnalysis> {
   return liveOrThrow(ID_PATTERN.test(id) ? await getStore().getAnalysis(id) : null, "analysis", id);
 }
 
+/** What the routes say of any stored record or analysis: its id, when and by which engine it was computed, and the current engine. */
+export function provenanceOf(
+  r: Pick<StoredRecord, "id" | "createdAt" | "engineVersion">,
+): Omit<RecordView<never>, "body"> {
+  return { id: r.id, createdAt: r.createdAt, engineVersion: r.engineVersion, currentEngineVersion: ENGINE_VERSION };
+}
+
 /** The route's view of a stored record, its body typed as the caller knows it. */
 export function recordView<T>(r: StoredRecord): RecordView<T> {
-  return {
-    id: r.id,
-    createdAt: r.createdAt,
-    engineVersion: r.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    body: r.body as T,
-  };
+  return { ...provenanceOf(r), body: r.body as T };
 }
