@@ -37,15 +37,15 @@ export interface ConditionInput {
   T_K?: number;
   /** pressure, hPa (> 0); default: U.S. Standard Atmosphere 1976 */
   p_hPa?: number;
-  /** latitude, degrees north (−90–90); default 45 */
+  /** latitude, degrees north (−90–90); default CONDITION_DEFAULTS */
   latitude_deg?: number;
-  /** date "YYYY-MM-DD"; default "2026-03-20" */
+  /** date "YYYY-MM-DD"; default CONDITION_DEFAULTS */
   date?: string;
-  /** local solar time, h (0–24); default 12 */
+  /** local solar time, h (0–24); default CONDITION_DEFAULTS */
   localSolarTime_h?: number;
   /** solar zenith angle, degrees (0–180); when given it overrides latitude/date/time for the sun */
   zenith_deg?: number;
-  /** default "instantaneous" */
+  /** default CONDITION_DEFAULTS */
   mode?: AnalysisMode;
   /** held-species overrides, mixing ratio (mol/mol) by species id */
   held?: Record<string, number>;
@@ -53,21 +53,21 @@ export interface ConditionInput {
   poolTotals?: Record<string, number>;
   /** photolysis overrides, s⁻¹ by channel */
   J?: Record<string, number>;
-  /** factor on every computed J; default 1 */
+  /** factor on every computed J; default CONDITION_DEFAULTS */
   jScale?: number;
-  /** hold O3 at the climatology ("held", default) or solve for it ("solved") */
+  /** hold O3 at the climatology ("held") or solve for it ("solved"); default CONDITION_DEFAULTS */
   ozone?: "held" | "solved";
   /** ozone column above the level, Dobson units (0–2000); default from the climatology. Sets the light, not the local O3. */
   o3ColumnAbove_DU?: number;
   /** aerosol surface area density for the mechanism's uptake reactions, µm² cm⁻³ (0–10000); default: background sulfate at the altitude */
   aerosolSurface_um2cm3?: number;
-  /** polar stratospheric cloud: "none" (default), "NAT", "ice", or "auto" (from T, the frost point and T_NAT) */
+  /** polar stratospheric cloud: "none", "NAT", "ice", or "auto" (from T, the frost point and T_NAT); default CONDITION_DEFAULTS */
   cloud?: CloudType;
   /** surface area density of the cloud present, µm² cm⁻³ (NAT 0–100, ice 0–10000); default NAT 1, ice 200 */
   cloudSurface_um2cm3?: number;
-  /** Lambertian albedo of the ground (and any cloud deck below) for the scattered light, 0–1; default 0.3 */
+  /** Lambertian albedo of the ground (and any cloud deck below) for the scattered light, 0–1; default CONDITION_DEFAULTS */
   albedo?: number;
-  /** aerosol optical depth of the column at 550 nm for the light (0–10), spread like the background sulfate profile; default 0 */
+  /** aerosol optical depth of the column at 550 nm for the light (0–10), spread like the background sulfate profile; default CONDITION_DEFAULTS */
   aerosolOpticalDepth?: number;
 }
 
