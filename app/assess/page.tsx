@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { cookies } from "next/headers";
 import { AssessmentBuilder, type MechanismOption, type TemplateOption } from "@/components/assessment";
 import { QUESTION_TEMPLATES, SPEC_LIMITS } from "@/lib/assessment";
+import { CONDITION_DEFAULTS } from "@/lib/atmosphere/condition";
 import { listMechanisms } from "@/lib/service/mechanisms";
 import { ownerFromCookies } from "@/lib/service/owner";
 
@@ -34,6 +35,11 @@ export default async function BuildAssessmentPage() {
         templates={templates}
         maxVariants={SPEC_LIMITS.maxVariants}
         maxQuestions={SPEC_LIMITS.maxQuestions}
+        defaults={{
+          latitude_deg: CONDITION_DEFAULTS.latitude_deg,
+          date: CONDITION_DEFAULTS.date,
+          localSolarTime_h: CONDITION_DEFAULTS.localSolarTime_h,
+        }}
       />
     </div>
   );

@@ -6,33 +6,34 @@
  * POST /api/assessments and opens the instructor page of the result.
  */
 import { useId, useState } from "react";
-import type { QuestionKind, Tolerance } from "@/lib/assessment/types";
+import {
+  type BuilderQuestion,
+  type BuilderRange,
+  builderCondition,
+  builderSpec,
+  initialBuilderBase,
+  toleranceText,
+} from "@/lib/assessment/builderRequest";
+import type { QuestionKind } from "@/lib/assessment/types";
+import type { ConditionInput } from "@/lib/atmosphere/condition";
 import { isolateText } from "@/lib/viz/isolateText";
+import { ApiError, postJson } from "../ui/apiClient";
 import { Field } from "./Field";
-import type { ApiError, MechanismOption, Preview, TemplateOption } from "./types";
+import type { MechanismOption, Preview, TemplateOption } from "./types";
 
 interface Props {
   mechanisms: MechanismOption[];
   templates: TemplateOption[];
   maxVariants: number;
   maxQuestions: number;
+  /** the condition defaults the base fields start from (CONDITION_DEFAULTS, from the page) */
+  defaults: Required<Pick<ConditionInput, "latitude_deg" | "date" | "localSolarTime_h">>;
 }
 
-interface RangeState {
-  on: boolean;
-  min: string;
-  max: string;
-}
+type RangeState = BuilderRange;
 
-interface QuestionState {
+interface QuestionState extends BuilderQuestion {
   uid: number;
-  kind: QuestionKind;
-  cycleId: string;
-  speciesA: string;
-  speciesB: string;
-  /** % for a relative tolerance, the unit for an absolute one */
-  tolerance: string;
-  points: string;
 }
 
 const RANGE_FIELDS = [
@@ -68,30 +69,16 @@ const RANGE_FIELDS = [
 
 type RangeKey = (typeof RANGE_FIELDS)[number]["key"];
 
-function toleranceText(t: Tolerance): string {
-  if (t.kind === "relative") return String(t.rel * 100);
-  if (t.kind === "absolute") return String(t.abs);
-  return "";
-}
+/** The base altitude a new assessment starts at, km (where the ClOx cycles matter most). */
+const INITIAL_ALTITUDE_km = 35;
 
-function num(s: string): number | undefined {
-  if (s.trim() === "") return undefined;
-  const v = Number(s);
-  return Number.isFinite(v) ? v : Number.NaN;
-}
-
-export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuestions }: Props) {
+export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuestions, defaults }: Props) {
   const uid = useId();
   const [title, setTitle] = useState("Catalytic ozone loss — problem set");
   const [mechanismId, setMechanismId] = useState(
     mechanisms.find((m) => m.id === "oxygen-chlorine")?.id ?? mechanisms[0]?.id ?? "",
   );
-  const [base, setBase] = useState({
-    altitude_km: "35",
-    latitude_deg: "45",
-    date: "2026-03-20",
-    localSolarTime_h: "12",
-  });
+  const [base, setBase] = useState(() => initialBuilderBase(INITIAL_ALTITUDE_km, defaults));
   const [ranges, setRanges] = useState<Record<RangeKey, RangeState>>(
     Object.fromEntries(RANGE_FIELDS.map((f) => [f.key, { ...f.initial }])) as Record<RangeKey, RangeState>,
   );
@@ -109,40 +96,26 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
   const [nextUid, setNextUid] = useState(1);
   const [addKind, setAddKind] = useState<QuestionKind>(templates[0]?.kind ?? "dominant-family");
   const [building, setBuilding] = useState(false);
-  const [error, setError] = useState<(ApiError & { during: "preview" | "build" }) | null>(null);
+  const [error, setError] = useState<{ message: string; path?: string; during: "preview" | "build" } | null>(null);
+  const failed = (e: unknown, during: "preview" | "build") =>
+    setError({
+      message: e instanceof Error ? e.message : String(e),
+      path: e instanceof ApiError ? e.path : undefined,
+      during,
+    });
 
   const templateOf = (k: QuestionKind) => templates.find((t) => t.kind === k) as TemplateOption;
-
-  function baseCondition() {
-    return {
-      altitude_km: num(base.altitude_km),
-      latitude_deg: num(base.latitude_deg),
-      date: base.date || undefined,
-      localSolarTime_h: num(base.localSolarTime_h),
-    };
-  }
-
-  async function post(url: string, body: unknown): Promise<unknown> {
-    const r = await fetch(url, {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify(body),
-    });
-    const json = await r
-      .json()
-      .catch(() => ({ error: { code: "invalid-json", message: `the server answered ${r.status}` } }));
-    if (!r.ok) throw (json as { error: ApiError }).error;
-    return json;
-  }
 
   async function runPreview() {
     setPreviewing(true);
     setError(null);
     try {
-      setPreview((await post("/api/assessments/preview", { mechanismId, condition: baseCondition() })) as Preview);
+      setPreview(
+        await postJson<Preview>("/api/assessments/preview", { mechanismId, condition: builderCondition(base) }),
+      );
     } catch (e) {
       setPreview(null);
-      setError({ ...(e as ApiError), during: "preview" });
+      failed(e, "preview");
     } finally {
       setPreviewing(false);
     }
@@ -171,54 +144,19 @@ export function AssessmentBuilder({ mechanisms, templates, maxVariants, maxQuest
   const update = (u: number, patch: Partial<QuestionState>) =>
     setQuestions((qs) => qs.map((q) => (q.uid === u ? { ...q, ...patch } : q)));
 
-  function spec() {
-    const r: Record<string, unknown> = {};
-    for (const f of RANGE_FIELDS) {
-      const s = ranges[f.key];
-      if (!s.on) continue;
-      const v = { min: num(s.min), max: num(s.max) };
-      if (f.key === "Cly")
-        r.poolTotals = { Cly: { min: (v.min ?? Number.NaN) * 1e-9, max: (v.max ?? Number.NaN) * 1e-9 } };
-      else r[f.key] = v;
-    }
-    return {
-      title,
-      mechanismId,
-      variants: num(variants),
-      seed: seed.trim() === "" ? undefined : num(seed),
-      base: baseCondition(),
-      ranges: r,
-      instructions: instructions.trim() || undefined,
-      questions: questions.map((q) => {
-        const t = templateOf(q.kind);
-        const tol = num(q.tolerance);
-        const tolerance: Tolerance | undefined =
-          t.defaultTolerance.kind === "relative" && tol !== undefined
-            ? { kind: "relative", rel: tol / 100 }
-            : t.defaultTolerance.kind === "absolute" && tol !== undefined
-              ? { kind: "absolute", abs: tol }
-              : undefined;
-        return {
-          kind: q.kind,
-          cycleId: t.needs.cycle ? q.cycleId : undefined,
-          speciesA: t.needs.species ? q.speciesA : undefined,
-          speciesB: t.needs.species ? q.speciesB : undefined,
-          tolerance,
-          points: num(q.points),
-        };
-      }),
-    };
-  }
-
   async function build() {
     setBuilding(true);
     setError(null);
     try {
-      const out = (await post("/api/assessments", spec())) as { instructorUrl: string; deletionToken: string };
+      const spec = builderSpec(
+        { title, mechanismId, variants, seed, base, ranges, instructions, questions },
+        templates,
+      );
+      const out = await postJson<{ instructorUrl: string; deletionToken: string }>("/api/assessments", spec);
       // the token rides in the fragment, which no server and no Referer sees; the page shows it once
       window.location.assign(`${out.instructorUrl}#deletion-token=${out.deletionToken}`);
     } catch (e) {
-      setError({ ...(e as ApiError), during: "build" });
+      failed(e, "build");
       setBuilding(false);
     }
   }

@@ -6,7 +6,7 @@
  */
 import { useId, useState } from "react";
 import type { ClassMarks } from "@/lib/assessment/types";
-import type { ApiError } from "./types";
+import { ApiError, postText } from "../ui/apiClient";
 
 export function MarkingPanel({ instructorId, questions }: { instructorId: string; questions: number }) {
   const uid = useId();
@@ -20,17 +20,12 @@ export function MarkingPanel({ instructorId, questions }: { instructorId: string
     setBusy(true);
     setError(null);
     try {
-      const r = await fetch(`/api/assessments/${instructorId}/marks`, {
-        method: "POST",
-        headers: { "content-type": "text/csv" },
-        body: text,
-      });
-      const json = await r.json();
-      if (!r.ok) throw json.error;
-      setMarks(json);
+      setMarks(
+        await postText<ClassMarks & { csv: string }>(`/api/assessments/${instructorId}/marks`, text, "text/csv"),
+      );
     } catch (e) {
       setMarks(null);
-      setError(e as ApiError);
+      setError(e instanceof ApiError ? e : new ApiError(0, "client", String(e)));
     } finally {
       setBusy(false);
     }

@@ -1,5 +1,4 @@
 export { AssessmentBuilder } from "./AssessmentBuilder";
-export { CopyLink } from "./CopyLink";
 export { Field } from "./Field";
 export { MarkingPanel } from "./MarkingPanel";
 export { PrintButton } from "./PrintButton";

@@ -35,9 +35,3 @@ export interface Preview {
   solvedSpecies: string[];
   pools: string[];
 }
-
-export interface ApiError {
-  code: string;
-  message: string;
-  path?: string;
-}

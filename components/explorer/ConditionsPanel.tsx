@@ -5,14 +5,14 @@
  * zenith angle), instantaneous or 24-hour, and the amounts held.
  */
 import { backgroundSulfateSurface_um2cm3 } from "@/lib/atmosphere/backgroundAerosol";
+import { CONDITION_DEFAULTS, type ConditionInput, type ResolvedCondition } from "@/lib/atmosphere/condition";
 import { CLOUD_DEFAULTS, type CloudType } from "@/lib/atmosphere/polarCloud";
 import { standardAtmosphere } from "@/lib/atmosphere/standardAtmosphere";
 import { DEMO_CONDITIONS } from "@/lib/engine/demoConditions";
-import type { ConditionInput, ResolvedCondition } from "@/lib/engine/types";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { NumberField } from "../NumberField";
-import type { Problem } from "./api";
+import type { Problem } from "../ui/apiClient";
 import { MechanismPicker } from "./MechanismPicker";
 import { Panel } from "./Panel";
 
@@ -41,6 +41,25 @@ interface Props {
 
 const sig = (v: number, d = 4) => Number(v.toPrecision(d));
 
+/** The condition's number fields a NumberField edits directly (same unit in the form and the request). */
+type NumberKey =
+  | "T_K"
+  | "p_hPa"
+  | "latitude_deg"
+  | "aerosolSurface_um2cm3"
+  | "cloudSurface_um2cm3"
+  | "albedo"
+  | "aerosolOpticalDepth";
+
+/** What differs between those fields: the rest (value, change, error) follows from the key. */
+interface NumberFieldSpec {
+  id: string;
+  label: string;
+  unit: string;
+  placeholder?: string;
+  hint?: string;
+}
+
 /** The cloud the last analysis used and the temperatures that decided it. */
 function cloudLine(cloud: NonNullable<ResolvedCondition["cloud"]>): string {
   const t = (v: number | null) => (v === null ? "n/a" : `${v.toFixed(1)} K`);
@@ -60,6 +79,9 @@ export function ConditionsPanel(p: Props) {
     for (const k of Object.keys(patch) as (keyof ConditionInput)[]) if (patch[k] === undefined) delete next[k];
     p.onCondition(next);
   };
+  const numberField = (key: NumberKey, spec: NumberFieldSpec) => (
+    <NumberField {...spec} value={c[key]} onChange={(v) => set({ [key]: v })} error={p.fieldErrors[key]} />
+  );
   const std = standardOrNull(c.altitude_km);
   const bySun = c.zenith_deg === undefined;
   const M = p.resolved?.M_cm3;
@@ -152,43 +174,32 @@ export function ConditionsPanel(p: Props) {
             ) : null}
           </div>
           <div className="grid grid-cols-2 gap-2">
-            <NumberField
-              id="temperature"
-              label="Temperature"
-              unit="K"
-              value={c.T_K}
-              onChange={(v) => set({ T_K: v })}
-              placeholder={std ? `${sig(std.T_K)} (std)` : "standard"}
-              error={p.fieldErrors.T_K}
-            />
-            <NumberField
-              id="pressure"
-              label="Pressure"
-              unit="hPa"
-              value={c.p_hPa}
-              onChange={(v) => set({ p_hPa: v })}
-              placeholder={std ? `${sig(std.p_hPa)} (std)` : "standard"}
-              error={p.fieldErrors.p_hPa}
-            />
+            {numberField("T_K", {
+              id: "temperature",
+              label: "Temperature",
+              unit: "K",
+              placeholder: std ? `${sig(std.T_K)} (std)` : "standard",
+            })}
+            {numberField("p_hPa", {
+              id: "pressure",
+              label: "Pressure",
+              unit: "hPa",
+              placeholder: std ? `${sig(std.p_hPa)} (std)` : "standard",
+            })}
           </div>
           <p className="text-[11px] text-stone-500">
             Empty fields use the U.S. Standard Atmosphere 1976 at this altitude
             {std ? `; air density ${formatNumber(std.M_cm3)} cm⁻³` : ""}.
           </p>
-          <NumberField
-            id="aerosol"
-            label="Sulfate aerosol surface"
-            unit="µm² cm⁻³"
-            value={c.aerosolSurface_um2cm3}
-            onChange={(v) => set({ aerosolSurface_um2cm3: v })}
-            placeholder={
-              Number.isFinite(c.altitude_km)
-                ? `${sig(backgroundSulfateSurface_um2cm3(c.altitude_km))} (background)`
-                : "background"
-            }
-            error={p.fieldErrors.aerosolSurface_um2cm3}
-            hint="For the reactions on liquid sulfate (N2O5, BrONO2, ClONO2, HOCl); 10–100 after a large eruption."
-          />
+          {numberField("aerosolSurface_um2cm3", {
+            id: "aerosol",
+            label: "Sulfate aerosol surface",
+            unit: "µm² cm⁻³",
+            placeholder: Number.isFinite(c.altitude_km)
+              ? `${sig(backgroundSulfateSurface_um2cm3(c.altitude_km))} (background)`
+              : "background",
+            hint: "For the reactions on liquid sulfate (N2O5, BrONO2, ClONO2, HOCl); 10–100 after a large eruption.",
+          })}
           <div className="grid grid-cols-2 gap-2">
             <div className="flex flex-col gap-0.5 text-[12px]">
               <label htmlFor="cloud" className="text-stone-600">
@@ -196,10 +207,10 @@ export function ConditionsPanel(p: Props) {
               </label>
               <select
                 id="cloud"
-                value={c.cloud ?? "none"}
+                value={c.cloud ?? CONDITION_DEFAULTS.cloud}
                 onChange={(e) => {
                   const v = e.target.value as CloudType;
-                  set({ cloud: v === "none" ? undefined : v });
+                  set({ cloud: v === CONDITION_DEFAULTS.cloud ? undefined : v });
                 }}
                 className="rounded border border-stone-300 bg-white px-1 py-0.5 focus:outline-2 focus:outline-stone-800"
               >
@@ -209,16 +220,13 @@ export function ConditionsPanel(p: Props) {
                 <option value="ice">ice</option>
               </select>
             </div>
-            <NumberField
-              id="cloud-surface"
-              label="Cloud surface"
-              unit="µm² cm⁻³"
-              value={c.cloudSurface_um2cm3}
-              onChange={(v) => set({ cloudSurface_um2cm3: v })}
-              placeholder="default"
-              error={p.fieldErrors.cloudSurface_um2cm3}
-              hint={`Default NAT ${CLOUD_DEFAULTS.natSurface_um2cm3}, ice ${CLOUD_DEFAULTS.iceSurface_um2cm3}. Automatic: ice below the frost point, NAT below T_NAT.`}
-            />
+            {numberField("cloudSurface_um2cm3", {
+              id: "cloud-surface",
+              label: "Cloud surface",
+              unit: "µm² cm⁻³",
+              placeholder: "default",
+              hint: `Default NAT ${CLOUD_DEFAULTS.natSurface_um2cm3}, ice ${CLOUD_DEFAULTS.iceSurface_um2cm3}. Automatic: ice below the frost point, NAT below T_NAT.`,
+            })}
           </div>
           {p.resolved?.cloud ? (
             <p className="text-[11px] text-stone-500" data-testid="cloud-state">
@@ -230,24 +238,18 @@ export function ConditionsPanel(p: Props) {
         <fieldset className="space-y-2">
           <legend className="text-[11px] font-semibold uppercase tracking-wider text-stone-500">Light</legend>
           <div className="grid grid-cols-2 gap-2">
-            <NumberField
-              id="albedo"
-              label="Ground albedo"
-              unit=""
-              value={c.albedo}
-              onChange={(v) => set({ albedo: v })}
-              placeholder="0.3"
-              error={p.fieldErrors.albedo}
-            />
-            <NumberField
-              id="aod"
-              label="Aerosol optical depth"
-              unit="550 nm"
-              value={c.aerosolOpticalDepth}
-              onChange={(v) => set({ aerosolOpticalDepth: v })}
-              placeholder="0"
-              error={p.fieldErrors.aerosolOpticalDepth}
-            />
+            {numberField("albedo", {
+              id: "albedo",
+              label: "Ground albedo",
+              unit: "",
+              placeholder: String(CONDITION_DEFAULTS.albedo),
+            })}
+            {numberField("aerosolOpticalDepth", {
+              id: "aod",
+              label: "Aerosol optical depth",
+              unit: "550 nm",
+              placeholder: String(CONDITION_DEFAULTS.aerosolOpticalDepth),
+            })}
           </div>
           <p className="text-[11px] text-stone-500">
             Scattered and reflected light from a two-stream column; 0.05–0.1 for sea or forest, 0.6–0.9 over snow or
@@ -275,15 +277,12 @@ export function ConditionsPanel(p: Props) {
           {bySun ? (
             <>
               <div className="grid grid-cols-2 gap-2">
-                <NumberField
-                  id="latitude"
-                  label="Latitude"
-                  unit="°N"
-                  value={c.latitude_deg}
-                  onChange={(v) => set({ latitude_deg: v })}
-                  placeholder="45"
-                  error={p.fieldErrors.latitude_deg}
-                />
+                {numberField("latitude_deg", {
+                  id: "latitude",
+                  label: "Latitude",
+                  unit: "°N",
+                  placeholder: String(CONDITION_DEFAULTS.latitude_deg),
+                })}
                 <div>
                   <label htmlFor="date" className="text-[12px] text-stone-600">
                     Date
@@ -307,7 +306,7 @@ export function ConditionsPanel(p: Props) {
                   <label htmlFor="time" className="flex items-baseline justify-between text-[12px] text-stone-600">
                     <span>Local solar time</span>
                     <span className="tabular-nums font-semibold text-stone-900">
-                      {formatTime(c.localSolarTime_h ?? 12)}
+                      {formatTime(c.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h)}
                     </span>
                   </label>
                   <input
@@ -316,10 +315,10 @@ export function ConditionsPanel(p: Props) {
                     min={0}
                     max={24}
                     step={0.25}
-                    value={c.localSolarTime_h ?? 12}
+                    value={c.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h}
                     onChange={(e) => set({ localSolarTime_h: Number(e.target.value) })}
                     className="w-full accent-stone-800"
-                    aria-valuetext={formatTime(c.localSolarTime_h ?? 12)}
+                    aria-valuetext={formatTime(c.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h)}
                   />
                 </div>
               ) : null}
@@ -394,7 +393,7 @@ export function ConditionsPanel(p: Props) {
             </label>
             <select
               id="ozone"
-              value={c.ozone ?? "held"}
+              value={c.ozone ?? CONDITION_DEFAULTS.ozone}
               onChange={(e) => set({ ozone: e.target.value === "solved" ? "solved" : undefined })}
               className="rounded border border-stone-300 bg-white px-1 py-0.5 focus:outline-2 focus:outline-stone-800"
             >

@@ -3,13 +3,14 @@
  * and loss by reaction for a species; equation, k at these conditions, rate,
  * rate-law parameters and their source for a reaction.
  */
+
+import { familyOf } from "@/lib/analysis/familyOf";
 import type { AnalysisResult } from "@/lib/engine/types";
 import type { RateLaw } from "@/lib/kinetics/types";
 import { PHOTOLYSIS_CHANNELS } from "@/lib/photolysis/channels";
+import { equationView } from "@/lib/viz/equationView";
 import { familyLabel } from "@/lib/viz/familyLabel";
-import { familyOf } from "@/lib/viz/familyOf";
 import { formatLifetime, formatMixingRatio, formatNumber, formatPercent } from "@/lib/viz/formatNumber";
-import { parseEquation } from "@/lib/viz/parseEquation";
 import { type SpeciesTerm, speciesBudget } from "@/lib/viz/speciesBudget";
 import type { MechanismView } from "@/lib/viz/types";
 
@@ -125,7 +126,7 @@ function Terms({ title, terms, onSelect }: { title: string; terms: SpeciesTerm[]
 
 /** Units of the effective rate coefficient from the number of reactant molecules. */
 function kUnit(equation: string): string {
-  const eq = parseEquation(equation);
+  const eq = equationView(equation);
   if (eq.photolysis) return "s⁻¹";
   const order = eq.reactants.reduce((s, t) => s + t.coef, 0);
   if (order <= 1) return "s⁻¹";
@@ -205,7 +206,7 @@ function ReactionDetails({ id, mechanism, result, onSelect }: { id: string } & O
   const ox = result?.cycles.perReaction.find((r) => r.reactionId === id);
   if (!rx) return <p className="text-stone-500">{id} is not in this mechanism.</p>;
   const inCycles = result?.cycles.cycles.filter((c) => c.steps.some((s) => s.reactionId === id)) ?? [];
-  const eq = parseEquation(rx.equation);
+  const eq = equationView(rx.equation);
   return (
     <>
       <p className="text-[14px] font-semibold text-stone-900">{rx.equation}</p>

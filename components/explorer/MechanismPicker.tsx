@@ -3,7 +3,7 @@
 import { useEffect, useRef, useState } from "react";
 import { isolateText } from "@/lib/viz/isolateText";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
-import type { Problem } from "./api";
+import type { Problem } from "../ui/apiClient";
 import { UploadBox } from "./UploadBox";
 
 interface Props {

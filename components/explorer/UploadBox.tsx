@@ -4,7 +4,8 @@
  * problem the server finds beside the line it names.
  */
 import { useRef, useState } from "react";
-import { ApiError, type Problem, uploadMechanism } from "./api";
+import { ApiError, type Problem } from "../ui/apiClient";
+import { uploadMechanism } from "./api";
 
 interface Props {
   onUploaded(m: { id: string; title: string; warnings: Problem[]; deletionToken?: string }): void;

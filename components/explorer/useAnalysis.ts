@@ -10,7 +10,8 @@
 import { useEffect, useRef, useState } from "react";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 import { recentCache } from "@/lib/viz/recentCache";
-import { ApiError, postAnalysis } from "./api";
+import { ApiError } from "../ui/apiClient";
+import { postAnalysis } from "./api";
 
 /** Pause after the last change before asking the server, ms: one keyboard step of a slider is sent at once. */
 export const ANALYSIS_DEBOUNCE_MS = 40;

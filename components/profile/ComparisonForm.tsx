@@ -5,11 +5,11 @@
  */
 import { useCallback, useState } from "react";
 import type { SweepGrid } from "@/lib/profiles/types";
+import { submitJob } from "../ui/apiClient";
 import { GridFields } from "./GridFields";
 import { JobProgress } from "./JobProgress";
 import { SideFields } from "./SideFields";
 import { defaultSide, type SideState, sideOf } from "./sideRequest";
-import { submitJob } from "./submitJob";
 import type { MechanismOption, ProfileOption } from "./types";
 
 export function ComparisonForm({

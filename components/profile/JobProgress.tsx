@@ -5,6 +5,7 @@
  */
 import { useRouter } from "next/navigation";
 import { useEffect, useState } from "react";
+import { getJson, requestJson } from "../ui/apiClient";
 
 interface JobView {
   id: string;
@@ -39,10 +40,8 @@ export function JobProgress({
     let timer: ReturnType<typeof setTimeout> | undefined;
     const tick = async () => {
       try {
-        const r = await fetch(`/api/jobs/${jobId}`, { cache: "no-store" });
-        const body = await r.json();
+        const body = await getJson<JobView>(`/api/jobs/${jobId}`);
         if (stop) return;
-        if (!r.ok) throw new Error(body?.error?.message ?? `HTTP ${r.status}`);
         setJob(body);
         setNetError(null);
         if (body.state === "done" && body.resultUrl) {
@@ -104,7 +103,7 @@ export function JobProgress({
         <button
           type="button"
           className="mt-2 rounded border border-stone-400 px-3 py-1 text-[12px] hover:bg-stone-100 focus:outline-2 focus:outline-offset-2"
-          onClick={() => void fetch(`/api/jobs/${jobId}`, { method: "DELETE" })}
+          onClick={() => void requestJson(`/api/jobs/${jobId}`, { method: "DELETE" }).catch(() => {})}
         >
           Cancel
         </button>

@@ -5,6 +5,7 @@
  * mechanism, the mode, O3 held or solved, and an optional Cly total.
  */
 import { useId, useState } from "react";
+import { CONDITION_DEFAULTS } from "@/lib/atmosphere/condition";
 import { InputError } from "@/lib/errors";
 import { parseProfileCsv } from "@/lib/profiles/parseProfileCsv";
 import { isolateText } from "@/lib/viz/isolateText";
@@ -190,7 +191,7 @@ export function SideFields({
               <select
                 id={`${id}-cloud`}
                 className={select}
-                value={value.cloud ?? "none"}
+                value={value.cloud ?? CONDITION_DEFAULTS.cloud}
                 onChange={(e) => set({ cloud: e.target.value as NonNullable<SideState["cloud"]> })}
               >
                 <option value="none">none</option>

@@ -2,11 +2,11 @@
 /** One profile, its levels, and the sweep run as a job. */
 import { useCallback, useState } from "react";
 import type { SweepGrid } from "@/lib/profiles/types";
+import { submitJob } from "../ui/apiClient";
 import { GridFields } from "./GridFields";
 import { JobProgress } from "./JobProgress";
 import { SideFields } from "./SideFields";
 import { defaultSide, type SideState, sweepRequestOf } from "./sideRequest";
-import { submitJob } from "./submitJob";
 import type { MechanismOption, ProfileOption } from "./types";
 
 export function SweepForm({ mechanisms, profiles }: { mechanisms: MechanismOption[]; profiles: ProfileOption[] }) {

@@ -2,7 +2,8 @@
 /** A run at a fixed place or along an uploaded trajectory, or one of the invented demos, started as a job. */
 import { useCallback, useState } from "react";
 import { JobProgress } from "@/components/profile/JobProgress";
-import { submitJob } from "@/components/profile/submitJob";
+import { submitJob } from "@/components/ui/apiClient";
+import { CONDITION_DEFAULTS } from "@/lib/atmosphere/condition";
 import type { RunRequest } from "@/lib/runs/types";
 
 export interface DemoOption {
@@ -17,8 +18,8 @@ const field = "rounded border border-stone-300 px-2 py-1 text-[13px]";
 export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title: string }[]; demos: DemoOption[] }) {
   const [mechanismId, setMechanismId] = useState(mechanisms[0]?.id ?? "reference");
   const [altitude, setAltitude] = useState("20");
-  const [latitude, setLatitude] = useState("45");
-  const [date, setDate] = useState("2026-03-20");
+  const [latitude, setLatitude] = useState(String(CONDITION_DEFAULTS.latitude_deg));
+  const [date, setDate] = useState<string>(CONDITION_DEFAULTS.date);
   const [days, setDays] = useState("10");
   const [trajectory, setTrajectory] = useState("");
   const [jobId, setJobId] = useState<string | null>(null);

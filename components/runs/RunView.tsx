@@ -1,6 +1,6 @@
 /** A stored run: O3 and the chlorine partition against time, the daily Ox loss stacked by family, exports. */
 import { ChartFigure, LineKey, LinePaths } from "@/components/profile/ChartFigure";
-import { CopyLink } from "@/components/profile/CopyLink";
+import { CopyLink } from "@/components/ui/CopyLink";
 import type { DailyLossChart, TimeLineChart } from "@/lib/runs/timeCharts";
 import type { RunDay } from "@/lib/runs/types";
 import { formatNumber } from "@/lib/viz/formatNumber";

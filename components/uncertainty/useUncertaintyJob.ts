@@ -1,6 +1,7 @@
 "use client";
 /** Starts an uncertainty job (POST /api/uncertainty), polls its status and fetches the stored result when it is done. */
 import { useCallback, useEffect, useRef, useState } from "react";
+import { getJson, postJson } from "../ui/apiClient";
 
 export interface UncertaintyJobState {
   state: "idle" | "queued" | "running" | "done" | "failed" | "cancelled";
@@ -11,6 +12,17 @@ export interface UncertaintyJobState {
   /** the stored result (GET resultApiUrl) when done */
   result: unknown;
   resultApiUrl: string | null;
+}
+
+/** What POST /api/uncertainty and the status URL answer. */
+interface JobStatus {
+  state: UncertaintyJobState["state"];
+  done: number;
+  total: number;
+  stage: string;
+  statusUrl: string;
+  resultApiUrl: string;
+  error?: { message: string };
 }
 
 const POLL_MS = 400;
@@ -37,22 +49,14 @@ export function useUncertaintyJob() {
     stop.current = false;
     setJob({ ...IDLE, state: "queued", stage: "queued" });
     try {
-      const r = await fetch("/api/uncertainty", {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify(body),
-      });
-      let s = await r.json();
-      if (r.status !== 202) throw new Error(s?.error?.message ?? `the server answered ${r.status}`);
+      let s = await postJson<JobStatus>("/api/uncertainty", body);
       while (!stop.current && (s.state === "queued" || s.state === "running")) {
         setJob((j) => ({ ...j, state: s.state, done: s.done, total: s.total, stage: s.stage }));
         await new Promise((res) => setTimeout(res, POLL_MS));
-        const p = await fetch(s.statusUrl, { cache: "no-store" });
-        s = await p.json();
-        if (!p.ok) throw new Error(s?.error?.message ?? `the server answered ${p.status}`);
+        s = await getJson<JobStatus>(s.statusUrl);
       }
       if (s.state !== "done") throw new Error(s.error?.message ?? `the job ended ${s.state}`);
-      const res = await (await fetch(s.resultApiUrl, { cache: "no-store" })).json();
+      const res = await getJson<unknown>(s.resultApiUrl);
       setJob({
         state: "done",
         done: s.done,

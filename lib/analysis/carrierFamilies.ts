@@ -20,6 +20,7 @@
 import { ownValue } from "../idRecord";
 import type { CompiledMechanism } from "../mechanism/types";
 
+/** The catalyst families, in the order a cycle's name joins them (display order: DISPLAY_FAMILY_ORDER, familyOf.ts). */
 export const FAMILY_ORDER = ["ClOx", "BrOx", "NOx", "HOx"] as const;
 
 const ELEMENT_OF: Record<string, string> = { ClOx: "Cl", BrOx: "Br", NOx: "N", HOx: "H" };

@@ -3,6 +3,7 @@ export { CARRIER_MEMBERS, FAMILY_ORDER, familiesOfSpecies, familyName } from "./
 export { describePathway, netEquation } from "./describePathway";
 export { directOxLoss, directOxWeights } from "./directOxLoss";
 export { dominantFluxPath } from "./dominantFluxPath";
+export { DISPLAY_FAMILY_ORDER, type FamilySpecies, familyOf, familyRank } from "./familyOf";
 export { findPathways, PATHWAY_DEFAULTS } from "./findPathways";
 export { oxBudget } from "./oxBudget";
 export { EXTENDED_OX, oxWeights, STANDARD_OX } from "./oxWeights";

@@ -17,6 +17,12 @@ export {
 } from "./columnAbove";
 export { type ColumnsAboveLevelsOptions, columnsAboveLevels } from "./columnsAboveLevels";
 export {
+  type AnalysisMode,
+  CONDITION_DEFAULTS,
+  type ConditionInput,
+  type ResolvedCondition,
+} from "./condition";
+export {
   AVOGADRO_mol,
   BOLTZMANN_J_K,
   DOBSON_UNIT_cm2,

@@ -6,6 +6,7 @@
  */
 import { type Command, InvalidArgumentError, Option } from "commander";
 import { parse as parseYaml } from "yaml";
+import { CONDITION_DEFAULTS } from "../atmosphere/condition";
 import type { AnalysisOptions, ConditionInput } from "../engine/types";
 import { integer, number } from "./argParsers";
 import { CliError, type CliIo, readTextFile } from "./io";
@@ -49,11 +50,16 @@ const CONDITION_FLAGS: FlagSpec[] = [
     parse: number,
     levelOnly: true,
   },
-  { flags: "--latitude <deg>", help: "latitude, degrees north; default 45", field: "latitude_deg", parse: number },
-  { flags: "--date <YYYY-MM-DD>", help: 'date; default "2026-03-20"', field: "date" },
+  {
+    flags: "--latitude <deg>",
+    help: `latitude, degrees north; default ${CONDITION_DEFAULTS.latitude_deg}`,
+    field: "latitude_deg",
+    parse: number,
+  },
+  { flags: "--date <YYYY-MM-DD>", help: `date; default "${CONDITION_DEFAULTS.date}"`, field: "date" },
   {
     flags: "--solar-time <h>",
-    help: "local solar time, h (0–24); default 12",
+    help: `local solar time, h (0–24); default ${CONDITION_DEFAULTS.localSolarTime_h}`,
     field: "localSolarTime_h",
     parse: number,
   },
@@ -71,7 +77,7 @@ const CONDITION_FLAGS: FlagSpec[] = [
   },
   {
     flags: "--ozone <how>",
-    help: "hold O3 at the climatology or solve for it; default held",
+    help: `hold O3 at the climatology or solve for it; default ${CONDITION_DEFAULTS.ozone}`,
     field: "ozone",
     choices: ["held", "solved"],
   },
@@ -95,7 +101,7 @@ const CONDITION_FLAGS: FlagSpec[] = [
   },
   {
     flags: "--j-scale <factor>",
-    help: "factor on every computed photolysis frequency; default 1",
+    help: `factor on every computed photolysis frequency; default ${CONDITION_DEFAULTS.jScale}`,
     field: "jScale",
     parse: number,
   },
@@ -115,13 +121,13 @@ const CONDITION_FLAGS: FlagSpec[] = [
   },
   {
     flags: "--albedo <fraction>",
-    help: "ground albedo for the scattered light, 0–1; default 0.3",
+    help: `ground albedo for the scattered light, 0–1; default ${CONDITION_DEFAULTS.albedo}`,
     field: "albedo",
     parse: number,
   },
   {
     flags: "--aerosol-depth <tau>",
-    help: "aerosol optical depth of the column at 550 nm; default 0",
+    help: `aerosol optical depth of the column at 550 nm; default ${CONDITION_DEFAULTS.aerosolOpticalDepth}`,
     field: "aerosolOpticalDepth",
     parse: number,
   },

@@ -12,11 +12,13 @@
 
 import {
   airColumnAbove_cm2,
-  CLOUD_DEFAULTS,
   type CloudState,
+  CONDITION_DEFAULTS,
+  type ConditionInput,
   DOBSON_UNIT_cm2,
   O2_FRACTION,
   polarCloud,
+  type ResolvedCondition,
   standardAtmosphere,
 } from "../atmosphere";
 import { InputError } from "../errors";
@@ -24,15 +26,6 @@ import { idRecord, ownValue } from "../idRecord";
 import type { Amount, CompiledMechanism } from "../mechanism/types";
 import { conditionAt, photolysisFrequencies } from "../photolysis";
 import type { SolveConditions } from "../solver/types";
-import type { ConditionInput, ResolvedCondition } from "./types";
-
-export const CONDITION_DEFAULTS = {
-  latitude_deg: 45,
-  date: "2026-03-20",
-  localSolarTime_h: 12,
-  mode: "instantaneous",
-  ozone: "held",
-} as const;
 
 function amountToNumberDensity(a: Amount, M_cm3: number): number {
   return "mixingRatio" in a ? a.mixingRatio * M_cm3 : a.numberDensity_cm3;
@@ -105,7 +98,7 @@ function cloudOf(
   const hno3 = poolTotals_cm3.NOy ?? held_cm3.HNO3 ?? 0;
   try {
     return polarCloud({
-      type: input.cloud ?? CLOUD_DEFAULTS.type,
+      type: input.cloud ?? CONDITION_DEFAULTS.cloud,
       T_K,
       pH2O_hPa: ((held_cm3.H2O ?? 0) / M_cm3) * p_hPa,
       pHNO3_hPa: (hno3 / M_cm3) * p_hPa,

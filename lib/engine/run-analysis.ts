@@ -5,13 +5,13 @@
  */
 import { analyseCycles } from "../analysis";
 import type { CycleReport } from "../analysis/types";
-import { solarZenithAngle } from "../atmosphere";
+import { CONDITION_DEFAULTS, solarZenithAngle } from "../atmosphere";
 import type { CompiledMechanism } from "../mechanism/types";
 import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
 import { analysisUncertainty } from "../uncertainty/analysisUncertainty";
 import { checkEngineLimits } from "./engineLimits";
-import { CONDITION_DEFAULTS, jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
+import { jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
 import type { AnalysisOptions, AnalysisRequest, AnalysisResult, DiurnalSummary } from "./types";
 import { ENGINE_VERSION } from "./version";
 

@@ -21,7 +21,7 @@
  * skylight that air still lit higher up sends into the shadow is left out.
  * Units: photons cm⁻² s⁻¹ per bin.
  */
-import { airColumnAbove_cm2, O2_FRACTION, ozoneColumnAbove_cm2 } from "../atmosphere";
+import { airColumnAbove_cm2, CONDITION_DEFAULTS, O2_FRACTION, ozoneColumnAbove_cm2 } from "../atmosphere";
 import { expint1 } from "./expint";
 import { aerosolSlantDepth, columnO3Above_cm2, diffuseAtO3Scale } from "./radiativeColumn";
 import { slantColumns } from "./slantColumns";
@@ -30,10 +30,10 @@ import type { ActinicFlux, PhotolysisInput, PhotolysisOptions } from "./types";
 import { WAVELENGTH_GRID } from "./wavelengthGrid";
 
 export const DEFAULTS = {
-  /** Lambertian surface albedo */
-  albedo: 0.3,
-  /** aerosol optical depth of the column at 550 nm */
-  aerosolOpticalDepth: 0,
+  /** Lambertian surface albedo (a condition's default) */
+  albedo: CONDITION_DEFAULTS.albedo,
+  /** aerosol optical depth of the column at 550 nm (a condition's default) */
+  aerosolOpticalDepth: CONDITION_DEFAULTS.aerosolOpticalDepth,
   /** Rayleigh extinction and scattering on */
   rayleigh: true,
   /** diffuse light (two-stream) on */

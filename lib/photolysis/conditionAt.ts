@@ -1,5 +1,5 @@
 /**
- * A condition as a chemist states it (ConditionInput of lib/engine/types.ts)
+ * A condition as a chemist states it (ConditionInput of lib/atmosphere/condition.ts)
  * resolved into everything a solve needs: T and p (U.S. Standard Atmosphere
  * 1976 unless overridden, separately), [M] = p/(k_B·T), the sun (zenith angle
  * from latitude, date and local solar time by the NOAA equations, unless
@@ -12,31 +12,21 @@ import {
   airNumberDensity_cm3,
   BACKGROUND_SULFATE_SOURCE,
   backgroundSulfateSurface_um2cm3,
+  CONDITION_DEFAULTS,
+  type ConditionInput,
   climatologyAt,
   climatologySources,
   DOBSON_UNIT_cm2,
   dayOfYear,
   O2_FRACTION,
   ozoneColumnAbove_cm2,
+  type ResolvedCondition,
   solarZenithAngle,
   standardAtmosphere,
 } from "../atmosphere";
-import type { ConditionInput, ResolvedCondition } from "../engine/types";
 import { InputError } from "../errors";
 import { idRecord } from "../idRecord";
-import { DEFAULTS as PHOTOLYSIS_DEFAULTS } from "./actinicFlux";
 import { photolysisFrequencies } from "./photolysisFrequencies";
-
-export const DEFAULTS = {
-  /** degrees north */
-  latitude_deg: 45,
-  /** YYYY-MM-DD */
-  date: "2026-03-20",
-  /** h, local mean solar time */
-  localSolarTime_h: 12,
-  mode: "instantaneous" as const,
-  ozone: "held" as const,
-};
 
 /** Ids of the climatology that are pool totals rather than held species. */
 const POOLS = new Set(["Cly", "Bry", "NOy"]);
@@ -97,15 +87,15 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
   const T_K = input.T_K ?? std.T_K;
   const p_hPa = input.p_hPa ?? std.p_hPa;
   const M_cm3 = airNumberDensity_cm3(p_hPa * 100, T_K);
-  const latitude_deg = input.latitude_deg ?? DEFAULTS.latitude_deg;
-  const date = input.date ?? DEFAULTS.date;
+  const latitude_deg = input.latitude_deg ?? CONDITION_DEFAULTS.latitude_deg;
+  const date = input.date ?? CONDITION_DEFAULTS.date;
   let doy: number;
   try {
     doy = dayOfYear(date);
   } catch (e) {
     throw new InputError("condition.date", e instanceof Error ? e.message : String(e));
   }
-  const localSolarTime_h = input.localSolarTime_h ?? DEFAULTS.localSolarTime_h;
+  const localSolarTime_h = input.localSolarTime_h ?? CONDITION_DEFAULTS.localSolarTime_h;
   const zenith_deg =
     input.zenith_deg ??
     solarZenithAngle({
@@ -115,8 +105,8 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
       year: Number(date.slice(0, 4)),
     });
 
-  const albedo = input.albedo ?? PHOTOLYSIS_DEFAULTS.albedo;
-  const aerosolOpticalDepth = input.aerosolOpticalDepth ?? PHOTOLYSIS_DEFAULTS.aerosolOpticalDepth;
+  const albedo = input.albedo ?? CONDITION_DEFAULTS.albedo;
+  const aerosolOpticalDepth = input.aerosolOpticalDepth ?? CONDITION_DEFAULTS.aerosolOpticalDepth;
   const sources: Record<string, string> = idRecord({
     T_K: input.T_K !== undefined ? "given" : "U.S. Standard Atmosphere 1976",
     p_hPa: input.p_hPa !== undefined ? "given" : "U.S. Standard Atmosphere 1976",
@@ -167,8 +157,8 @@ export function conditionAt(input: ConditionInput): AtmosphericCondition {
     dayOfYear: doy,
     localSolarTime_h,
     zenith_deg,
-    mode: input.mode ?? DEFAULTS.mode,
-    ozone: input.ozone ?? DEFAULTS.ozone,
+    mode: input.mode ?? CONDITION_DEFAULTS.mode,
+    ozone: input.ozone ?? CONDITION_DEFAULTS.ozone,
     o3ColumnAbove_DU: o3Above / DOBSON_UNIT_cm2,
     aerosolSurface_um2cm3: input.aerosolSurface_um2cm3 ?? backgroundSulfateSurface_um2cm3(z),
     albedo,

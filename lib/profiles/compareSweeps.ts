@@ -7,9 +7,10 @@
  * reaction ids differ).
  * Rates in molecules cm⁻³ s⁻¹.
  */
+
+import { familyRank } from "../analysis/familyOf";
 import { InputError } from "../errors";
 import { idRecord } from "../idRecord";
-import { familyRank } from "../viz/familyOf";
 import type {
   ComparisonLevel,
   ComparisonResult,

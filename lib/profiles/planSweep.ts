@@ -7,6 +7,7 @@
  * under several mechanisms; O3 from the profile is used only when O3 is held.
  */
 
+import { CONDITION_DEFAULTS } from "../atmosphere/condition";
 import type { AnalysisRequest } from "../engine/types";
 import { InputError } from "../errors";
 import { idRecord } from "../idRecord";
@@ -61,8 +62,8 @@ export function planSweep(request: SweepRequest, profile: Profile, mech: Mechani
   }
   const altitudes_km = levelGrid(grid);
   const condition = request.condition ?? {};
-  const ozone = condition.ozone ?? "held";
-  const mode = condition.mode ?? "instantaneous";
+  const ozone = condition.ozone ?? CONDITION_DEFAULTS.ozone;
+  const mode = condition.mode ?? CONDITION_DEFAULTS.mode;
   const heldIds = new Set(mech.species.filter((s) => s.role === "held").map((s) => s.id));
   if (ozone === "held" && mech.species.some((s) => s.id === "O3")) heldIds.add("O3");
   const poolIds = new Set(mech.pools.map((p) => p.id));

@@ -14,8 +14,9 @@
  * previous state until no column changes by more than the tolerance (the
  * number of passes is reported).
  */
+
+import { familyRank } from "../analysis/familyOf";
 import { climatologyMixingRatio, columnsAboveLevels, ozoneColumnAbove_cm2, standardAtmosphere } from "../atmosphere";
-import { familyRank } from "../viz/familyOf";
 import type { SweepPlan } from "./planSweep";
 import type { LevelBatch, LevelBatchResult } from "./runLevelBatch";
 import { splitChunks } from "./splitChunks";

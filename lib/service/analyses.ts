@@ -9,10 +9,10 @@ import "server-only";
 import { enginePool } from "../engine/pool";
 import { parseAnalysisRequest } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
-import { ENGINE_VERSION } from "../engine/version";
-import { getStore, ID_PATTERN, newRecordId } from "../store";
-import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
+import { getStore } from "../store";
+import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";
+import { liveAnalysis, provenanceOf, putNewAnalysis } from "./records";
 import { keepWithinBudget } from "./retention";
 
 export const MAX_ANALYSIS_BODY = 256 * 1024;
@@ -31,19 +31,12 @@ export async function createAnalysis(body: unknown, o: { draft?: boolean } = {})
   const src = await mechanismSource(request.mechanismId);
   const out = await enginePool().run({ kind: "analysis", mechanism: src, request });
   const result = out.result;
-  const id = newRecordId();
   const deletion = newDeletionToken();
   await keepWithinBudget();
-  await getStore().putAnalysis({
-    id,
-    mechanismId: src.id,
-    engineVersion: ENGINE_VERSION,
-    request,
-    result,
-    createdAt: new Date().toISOString(),
-    pinned: !o.draft,
-    deleteHash: deletion.hash,
-  });
+  const id = await putNewAnalysis(
+    { mechanismId: src.id, request, result, pinned: !o.draft },
+    { deleteHash: deletion.hash },
+  );
   return { id, result, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
 }
 
@@ -67,13 +60,6 @@ export interface AnalysisRecord {
 }
 
 export async function getAnalysisRecord(id: string): Promise<AnalysisRecord> {
-  const a = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getAnalysis(id) : null, "analysis", id);
-  return {
-    id: a.id,
-    createdAt: a.createdAt,
-    engineVersion: a.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    request: a.request as AnalysisRequest,
-    result: a.result as AnalysisResult,
-  };
+  const a = await liveAnalysis(id);
+  return { ...provenanceOf(a), request: a.request as AnalysisRequest, result: a.result as AnalysisResult };
 }

@@ -29,10 +29,11 @@ import { enginePool } from "../engine/pool";
 import { parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
-import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { newRecordId } from "../store";
 import { type CsvExportOptions, type CsvProvenance, csvExport, csvMechanism } from "./csvProvenance";
-import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
+import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
 import { mechanismDetail, mechanismSource } from "./mechanisms";
+import { liveRecord, putNewAnalysis, putNewRecord } from "./records";
 import { keepWithinBudget } from "./retention";
 
 export const ASSESSMENT_KIND = "assessment";
@@ -105,7 +106,6 @@ export async function createAssessment(body: unknown): Promise<{
   const generated = await generateAssessment(spec, { analyse: await analyser(spec.mechanismId) });
 
   await keepWithinBudget();
-  const store = getStore();
   const deletion = newDeletionToken();
   const createdAt = new Date().toISOString();
   const analyses: InstructorAssessment["analyses"] = [];
@@ -115,15 +115,7 @@ export async function createAssessment(body: unknown): Promise<{
       ["doubled-Cly", a.extraRequest, a.extra],
     ] as const) {
       if (!request || !result) continue;
-      const id = newRecordId();
-      await store.putAnalysis({
-        id,
-        mechanismId: spec.mechanismId,
-        engineVersion: ENGINE_VERSION,
-        request,
-        result,
-        createdAt,
-      });
+      const id = await putNewAnalysis({ mechanismId: spec.mechanismId, request, result }, { createdAt });
       analyses.push({ variant: a.variant, role, analysisId: id });
     }
   }
@@ -146,22 +138,8 @@ export async function createAssessment(body: unknown): Promise<{
     warnings: generated.warnings,
   };
   // The instructor record (with the key) first: a student link is never live without its key.
-  await store.putRecord({
-    kind: ASSESSMENT_KIND,
-    id: instructorId,
-    engineVersion: ENGINE_VERSION,
-    body: assessment,
-    createdAt,
-    deleteHash: deletion.hash,
-  });
-  await store.putRecord({
-    kind: STUDENT_KIND,
-    id: studentId,
-    engineVersion: ENGINE_VERSION,
-    body: studentView(assessment),
-    createdAt,
-    deleteHash: deletion.hash,
-  });
+  await putNewRecord(ASSESSMENT_KIND, assessment, { id: instructorId, createdAt, deleteHash: deletion.hash });
+  await putNewRecord(STUDENT_KIND, studentView(assessment), { id: studentId, createdAt, deleteHash: deletion.hash });
   return {
     instructorId,
     studentId,
@@ -175,11 +153,7 @@ export async function createAssessment(body: unknown): Promise<{
 
 /** Deletes both links of an assessment (instructor id and its token). */
 export async function deleteAssessment(id: string, token: string | null): Promise<void> {
-  const life = liveOrThrow(
-    ID_PATTERN.test(id) ? await getStore().getRecord(ASSESSMENT_KIND, id) : null,
-    "assessment",
-    id,
-  );
+  const life = await liveRecord(ASSESSMENT_KIND, id, "assessment");
   const studentId = (life.body as InstructorAssessment).studentId;
   await deleteWithToken(
     [
@@ -197,13 +171,13 @@ export async function revokeStudentLink(studentId: string, token: string | null)
 }
 
 export async function getInstructorAssessment(id: string): Promise<InstructorAssessment> {
-  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(ASSESSMENT_KIND, id) : null, "assessment", id);
+  const r = await liveRecord(ASSESSMENT_KIND, id, "assessment");
   return r.body as InstructorAssessment;
 }
 
 /** Reads only the student record: the key is not in it. */
 export async function getStudentAssessment(id: string): Promise<StudentAssessment> {
-  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(STUDENT_KIND, id) : null, "student sheet", id);
+  const r = await liveRecord(STUDENT_KIND, id, "student sheet");
   return r.body as StudentAssessment;
 }
 

@@ -3,7 +3,7 @@
  * read under a size limit. Every error body is { error: { code, message, path } }.
  */
 import { EngineError, jsonParseMessage, MechanismError, safeExcerpt } from "../errors";
-import { JsonDepthScanner, jsonTooDeep, NESTING_DEFAULTS, type TooDeep } from "../mechanism/nestingDepth";
+import { JsonDepthScanner, NESTING_DEFAULTS, type TooDeep } from "../mechanism/nestingDepth";
 
 export class HttpError extends EngineError {
   constructor(
@@ -127,12 +127,7 @@ export async function readJsonBody(req: Request, maxBytes: number): Promise<unkn
   return parseScannedJson(Buffer.from(bytes).toString("utf8"));
 }
 
-/** JSON.parse after a linear nesting pre-scan; errors quote only a short, escaped excerpt. */
-export function parseJsonBody(text: string): unknown {
-  refuseDeepJson(text);
-  return parseScannedJson(text);
-}
-
+/** JSON.parse of a body already scanned for depth; errors quote only a short, escaped excerpt. */
 function parseScannedJson(text: string): unknown {
   try {
     return JSON.parse(text);
@@ -144,12 +139,6 @@ function parseScannedJson(text: string): unknown {
       "(body)",
     );
   }
-}
-
-/** 400 "too-deep" for a JSON body nested beyond NESTING_DEFAULTS.maxDepth, naming the line. */
-export function refuseDeepJson(text: string): void {
-  const deep = jsonTooDeep(text, NESTING_DEFAULTS.maxDepth);
-  if (deep) throw tooDeepBody(deep);
 }
 
 /** A chunk inspector for readBodyBytes that refuses a JSON body as soon as it nests too deeply. */
@@ -181,6 +170,16 @@ export function csvResponse(csv: string, filename: string): Response {
   return new Response(csv, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
+      "content-disposition": `attachment; filename="${filename}"`,
+    },
+  });
+}
+
+/** A JSON file to download: indented for people unless `indent` is 0 (large records). */
+export function jsonDownload(value: unknown, filename: string, indent = 2): Response {
+  return new Response(JSON.stringify(value, null, indent), {
+    headers: {
+      "content-type": "application/json",
       "content-disposition": `attachment; filename="${filename}"`,
     },
   });

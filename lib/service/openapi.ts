@@ -6,6 +6,7 @@
 import { z } from "zod";
 import packageJson from "../../package.json";
 import { assessmentPreviewSchema, assessmentSpecSchema } from "../assessment/specSchema";
+import { CONDITION_DEFAULTS as D } from "../atmosphere/condition";
 import { uploadSchema } from "../engine/check-upload";
 import { analysisRequestSchema, conditionSchema } from "../engine/request-schema";
 import { comparisonRequestSchema, storedSideSchema, sweepRequestSchema } from "../profiles/requestSchema";
@@ -239,16 +240,16 @@ const runPaths = {
 const CONDITION_PROSE: Prose = {
   T_K: { description: "default: U.S. Standard Atmosphere 1976" },
   p_hPa: { description: "default: U.S. Standard Atmosphere 1976" },
-  latitude_deg: { default: 45 },
-  date: { default: "2026-03-20", description: "YYYY-MM-DD" },
-  localSolarTime_h: { default: 12 },
+  latitude_deg: { default: D.latitude_deg },
+  date: { default: D.date, description: "YYYY-MM-DD" },
+  localSolarTime_h: { default: D.localSolarTime_h },
   zenith_deg: { description: "overrides latitude/date/time for the sun" },
-  mode: { default: "instantaneous" },
+  mode: { default: D.mode },
   held: { description: "mixing ratios by species" },
   poolTotals: { description: "mixing ratios of atoms by pool (Cly, Bry, NOy)" },
   J: { description: "fixed photolysis frequencies, s-1, by channel" },
-  jScale: { default: 1 },
-  ozone: { default: "held" },
+  jScale: { default: D.jScale },
+  ozone: { default: D.ozone },
   o3ColumnAbove_DU: {
     description: "overhead ozone column for the light, Dobson units; default from the climatology",
   },
@@ -256,7 +257,7 @@ const CONDITION_PROSE: Prose = {
     description: "sulfate aerosol surface area density for uptake reactions, um2 cm-3; default: background profile",
   },
   cloud: {
-    default: "none",
+    default: D.cloud,
     description:
       "polar stratospheric cloud: none, NAT, ice, or auto (ice below the frost point, Marti and Mauersberger 1993; NAT below the NAT existence temperature, Hanson and Mauersberger 1988, at the local H2O and NOy as HNO3)",
   },
@@ -264,11 +265,11 @@ const CONDITION_PROSE: Prose = {
     description: "surface area density of the cloud present, um2 cm-3 (NAT at most 100); default NAT 1, ice 200",
   },
   albedo: {
-    default: 0.3,
+    default: D.albedo,
     description: "Lambertian ground albedo for the scattered light (two-stream radiative transfer)",
   },
   aerosolOpticalDepth: {
-    default: 0,
+    default: D.aerosolOpticalDepth,
     description: "column aerosol optical depth at 550 nm for the light, spread like the background sulfate profile",
   },
 };

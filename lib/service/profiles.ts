@@ -22,7 +22,7 @@ import { parseComparisonRequest, parseSweepRequest } from "../profiles/requestSc
 import type { LevelBatchResult } from "../profiles/runLevelBatch";
 import type { SweepExecutor, SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
-import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { getStore, ID_PATTERN } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { liveOrThrow } from "./lifecycle";
 import { listMechanisms, mechanismSource } from "./mechanisms";
@@ -36,6 +36,7 @@ import {
 
 export type { ProfileRecordBody } from "./sweepCsvTables";
 
+import { liveRecord, putNewRecord, type RecordView, recordView } from "./records";
 import { keepWithinBudget } from "./retention";
 
 export const PROFILE_KIND = "profile";
@@ -101,7 +102,6 @@ export interface Deletable {
 }
 
 async function storeSweep(p: PreparedSweep, result: SweepResult, deleteHash?: string): Promise<string> {
-  const id = newRecordId();
   // the CSV text is kept once, as the parsed profile
   const request: SweepRequest =
     p.request.profile.kind === "csv"
@@ -109,15 +109,7 @@ async function storeSweep(p: PreparedSweep, result: SweepResult, deleteHash?: st
       : p.request;
   const body: ProfileRecordBody = { request, profile: p.profile, result };
   await keepWithinBudget();
-  await getStore().putRecord({
-    id,
-    kind: PROFILE_KIND,
-    engineVersion: ENGINE_VERSION,
-    body,
-    createdAt: new Date().toISOString(),
-    deleteHash,
-  });
-  return id;
+  return putNewRecord(PROFILE_KIND, body, { deleteHash });
 }
 
 /** Parses and checks a sweep request; throws InputError (400) before anything is queued. */
@@ -192,62 +184,27 @@ export async function comparisonJob(job: ComparisonRequest & Deletable, ctx: Job
     sweepIds: { a: sides[0].id, b: sides[1].id },
     engineVersion: ENGINE_VERSION,
   });
-  const id = newRecordId();
   const body: ComparisonRecordBody = {
     request: { ...input, a: { sweepId: sides[0].id }, b: { sweepId: sides[1].id } },
     result,
   };
-  await getStore().putRecord({
-    id,
-    kind: COMPARISON_KIND,
-    engineVersion: ENGINE_VERSION,
-    body,
-    createdAt: new Date().toISOString(),
-    deleteHash,
-  });
-  return { resultId: id, resultKind: COMPARISON_KIND };
+  return { resultId: await putNewRecord(COMPARISON_KIND, body, { deleteHash }), resultKind: COMPARISON_KIND };
 }
 
-export interface StoredProfileRecord {
-  id: string;
-  createdAt: string;
-  engineVersion: string;
-  currentEngineVersion: string;
-  body: ProfileRecordBody;
-}
+export type StoredProfileRecord = RecordView<ProfileRecordBody>;
 
 export async function getProfileRecord(id: string, path = "id"): Promise<StoredProfileRecord> {
   const found = ID_PATTERN.test(id) ? await getStore().getRecord(PROFILE_KIND, id) : null;
   if (path !== "id" && (!found || found.deletedAt)) {
     throw new InputError(path, `no stored profile sweep with id ${id}${found ? " (it was deleted)" : ""}`, "not-found");
   }
-  const r = liveOrThrow(found, "profile sweep", id);
-  return {
-    id: r.id,
-    createdAt: r.createdAt,
-    engineVersion: r.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    body: r.body as ProfileRecordBody,
-  };
+  return recordView(liveOrThrow(found, "profile sweep", id));
 }
 
-export interface StoredComparisonRecord {
-  id: string;
-  createdAt: string;
-  engineVersion: string;
-  currentEngineVersion: string;
-  body: ComparisonRecordBody;
-}
+export type StoredComparisonRecord = RecordView<ComparisonRecordBody>;
 
 export async function getComparisonRecord(id: string): Promise<StoredComparisonRecord> {
-  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(COMPARISON_KIND, id) : null, "comparison", id);
-  return {
-    id: r.id,
-    createdAt: r.createdAt,
-    engineVersion: r.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    body: r.body as ComparisonRecordBody,
-  };
+  return recordView(await liveRecord(COMPARISON_KIND, id, "comparison"));
 }
 
 /** GET /api/profiles: the profiles offered without an upload, each with its CSV. */

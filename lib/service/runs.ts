@@ -33,12 +33,12 @@ import {
   type StartSpec,
   type StartState,
 } from "../runs";
-import { getStore, ID_PATTERN, newRecordId } from "../store";
+import { getStore, ID_PATTERN } from "../store";
 import { getAnalysisRecord } from "./analyses";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { notFound } from "./http";
-import { liveOrThrow } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";
+import { liveRecord, putNewAnalysis, putNewRecord, type RecordView, recordView } from "./records";
 
 export const RUN_KIND = "run";
 /** Largest run body, bytes (a trajectory CSV of up to 1 MiB, with room). */
@@ -157,35 +157,14 @@ export async function runJob(input: RunRequest, ctx: JobContext) {
       elapsed_ms: performance.now() - t0,
     }),
   );
-  const id = newRecordId();
   const body: RunRecordBody = { request: input, result };
-  await getStore().putRecord({
-    id,
-    kind: RUN_KIND,
-    engineVersion: ENGINE_VERSION,
-    body,
-    createdAt: new Date().toISOString(),
-  });
-  return { resultId: id, resultKind: RUN_KIND };
+  return { resultId: await putNewRecord(RUN_KIND, body), resultKind: RUN_KIND };
 }
 
-export interface StoredRunRecord {
-  id: string;
-  createdAt: string;
-  engineVersion: string;
-  currentEngineVersion: string;
-  body: RunRecordBody;
-}
+export type StoredRunRecord = RecordView<RunRecordBody>;
 
 export async function getRunRecord(id: string): Promise<StoredRunRecord> {
-  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(RUN_KIND, id) : null, "run", id);
-  return {
-    id: r.id,
-    createdAt: r.createdAt,
-    engineVersion: r.engineVersion,
-    currentEngineVersion: ENGINE_VERSION,
-    body: r.body as RunRecordBody,
-  };
+  return recordView(await liveRecord(RUN_KIND, id, "run"));
 }
 
 const RUN_EXPORTS = {
@@ -266,14 +245,10 @@ export async function storeRunHour(id: string, hour: number): Promise<string> {
     ozone: "solved" as const,
   };
   try {
-    await getStore().putAnalysis({
-      id: analysisId,
-      mechanismId: request.mechanismId,
-      engineVersion: record.engineVersion,
-      request: { mechanismId: request.mechanismId, condition },
-      result,
-      createdAt: new Date().toISOString(),
-    });
+    await putNewAnalysis(
+      { mechanismId: request.mechanismId, request: { mechanismId: request.mechanismId, condition }, result },
+      { id: analysisId, engineVersion: record.engineVersion },
+    );
   } catch (e) {
     // opened twice at once: the other request stored it
     if (!(await getStore().getAnalysis(analysisId))) throw e;

@@ -19,9 +19,7 @@ import { compileSource, type MechanismSource } from "../engine/mechanism-source"
 import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
-import { ENGINE_VERSION } from "../engine/version";
 import type { JobContext } from "../jobs/types";
-import { getStore, ID_PATTERN, newRecordId } from "../store";
 import {
   finishMonteCarlo,
   type MonteCarloResult,
@@ -31,12 +29,13 @@ import {
   type SampleBatchResult,
   type SensitivityReport,
 } from "../uncertainty";
-import { notFound } from "./http";
 import { mechanismSource } from "./mechanisms";
 import { getProfileRecord } from "./profiles";
 import { type UncertaintyJobInput, uncertaintyJobSchema } from "./uncertaintyJobSchema";
 
 export type { UncertaintyJobInput };
+
+import { liveRecord, putNewAnalysis, putNewRecord } from "./records";
 
 export const UNCERTAINTY_PROFILE_KIND = "uncertainty-profile";
 export const MAX_UNCERTAINTY_BODY = 256 * 1024;
@@ -181,16 +180,7 @@ async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
       ctx.progress(done, total, done > 1 ? `${stage} (${done - 1} of ${samples})` : stage);
     },
   });
-  const id = newRecordId();
-  await getStore().putAnalysis({
-    id,
-    mechanismId: src.id,
-    engineVersion: ENGINE_VERSION,
-    request,
-    result: out,
-    createdAt: new Date().toISOString(),
-  });
-  return { resultId: id, resultKind: "analysis" };
+  return { resultId: await putNewAnalysis({ mechanismId: src.id, request, result: out }), resultKind: "analysis" };
 }
 
 /** Every converged level of a stored sweep, as analysisWithUncertainty; stores an uncertainty-profile record. */
@@ -253,15 +243,7 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
     bands: profileShareBands(results),
     elapsed_ms: performance.now() - t0,
   };
-  const id = newRecordId();
-  await getStore().putRecord({
-    id,
-    kind: UNCERTAINTY_PROFILE_KIND,
-    engineVersion: ENGINE_VERSION,
-    body,
-    createdAt: new Date().toISOString(),
-  });
-  return { resultId: id, resultKind: UNCERTAINTY_PROFILE_KIND };
+  return { resultId: await putNewRecord(UNCERTAINTY_PROFILE_KIND, body), resultKind: UNCERTAINTY_PROFILE_KIND };
 }
 
 /** The job handler (registered with the shared job back end in lib/service/jobs.ts). */
@@ -280,7 +262,6 @@ export async function validateUncertaintyJob(body: unknown): Promise<Uncertainty
 export async function getUncertaintyProfile(
   id: string,
 ): Promise<{ id: string; createdAt: string; body: UncertaintyProfileBody }> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(UNCERTAINTY_PROFILE_KIND, id) : null;
-  if (!r) throw notFound("uncertainty profile", id);
+  const r = await liveRecord(UNCERTAINTY_PROFILE_KIND, id, "uncertainty profile");
   return { id: r.id, createdAt: r.createdAt, body: r.body as UncertaintyProfileBody };
 }

@@ -9,12 +9,13 @@
  * project's own. Pure: positions depend on nothing but the family, so a
  * change of altitude changes widths and labels only. Units: px.
  */
+
+import { familyOf } from "../analysis/familyOf";
 import type { CatalyticCycle, CycleReport } from "../analysis/types";
 import { oklchToHex } from "./colorSpace";
-import { familyOf } from "./familyOf";
+import { equationView } from "./equationView";
 import { formatPercent } from "./formatNumber";
 import { intersects, type Rect, rectAround } from "./labelBox";
-import { parseEquation } from "./parseEquation";
 import type { MechanismView, Point } from "./types";
 
 export const CYCLE_MAP_DEFAULTS = {
@@ -161,7 +162,7 @@ export function cycleMap(
 export function loopFamilies(cycle: Pick<CatalyticCycle, "steps">, famOf: ReadonlyMap<string, string>): string[] {
   const touched = new Set<string>();
   for (const s of cycle.steps) {
-    const eq = parseEquation(s.equation);
+    const eq = equationView(s.equation);
     for (const t of [...eq.reactants, ...eq.products]) {
       const f = famOf.get(t.species);
       if (f && f in PLACES) touched.add(f);

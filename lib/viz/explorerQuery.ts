@@ -11,7 +11,7 @@
  * o3 (held | solved), total.<pool> and held.<species> (mixing ratio, mol/mol),
  * color (flux | ox), spectators (hide), cycle (cycle id), sel (element id).
  */
-import type { AnalysisMode, ConditionInput } from "../engine/types";
+import { CONDITION_DEFAULTS, type ConditionInput } from "../atmosphere/condition";
 import type { ColorMode } from "./types";
 
 export const EXPLORER_DEFAULTS = {
@@ -19,14 +19,11 @@ export const EXPLORER_DEFAULTS = {
   mechanismId: "reference",
   /** km; default 30 */
   altitude_km: 30,
-  /** °N; default 45 */
-  latitude_deg: 45,
-  /** default "2026-03-20" */
-  date: "2026-03-20",
-  /** h; default 12 */
-  localSolarTime_h: 12,
-  /** default "instantaneous" */
-  mode: "instantaneous" as AnalysisMode,
+  /** the condition's defaults of the fields the URL always carries (lib/atmosphere/condition.ts) */
+  latitude_deg: CONDITION_DEFAULTS.latitude_deg,
+  date: CONDITION_DEFAULTS.date,
+  localSolarTime_h: CONDITION_DEFAULTS.localSolarTime_h,
+  mode: CONDITION_DEFAULTS.mode,
 };
 
 export interface ExplorerView {

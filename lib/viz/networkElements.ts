@@ -14,13 +14,13 @@
 import type { AnalysisResult } from "../engine/types";
 import { chipWidth, frameTitleWidth } from "./chipWidth";
 import { divergingColor } from "./divergingColor";
+import { equationView } from "./equationView";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
 import { isolateText } from "./isolateText";
 import { stubWidth } from "./labelBox";
 import { logScale } from "./logScale";
 import { type NetworkLayout, netCoefficients } from "./networkLayout";
-import { parseEquation } from "./parseEquation";
 import { reactionOxValue } from "./reactionOxValue";
 import { sequentialColor } from "./sequentialColor";
 import { signedLogScale } from "./signedLogScale";
@@ -75,7 +75,7 @@ export function networkElements(
   if (options.onlyTouched)
     for (const r of mech.reactions)
       if (!options.visible || options.visible.has(r.id))
-        for (const t of [...parseEquation(r.equation).reactants, ...parseEquation(r.equation).products])
+        for (const t of [...equationView(r.equation).reactants, ...equationView(r.equation).products])
           touched.add(t.species);
   const shown = mech.species.filter(
     (s) => layout.species[s.id] && (o.showHeld || s.role === "solved") && (!options.onlyTouched || touched.has(s.id)),
@@ -167,7 +167,7 @@ export function networkElements(
       position: { x: pos.x, y: pos.y },
       classes: `reaction${active ? "" : " idle"}`,
     });
-    const net = netCoefficients(parseEquation(r.equation));
+    const net = netCoefficients(equationView(r.equation));
     const ends: { sp: string; node: string; c: number }[] = [];
     for (const [sp, c] of net) if (c !== 0 && shownIds.has(sp)) ends.push({ sp, node: speciesNodeId(sp), c });
     for (const stub of o.showHeld ? (layout.stubs[r.id] ?? []) : []) {

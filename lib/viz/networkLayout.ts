@@ -17,10 +17,11 @@
  * no two overlap. Units: px.
  */
 
+import { familyOf, familyRank } from "../analysis/familyOf";
 import { idRecord, ownValue } from "../idRecord";
 import { CHIP_HEIGHT_PX, chipWidth, frameTitleWidth } from "./chipWidth";
+import { equationView } from "./equationView";
 import { familyLabel } from "./familyLabel";
-import { familyOf, familyRank } from "./familyOf";
 import {
   grown,
   intersects,
@@ -34,9 +35,8 @@ import {
   STUB_HEIGHT_PX,
   stubWidth,
 } from "./labelBox";
-import { parseEquation } from "./parseEquation";
 import { isStubSpecies } from "./stubSpecies";
-import type { MechanismView, Point } from "./types";
+import type { EquationView, MechanismView, Point } from "./types";
 
 export const LAYOUT_DEFAULTS = {
   /** smallest horizontal distance between species in a block, px (wider for long labels); default 100 */
@@ -214,7 +214,7 @@ export function networkLayout(
   // a large mechanism looks less far for room near its species, so that laying it out stays quick
   const nearTries = mech.reactions.length > LARGE_REACTIONS ? NEAR_TRIES_LARGE : NEAR_TRIES;
   for (const rx of mech.reactions) {
-    const eq = parseEquation(rx.equation);
+    const eq = equationView(rx.equation);
     const touched = new Set([...eq.reactants, ...eq.products].map((t) => t.species));
     const ids = [...touched].filter((id) => species[id]);
     const net = netCoefficients(eq);
@@ -254,7 +254,7 @@ export function networkLayout(
 }
 
 /** Net coefficient of every species in a parsed equation (products positive). */
-export function netCoefficients(eq: ReturnType<typeof parseEquation>): Map<string, number> {
+export function netCoefficients(eq: EquationView): Map<string, number> {
   const net = new Map<string, number>();
   for (const t of eq.reactants) net.set(t.species, (net.get(t.species) ?? 0) - t.coef);
   for (const t of eq.products) net.set(t.species, (net.get(t.species) ?? 0) + t.coef);

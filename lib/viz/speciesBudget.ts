@@ -4,7 +4,7 @@
  * each with its share of the species' total production or loss.
  */
 import type { ReactionState } from "../solver/types";
-import { parseEquation } from "./parseEquation";
+import { equationView } from "./equationView";
 
 export interface SpeciesTerm {
   reactionId: string;
@@ -27,7 +27,7 @@ export function speciesBudget(speciesId: string, reactions: readonly ReactionSta
   const production: SpeciesTerm[] = [];
   const loss: SpeciesTerm[] = [];
   for (const r of reactions) {
-    const eq = parseEquation(r.equation);
+    const eq = equationView(r.equation);
     let c = 0;
     for (const t of eq.products) if (t.species === speciesId) c += t.coef;
     for (const t of eq.reactants) if (t.species === speciesId) c -= t.coef;

@@ -4,7 +4,7 @@
  * not solved. They take part in so many reactions that a single hub would
  * pull dozens of lines across the board.
  */
-import { familyOf } from "./familyOf";
+import { familyOf } from "../analysis/familyOf";
 import type { MechanismSpeciesView } from "./types";
 
 const ALWAYS = new Set(["O2", "N2"]);

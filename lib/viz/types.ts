@@ -3,6 +3,7 @@
  * plain data it hands to the canvas and the charts. Rates in molecules cm⁻³ s⁻¹.
  */
 import type { RateLaw, Uncertainty } from "../kinetics/types";
+import type { EquationTerm } from "../mechanism/parseEquation";
 import type { SpeciesRole } from "../mechanism/types";
 
 /** A species as GET /api/mechanisms/{id} lists it. */
@@ -48,13 +49,8 @@ export interface MechanismSummary {
   reactionCount: number;
 }
 
-/** A reaction side entry parsed from an equation: species id and coefficient. */
-export interface EquationTerm {
-  species: string;
-  coef: number;
-}
-
-export interface ParsedEquation {
+/** The species terms of an equation as drawn (lib/viz/equationView.ts); M is a flag, not a term. */
+export interface EquationView {
   reactants: EquationTerm[];
   products: EquationTerm[];
   photolysis: boolean;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { familyOf } from "@/lib/analysis/familyOf";
 import { cycleMap, loopFamilies } from "@/lib/viz/cycleMap";
 import { cycleMapSvg } from "@/lib/viz/cycleMapSvg";
-import { familyOf } from "@/lib/viz/familyOf";
 import { fixtureMechanism, fixtureResult } from "./fixture";
 
 // the fixture's cycles and shares are invented round values (test/viz/fixture.ts)

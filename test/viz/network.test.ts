@@ -1,12 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { CHIP_HEIGHT_PX, chipWidth } from "@/lib/viz/chipWidth";
 import { cycleHighlight } from "@/lib/viz/cycleHighlight";
-import { familyOf } from "@/lib/viz/familyOf";
+import { equationView } from "@/lib/viz/equationView";
 import { IDLE_COLOR, networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
-import { parseEquation } from "@/lib/viz/parseEquation";
 import type { EdgeData, GraphElement, GraphNode } from "@/lib/viz/types";
 import { fixtureMechanism, fixtureResult, scaledResult } from "./fixture";
 
@@ -17,45 +16,25 @@ const positions = (els: GraphElement[]) =>
     els.filter((e): e is GraphNode => e.group === "nodes" && !!e.position).map((e) => [e.data.id, e.position]),
   );
 
-describe("parseEquation", () => {
+describe("equationView", () => {
   it("reads coefficients and drops M and hv into flags", () => {
-    expect(parseEquation("2 ClO + M -> Cl2O2 + M")).toEqual({
+    expect(equationView("2 ClO + M -> Cl2O2 + M")).toEqual({
       reactants: [{ species: "ClO", coef: 2 }],
       products: [{ species: "Cl2O2", coef: 1 }],
       photolysis: false,
       thirdBody: true,
     });
-    const j = parseEquation("O3 + hv -> O(1D) + O2");
+    const j = equationView("O3 + hv -> O(1D) + O2");
     expect(j.photolysis).toBe(true);
     expect(j.products.map((t) => t.species)).toEqual(["O(1D)", "O2"]);
   });
 
   it("adds up a species written twice on one side", () => {
-    expect(parseEquation("O + O -> O2").reactants).toEqual([{ species: "O", coef: 2 }]);
+    expect(equationView("O + O -> O2").reactants).toEqual([{ species: "O", coef: 2 }]);
   });
 
   it("throws if there is no arrow", () => {
-    expect(() => parseEquation("O + O3")).toThrow(/no arrow/);
-  });
-});
-
-describe("familyOf", () => {
-  it("uses the mechanism's group when there is one, in canonical spelling", () => {
-    expect(familyOf({ role: "solved", group: "clox", atoms: { Cl: 1 } })).toBe("ClOx");
-    expect(familyOf({ role: "solved", group: "organic", atoms: { C: 1 } })).toBe("organic");
-  });
-
-  it("falls back to the atoms: halogens first, mixed radicals are reservoirs", () => {
-    expect(familyOf({ role: "solved", atoms: { Cl: 1, O: 1 } })).toBe("ClOx");
-    expect(familyOf({ role: "solved", atoms: { Br: 1, Cl: 1 } })).toBe("BrOx");
-    expect(familyOf({ role: "solved", atoms: { Cl: 1, O: 3, N: 1 } })).toBe("reservoir");
-    expect(familyOf({ role: "solved", atoms: { H: 1, N: 1, O: 3 } })).toBe("reservoir");
-    expect(familyOf({ role: "solved", atoms: { O: 3 } })).toBe("Ox");
-    expect(familyOf({ role: "solved", atoms: { H: 1, O: 2 } })).toBe("HOx");
-  });
-
-  it("puts held species without a group among the held", () => {
-    expect(familyOf({ role: "held", atoms: { O: 2 } })).toBe("held");
+    expect(() => equationView("O + O3")).toThrow(/no arrow/);
   });
 });
 

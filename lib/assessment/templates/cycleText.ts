@@ -3,6 +3,7 @@
  * its steps in the mechanism's reaction order (never by rate, which would
  * give the rate-limiting step away), and letter the choices.
  */
+import { familyRank } from "../../analysis/familyOf";
 import type { CatalyticCycle } from "../../analysis/types";
 import type { AnalysisResult } from "../../engine/types";
 import type { Choice } from "../types";
@@ -41,19 +42,14 @@ export function lettered(items: { value: string; text: string }[]): Choice[] {
   return items.map((it, i) => ({ letter: LETTERS[i], value: it.value, text: it.text }));
 }
 
-/** Canonical order of the families on a sheet; coupled and unknown ones follow alphabetically. */
-const FAMILY_ORDER = ["Ox", "HOx", "NOx", "ClOx", "BrOx"];
-
 /** The budget's bucket for loss in pathways below the threshold: not a family a student can name. */
 export const UNASSIGNED = "unassigned";
 
-/** The families a student may name, in the canonical order; the unassigned bucket left out. */
+/** The families a student may name, in display order (coupled ones after, by name); the unassigned bucket left out. */
 export function sortFamilies(families: Iterable<string>): string[] {
-  const rank = (f: string) => {
-    const i = FAMILY_ORDER.indexOf(f);
-    return i < 0 ? FAMILY_ORDER.length : i;
-  };
-  return [...new Set(families)].filter((f) => f !== UNASSIGNED).sort((a, b) => rank(a) - rank(b) || a.localeCompare(b));
+  return [...new Set(families)]
+    .filter((f) => f !== UNASSIGNED)
+    .sort((a, b) => familyRank(a) - familyRank(b) || a.localeCompare(b));
 }
 
 export function familyText(f: string): string {

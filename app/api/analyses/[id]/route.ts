@@ -1,5 +1,5 @@
 import { deleteAnalysis, getAnalysisRecord, pinAnalysis } from "@/lib/service/analyses";
-import { respond } from "@/lib/service/http";
+import { jsonDownload, respond } from "@/lib/service/http";
 import { deletionTokenOf } from "@/lib/service/lifecycle";
 
 export const dynamic = "force-dynamic";
@@ -11,14 +11,7 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
     const json = id.endsWith(".json");
     const record = await getAnalysisRecord(json ? id.slice(0, -5) : id);
     if (json) await pinAnalysis(record.id);
-    return json
-      ? new Response(JSON.stringify(record, null, 2), {
-          headers: {
-            "content-type": "application/json",
-            "content-disposition": `attachment; filename="analysis-${record.id}.json"`,
-          },
-        })
-      : Response.json(record);
+    return json ? jsonDownload(record, `analysis-${record.id}.json`) : Response.json(record);
   });
 }
 

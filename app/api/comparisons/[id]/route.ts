@@ -1,4 +1,4 @@
-import { respond } from "@/lib/service/http";
+import { jsonDownload, respond } from "@/lib/service/http";
 import { deleteSweepRecord } from "@/lib/service/jobs";
 import { deletionTokenOf } from "@/lib/service/lifecycle";
 import { getComparisonRecord } from "@/lib/service/profiles";
@@ -10,14 +10,7 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
   return respond(async () => {
     const json = id.endsWith(".json");
     const record = await getComparisonRecord(json ? id.slice(0, -5) : id);
-    return json
-      ? new Response(JSON.stringify(record, null, 2), {
-          headers: {
-            "content-type": "application/json",
-            "content-disposition": `attachment; filename="comparison-${record.id}.json"`,
-          },
-        })
-      : Response.json(record);
+    return json ? jsonDownload(record, `comparison-${record.id}.json`) : Response.json(record);
   });
 }
 

@@ -1,4 +1,4 @@
-import { respond } from "@/lib/service/http";
+import { jsonDownload, respond } from "@/lib/service/http";
 import { deleteSweepRecord } from "@/lib/service/jobs";
 import { deletionTokenOf } from "@/lib/service/lifecycle";
 import { getProfileRecord } from "@/lib/service/profiles";
@@ -11,14 +11,7 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
     // "/api/profiles/{id}.json" arrives here with the suffix: the full JSON download.
     const json = id.endsWith(".json");
     const record = await getProfileRecord(json ? id.slice(0, -5) : id);
-    return json
-      ? new Response(JSON.stringify(record, null, 2), {
-          headers: {
-            "content-type": "application/json",
-            "content-disposition": `attachment; filename="profile-${record.id}.json"`,
-          },
-        })
-      : Response.json(record);
+    return json ? jsonDownload(record, `profile-${record.id}.json`) : Response.json(record);
   });
 }
 

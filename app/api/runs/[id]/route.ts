@@ -1,4 +1,4 @@
-import { respond } from "@/lib/service/http";
+import { jsonDownload, respond } from "@/lib/service/http";
 import { getRunRecord } from "@/lib/service/runs";
 
 export const dynamic = "force-dynamic";
@@ -9,13 +9,6 @@ export async function GET(_req: Request, ctx: { params: Promise<{ id: string }> 
     // "/api/runs/{id}.json" arrives here with the suffix: the full JSON download.
     const json = id.endsWith(".json");
     const record = await getRunRecord(json ? id.slice(0, -5) : id);
-    return json
-      ? new Response(JSON.stringify(record), {
-          headers: {
-            "content-type": "application/json",
-            "content-disposition": `attachment; filename="run-${record.id}.json"`,
-          },
-        })
-      : Response.json(record);
+    return json ? jsonDownload(record, `run-${record.id}.json`, 0) : Response.json(record);
   });
 }

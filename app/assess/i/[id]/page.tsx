@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { CopyLink, MarkingPanel, PrintButton } from "@/components/assessment";
+import { MarkingPanel, PrintButton } from "@/components/assessment";
 import { DeletionTokenNote } from "@/components/DeletionTokenNote";
+import { CopyLink } from "@/components/ui/CopyLink";
 import { formatTolerance } from "@/lib/assessment";
 import type { InstructorAssessment } from "@/lib/assessment/types";
 import { CAUTION_LINE } from "@/lib/caution";
@@ -50,11 +51,13 @@ export default async function InstructorPage({ params }: { params: Promise<{ id:
         aria-label="Links"
       >
         <CopyLink
+          display="link"
           label="Student link (sheets only, no answers)"
           path={studentPath(a.studentId)}
           note="Give this to students, or open it to print the sheets. It cannot reach the key."
         />
         <CopyLink
+          display="link"
           label="Instructor link (this page, with the key)"
           path={`/assess/i/${a.instructorId}`}
           note="Keep it private: anyone with this link sees the answers. It is the only way back to the key."

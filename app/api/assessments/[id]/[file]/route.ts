@@ -1,7 +1,7 @@
 import { keyJson } from "@/lib/assessment";
 import { assessmentCsvExport, assessmentQtiExport, getInstructorAssessment } from "@/lib/service/assessments";
 import { csvExportOptions } from "@/lib/service/csvProvenance";
-import { csvResponse, notFound, respond } from "@/lib/service/http";
+import { csvResponse, jsonDownload, notFound, respond } from "@/lib/service/http";
 
 export const dynamic = "force-dynamic";
 
@@ -11,12 +11,7 @@ export async function GET(req: Request, ctx: { params: Promise<{ id: string; fil
   return respond(async () => {
     if (file === "key.json") {
       const a = await getInstructorAssessment(id);
-      return new Response(JSON.stringify(keyJson(a), null, 2), {
-        headers: {
-          "content-type": "application/json",
-          "content-disposition": `attachment; filename="assessment-${id}-key.json"`,
-        },
-      });
+      return jsonDownload(keyJson(a), `assessment-${id}-key.json`);
     }
     if (file === "qti.zip") {
       const q = await assessmentQtiExport(id);

@@ -4,13 +4,25 @@
  * species carrying a halogen is read with its halogen family; species mixing
  * two of H, N, Cl, Br are reservoirs). Common practice in stratospheric
  * chemistry texts; the exact rule is this project's.
+ *
+ * The display order (Ox, HOx, NOx, ClOx, BrOx, then the other groups) is for
+ * reading: the network board, profile charts, assessment sheets. Cycle names
+ * join their catalyst families in the other order, `FAMILY_ORDER` of
+ * carrierFamilies.ts, which is part of the engine's results.
  */
 
 import { ownValue } from "../idRecord";
-import type { MechanismSpeciesView } from "./types";
+import type { SpeciesRole } from "../mechanism/types";
+
+/** What the family of a species is read from (a compiled species or its view). */
+export interface FamilySpecies {
+  role: SpeciesRole;
+  group?: string;
+  atoms: Readonly<Record<string, number>>;
+}
 
 /** Families in display order; unknown groups follow, sorted by name. */
-export const FAMILY_ORDER = [
+export const DISPLAY_FAMILY_ORDER = [
   "Ox",
   "HOx",
   "NOx",
@@ -46,7 +58,7 @@ const ALIASES: Record<string, string> = {
   other: "other",
 };
 
-export function familyOf(sp: Pick<MechanismSpeciesView, "role" | "group" | "atoms">): string {
+export function familyOf(sp: FamilySpecies): string {
   if (sp.group) return ownValue(ALIASES, sp.group.toLowerCase()) ?? sp.group;
   if (sp.role !== "solved") return "held";
   const a = sp.atoms;
@@ -61,8 +73,8 @@ export function familyOf(sp: Pick<MechanismSpeciesView, "role" | "group" | "atom
   return "other";
 }
 
-/** Sort key: index in FAMILY_ORDER, unknown families after in name order. */
+/** Sort key: index in DISPLAY_FAMILY_ORDER; unknown families share the last rank (sort them by name). */
 export function familyRank(family: string): number {
-  const i = (FAMILY_ORDER as readonly string[]).indexOf(family);
-  return i >= 0 ? i : FAMILY_ORDER.length;
+  const i = (DISPLAY_FAMILY_ORDER as readonly string[]).indexOf(family);
+  return i >= 0 ? i : DISPLAY_FAMILY_ORDER.length;
 }
