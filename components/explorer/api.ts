@@ -71,14 +71,20 @@ export const uploadMechanism = (text: string) =>
     body: JSON.stringify({ text, format: /^\s*[{[]/.test(text) ? "json" : "yaml" }),
   });
 
-/** An explorer recompute is a draft: it expires unless its permalink is copied, opened or exported. */
-export const postAnalysis = (request: AnalysisRequest, signal?: AbortSignal) =>
-  call<{ id: string; result: AnalysisResult }>("/api/analyses?draft=1", {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify(request),
-    signal,
-  });
+const jsonPost = (request: AnalysisRequest, signal?: AbortSignal): RequestInit => ({
+  method: "POST",
+  headers: { "content-type": "application/json" },
+  body: JSON.stringify(request),
+  signal,
+});
+
+/** An explorer recompute: computed, not stored. */
+export const previewAnalysis = (request: AnalysisRequest, signal?: AbortSignal) =>
+  call<{ result: AnalysisResult }>("/api/analyses/preview", jsonPost(request, signal));
+
+/** Stores the analysis on screen for good (its permalink or an export was asked for): the same request, the same numbers. */
+export const storeAnalysis = (request: AnalysisRequest) =>
+  call<{ id: string; result: AnalysisResult }>("/api/analyses", jsonPost(request));
 
 /** Keeps an analysis for good (its permalink was copied). */
 export const pinAnalysis = (id: string) =>

@@ -459,6 +459,20 @@ export const openApiDocument = {
         },
       },
     },
+    "/api/analyses/preview": {
+      post: {
+        summary:
+          "Compute an analysis and store nothing (the explorer's recompute on every slider step); POST /api/analyses with the same request stores the same result for a permalink",
+        requestBody: {
+          required: true,
+          content: { "application/json": { schema: { $ref: "#/components/schemas/AnalysisRequest" } } },
+        },
+        responses: {
+          200: { description: "{ result }: the result POST /api/analyses would store, without id or deletion token" },
+          ...errors(400, 404, 410, 413, 422, 429),
+        },
+      },
+    },
     "/api/analyses/{id}": {
       get: {
         summary: "A stored analysis with its request and engine version",
