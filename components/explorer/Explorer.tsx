@@ -359,7 +359,13 @@ export function Explorer(props: Props) {
             ) : null}
           </div>
           <LegendCard legend={legend} empty={!result} />
-          <ExportBar analysisId={analysis.id} onStore={analysis.store} onPng={onPng} onSvg={onSvg} busy={analysis.loading} />
+          <ExportBar
+            analysisId={analysis.id}
+            onStore={analysis.store}
+            onPng={onPng}
+            onSvg={onSvg}
+            busy={analysis.loading}
+          />
         </div>
 
         <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">

@@ -1,5 +1,5 @@
-import Database from "better-sqlite3";
 import { expect, test } from "@playwright/test";
+import Database from "better-sqlite3";
 
 // The explorer's recompute: POST /api/analyses/preview computes and stores nothing; POST /api/analyses with the
 // same request stores the same result (the engine is deterministic), which its permalink then shows unchanged.
@@ -36,9 +36,7 @@ test.describe("the analysis preview", () => {
     expect(storedAnalyses()).toBe(before);
   });
 
-  test("and the stored analysis of the same request, and its permalink, give the same numbers", async ({
-    request,
-  }) => {
+  test("and the stored analysis of the same request, and its permalink, give the same numbers", async ({ request }) => {
     const preview = (await (await request.post("/api/analyses/preview", { data: request_ })).json()).result;
     const created = await request.post("/api/analyses", { data: request_ });
     expect(created.status()).toBe(201);
@@ -58,9 +56,13 @@ test.describe("the analysis preview", () => {
     expect(res.status()).toBe(400);
     const stored = await request.post("/api/analyses", { data: bad });
     expect(await res.json()).toEqual(await stored.json());
-    expect((await request.post("/api/analyses/preview", { data: { mechanismId: "nope", condition: {} } })).status()).toBe(
-      404,
-    );
+    expect(
+      (
+        await request.post("/api/analyses/preview", {
+          data: { mechanismId: "no-such-mechanism", condition: { altitude_km: 30 } },
+        })
+      ).status(),
+    ).toBe(404);
   });
 
   test("is rate-limited like the other POST routes (429 with Retry-After)", async ({ baseURL }) => {
@@ -73,7 +75,8 @@ test.describe("the analysis preview", () => {
       });
     const statuses: number[] = [];
     // 600 a minute by default (OZONE_RATE_LIMIT); an empty body is a 400 after it has been counted
-    for (let i = 0; i < 600; i += 20) statuses.push(...(await Promise.all(Array.from({ length: 20 }, post))).map((r) => r.status));
+    for (let i = 0; i < 600; i += 20)
+      statuses.push(...(await Promise.all(Array.from({ length: 20 }, post))).map((r) => r.status));
     expect(new Set(statuses)).toEqual(new Set([400]));
     const over = await post();
     expect(over.status).toBe(429);
