@@ -38,7 +38,7 @@ await page.waitForFunction(
 if (process.env.PATCH) await page.evaluate((p) => {
   const cy = document.querySelector('[data-testid="network"]')._cyreg.cy;
   const r = cy.renderer();
-  if (p.includes("nolayers")) r.drawLayeredElements = r.drawCachedElements;
+  if (p.includes("layers") && !p.includes("nolayers")) r.drawLayeredElements = Object.getPrototypeOf(r).drawLayeredElements;
   if (p.includes("norstate")) history.replaceState = () => {};
   window.__cy = cy;
 }, process.env.PATCH);
