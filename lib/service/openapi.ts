@@ -444,7 +444,7 @@ export const openApiDocument = {
     "/api/analyses": {
       post: {
         summary:
-          "Compute and store an analysis. With ?draft=1 (the explorer) it is a draft, which expires after OZONE_DRAFT_TTL_DAYS unless its permalink is opened, copied (POST …/pin) or exported",
+          "Compute and store an analysis (the explorer stores one this way when its permalink or a table is asked for). With ?draft=1 it is a draft, which expires after OZONE_DRAFT_TTL_DAYS unless its permalink is opened, copied (POST …/pin) or exported",
         parameters: [{ name: "draft", in: "query", required: false, schema: { enum: ["1"] } }],
         requestBody: {
           required: true,
