@@ -2,8 +2,9 @@
 /**
  * Recomputes the analysis whenever the request changes, through the preview
  * route, which stores nothing. A condition seen recently is repainted from
- * the client's cache at once. Otherwise the hook waits a moment for the input
- * to settle, cancels the request still in flight (AbortController), and
+ * the client's cache at once. Otherwise the hook asks at once after a quiet
+ * spell, or waits a moment for a dragged input to settle, cancels the
+ * request still in flight (AbortController), and
  * paints only the answer to the newest request, keeping the previous result
  * on screen until it arrives so that nothing jumps. `store()` keeps the
  * analysis on screen for good (a permalink or an export was asked for): the
@@ -15,7 +16,11 @@ import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 import { recentCache } from "@/lib/viz/recentCache";
 import { ApiError, previewAnalysis, storeAnalysis } from "./api";
 
-/** Pause after the last change before asking the server, ms: one keyboard step of a slider is sent at once. */
+/**
+ * Pause after a change before asking the server, ms, when the change before it
+ * came less than this long ago (a slider being dragged); a change after a
+ * quiet spell (a key step, a typed value) is sent at once.
+ */
 export const ANALYSIS_DEBOUNCE_MS = 40;
 
 export interface AnalysisState {
@@ -45,6 +50,7 @@ export function useAnalysis(
   const key = request ? JSON.stringify(request) : null;
   const shownKey = useRef<string | null>(initial ? JSON.stringify(initial.request) : null);
   const cache = useRef(recentCache<Computed>());
+  const lastChange = useRef(Number.NEGATIVE_INFINITY);
   if (initial && !cache.current.get(JSON.stringify(initial.request)))
     cache.current.set(JSON.stringify(initial.request), { id: initial.id, result: initial.result });
 
@@ -62,6 +68,9 @@ export function useAnalysis(
     }
     const ctrl = new AbortController();
     setState((s) => ({ ...s, loading: true }));
+    const now = performance.now();
+    const wait = now - lastChange.current < ANALYSIS_DEBOUNCE_MS ? ANALYSIS_DEBOUNCE_MS : 0;
+    lastChange.current = now;
     const timer = setTimeout(() => {
       previewAnalysis(JSON.parse(key) as AnalysisRequest, ctrl.signal)
         .then((out) => {
@@ -76,7 +85,7 @@ export function useAnalysis(
           const err = e instanceof ApiError ? e : new ApiError(0, "client", String((e as Error).message ?? e));
           setState((s) => ({ ...s, loading: false, error: err }));
         });
-    }, ANALYSIS_DEBOUNCE_MS);
+    }, wait);
     return () => {
       clearTimeout(timer);
       ctrl.abort();
