@@ -1,7 +1,9 @@
 /**
- * Latency of POST /api/analyses (reference mechanism) against a really
- * started production server, with 1 and 8 concurrent clients. Needs a build
- * (`npm run build`); without one the suite reports nothing.
+ * Latency of POST /api/analyses (computed and stored) and of POST
+ * /api/analyses/preview (computed only: the explorer's recompute) for the
+ * reference mechanism against a really started production server, with 1 and
+ * 8 concurrent clients. Needs a build (`npm run build`); without one the
+ * suite reports nothing. Port: BENCH_PORT (default 3291).
  */
 import { type ChildProcess, spawn } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
@@ -9,23 +11,27 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import type { BenchCase } from "../types";
 
-const PORT = 3291;
+const PORT = Number(process.env.BENCH_PORT ?? 3291);
 const base = `http://127.0.0.1:${PORT}`;
 let server: ChildProcess | null = null;
 let dataDir = "";
 let altitude = 20;
 
-function analysis(): Promise<number> {
+/** One analysis at the next altitude; `path` is the storing route or the preview. */
+function analysis(path = "/api/analyses"): Promise<number> {
   altitude = altitude >= 50 ? 20 : altitude + 1;
-  return fetch(`${base}/api/analyses`, {
+  return fetch(`${base}${path}`, {
     method: "POST",
     headers: { "content-type": "application/json" },
     body: JSON.stringify({ mechanismId: "reference", condition: { altitude_km: altitude, zenith_deg: 40 } }),
-  }).then((r) => {
-    if (r.status !== 201) throw new Error(`status ${r.status}`);
+  }).then(async (r) => {
+    if (!r.ok) throw new Error(`status ${r.status}`);
+    await r.arrayBuffer();
     return r.status;
   });
 }
+
+const preview = () => analysis("/api/analyses/preview");
 
 export async function setup(): Promise<BenchCase[]> {
   const dist = process.env.NEXT_DIST_DIR ?? ".next";
@@ -48,11 +54,18 @@ export async function setup(): Promise<BenchCase[]> {
     }
   }
   return [
-    { name: "POST /api/analyses, 1 client (per request)", run: analysis, iterations: 40 },
+    { name: "POST /api/analyses, 1 client (per request)", run: () => analysis(), iterations: 40 },
     {
       name: "POST /api/analyses, 8 concurrent clients (per batch of 8)",
-      run: () => Promise.all(Array.from({ length: 8 }, analysis)),
+      run: () => Promise.all(Array.from({ length: 8 }, () => analysis())),
       iterations: 10,
+      note: "latency of the slowest of 8 simultaneous requests",
+    },
+    { name: "POST /api/analyses/preview, 1 client (per request)", run: preview, iterations: 40 },
+    {
+      name: "POST /api/analyses/preview, 8 concurrent clients (per batch of 8)",
+      run: () => Promise.all(Array.from({ length: 8 }, preview)),
+      iterations: 20,
       note: "latency of the slowest of 8 simultaneous requests",
     },
   ];

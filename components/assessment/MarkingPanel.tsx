@@ -137,7 +137,7 @@ export function MarkingPanel({ instructorId, questions }: { instructorId: string
                   {s.cells.map((c) => (
                     <td
                       key={c.question}
-                      className={`py-1 pr-3 ${c.status === "correct" ? "text-emerald-800" : c.status === "blank" ? "text-stone-400" : "text-red-800"}`}
+                      className={`py-1 pr-3 ${c.status === "correct" ? "text-emerald-800" : c.status === "blank" ? "text-stone-500" : "text-red-800"}`}
                       title={`${c.given || "(blank)"}: ${c.status}${c.note ? ` — ${c.note}` : ""}`}
                     >
                       {c.mark} <span className="sr-only">({c.status})</span>

@@ -73,7 +73,7 @@ function BudgetChart({ budget }: { budget: OxBudget }) {
             <tr aria-hidden>
               <td />
               <td className="p-0">
-                <div className="relative h-3.5 text-[10px] text-stone-400">
+                <div className="relative h-3.5 text-[10px] text-stone-500">
                   {s.ticks.map((t, i) => (
                     <span
                       key={t.x}

@@ -160,7 +160,7 @@ export function ConditionsPanel(p: Props) {
               className="mt-1 w-full accent-stone-800"
               aria-valuetext={`${c.altitude_km} kilometres`}
             />
-            <div className="flex justify-between text-[10px] text-stone-400" aria-hidden>
+            <div className="flex justify-between text-[10px] text-stone-500" aria-hidden>
               <span>0</span>
               <span>15</span>
               <span>30</span>

@@ -103,7 +103,14 @@ export function CycleMapCard({ report, mechanism, selected, onSelect, fileStem, 
                 >
                   <title>{`${l.netEquation} (${l.family}): ${formatPercent(l.share)}`}</title>
                   {ring ? (
-                    <path d={l.path} fill="none" stroke="#1f2328" strokeWidth={l.width + 5} strokeLinejoin="round" />
+                    <path
+                      data-focus-ring
+                      d={l.path}
+                      fill="none"
+                      stroke="#1f2328"
+                      strokeWidth={l.width + 5}
+                      strokeLinejoin="round"
+                    />
                   ) : null}
                   <path
                     d={l.path}

@@ -108,7 +108,7 @@ function CycleRow({
       >
         <span className="flex items-baseline justify-between gap-2">
           <span className="font-medium text-stone-900">
-            <span className="mr-1 text-stone-400">{rank}.</span>
+            <span className="mr-1 text-stone-500">{rank}.</span>
             <span className="mr-1.5 rounded bg-stone-200 px-1 py-px text-[10px] font-semibold text-stone-700">
               {c.family}
             </span>

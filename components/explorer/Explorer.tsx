@@ -15,7 +15,7 @@ import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkEleme
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
-import { DETAIL_DEFAULTS, reactionDetail } from "@/lib/viz/reactionDetail";
+import { reactionDetail } from "@/lib/viz/reactionDetail";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { DeletionTokenNote } from "../DeletionTokenNote";
 import type { ApiError, Problem } from "../ui/apiClient";
@@ -56,12 +56,14 @@ interface Props {
 
 const STYLE = networkStyle();
 
+/** Pause after the last change before the address is rewritten, ms. */
+const URL_SETTLE_MS = 300;
+
 export function Explorer(props: Props) {
   const [mechanisms, setMechanisms] = useState(props.mechanisms);
   const [mechanismId, setMechanismId] = useState(props.mechanismId);
   const [condition, setCondition] = useState(props.condition);
   const [view, setView] = useState(props.view);
-  const [detailLimit, setDetailLimit] = useState(DETAIL_DEFAULTS.limit);
   const [cache, setCache] = useState<Record<string, MechanismView>>(
     props.initialMechanism ? { [props.initialMechanism.id]: props.initialMechanism } : {},
   );
@@ -108,11 +110,14 @@ export function Explorer(props: Props) {
   const result = analysis.result && analysis.result.mechanism.id === mechanismId ? analysis.result : null;
   const showingStored = !!props.stored && analysis.id === props.stored.id;
 
-  // the address always reproduces what is on screen
+  // the address reproduces what is on screen; it is written once the input settles, because each
+  // replaceState costs Chromium a same-document navigation (and a fetch of the icon) on the slider's path
   useEffect(() => {
     if (!touched.current) return;
     const qs = explorerQueryString({ mechanismId, condition, view });
-    window.history.replaceState(window.history.state, "", `/explore?${qs}`);
+    const write = () => window.history.replaceState(window.history.state, "", `/explore?${qs}`);
+    const timer = setTimeout(write, URL_SETTLE_MS);
+    return () => clearTimeout(timer);
   }, [mechanismId, condition, view]);
 
   const touch = useCallback(<T,>(fn: (v: T) => void) => {
@@ -137,12 +142,12 @@ export function Explorer(props: Props) {
     () =>
       mechanism
         ? reactionDetail(mechanism, result, {
-            limit: detailLimit,
+            limit: view.detail,
             colorMode: view.colorMode,
             keep: keepKey ? keepKey.split(" ") : [],
           })
         : null,
-    [mechanism, result, detailLimit, view.colorMode, keepKey],
+    [mechanism, result, view.detail, view.colorMode, keepKey],
   );
   const elements = useMemo(
     () =>
@@ -232,8 +237,8 @@ export function Explorer(props: Props) {
             onColorMode={(colorMode) => setViewPart({ colorMode })}
             showHeld={view.showHeld}
             onShowHeld={(showHeld) => setViewPart({ showHeld })}
-            detailLimit={detailLimit}
-            onDetailLimit={setDetailLimit}
+            detailLimit={view.detail}
+            onDetailLimit={(detail) => setViewPart({ detail })}
             detail={detail}
             largeMechanism={!!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES}
             onFit={() => net.current?.fit()}
@@ -360,7 +365,13 @@ export function Explorer(props: Props) {
             ) : null}
           </div>
           <LegendCard legend={legend} empty={!result} />
-          <ExportBar analysisId={analysis.id} onPng={onPng} onSvg={onSvg} busy={analysis.loading} />
+          <ExportBar
+            analysisId={analysis.id}
+            onStore={analysis.store}
+            onPng={onPng}
+            onSvg={onSvg}
+            busy={analysis.loading}
+          />
         </div>
 
         <div className="grid min-h-0 gap-2 md:col-span-2 md:grid-cols-2 md:items-start lg:col-span-1 lg:flex lg:flex-col lg:items-stretch">

@@ -93,6 +93,7 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
         autoungrabify: false,
         selectionType: "single",
       });
+      drawWithoutLayers(cy);
       cy.fit(undefined, 24);
       cy.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
       cy.on("tap", (ev) => {
@@ -234,6 +235,20 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
       cy.getElementById(selected).select();
     }
   });
+}
+
+/**
+ * Cytoscape's canvas renderer keeps the whole graph in a few layer textures,
+ * and any change to any element invalidates every layer (its source says so),
+ * so each slider step redrew the board into new large textures in software.
+ * A board of a few hundred elements draws faster straight from each
+ * element's own cached texture, which is the renderer's own fallback path.
+ * Private API: if a cytoscape release renames either method, nothing changes.
+ */
+function drawWithoutLayers(cy: Core): void {
+  const r = (cy as unknown as { renderer?: () => Record<string, unknown> }).renderer?.();
+  if (r && typeof r.drawCachedElements === "function" && typeof r.drawLayeredElements === "function")
+    r.drawLayeredElements = r.drawCachedElements;
 }
 
 function sameClasses(have: string[], want: string): boolean {

@@ -120,7 +120,7 @@ export function UploadBox({ onUploaded, onClose }: Props) {
               return (
                 <li key={n} data-line={n} data-problem={here ? "true" : undefined} className={here ? "bg-red-50" : ""}>
                   <div className="flex">
-                    <span className="w-8 shrink-0 select-none pr-1.5 text-right text-stone-400">{n}</span>
+                    <span className="w-8 shrink-0 select-none pr-1.5 text-right text-stone-500">{n}</span>
                     <span className="whitespace-pre">{ln || " "}</span>
                   </div>
                   {here?.map((p) => (

@@ -14,9 +14,13 @@ export const uploadMechanism = (text: string) =>
     format: /^\s*[{[]/.test(text) ? "json" : "yaml",
   });
 
-/** An explorer recompute is a draft: it expires unless its permalink is copied, opened or exported. */
-export const postAnalysis = (request: AnalysisRequest, signal?: AbortSignal) =>
-  postJson<{ id: string; result: AnalysisResult }>("/api/analyses?draft=1", request, signal);
+/** An explorer recompute: computed, not stored. */
+export const previewAnalysis = (request: AnalysisRequest, signal?: AbortSignal) =>
+  postJson<{ result: AnalysisResult }>("/api/analyses/preview", request, signal);
+
+/** Stores the analysis on screen for good (its permalink or an export was asked for): the same request, the same numbers. */
+export const storeAnalysis = (request: AnalysisRequest) =>
+  postJson<{ id: string; result: AnalysisResult }>("/api/analyses", request);
 
 /** Keeps an analysis for good (its permalink was copied). */
 export const pinAnalysis = (id: string) =>

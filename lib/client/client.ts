@@ -133,6 +133,10 @@ export class OzoneCyclesClient {
   createAnalysis(request: AnalysisRequest) {
     return this.json<{ id: string; result: AnalysisResult }>("createAnalysis", { body: request });
   }
+  /** The analysis computed and not stored; createAnalysis with the same request stores the same result. */
+  previewAnalysis(request: AnalysisRequest) {
+    return this.json<{ result: AnalysisResult }>("previewAnalysis", { body: request });
+  }
   getAnalysis(id: string) {
     return this.json<AnalysisRecord>("getAnalysis", { params: { id } });
   }

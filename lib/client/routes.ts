@@ -11,6 +11,7 @@ export const CLIENT_ROUTES = {
   uploadMechanism: { method: "post", path: "/api/mechanisms" },
   getMechanism: { method: "get", path: "/api/mechanisms/{id}" },
   createAnalysis: { method: "post", path: "/api/analyses" },
+  previewAnalysis: { method: "post", path: "/api/analyses/preview" },
   getAnalysis: { method: "get", path: "/api/analyses/{id}" },
   analysisCsv: { method: "get", path: "/api/analyses/{id}/{file}" },
   listProfiles: { method: "get", path: "/api/profiles" },

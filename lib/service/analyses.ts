@@ -2,8 +2,11 @@
  * Analyses: validate the request, run it in the engine pool, store the
  * result immutably under an unguessable id. A failed steady state is a
  * stored result with its status; an invalid request stores nothing. An
- * explorer recompute is a draft (`draft: true`), which expires unless its
- * permalink is asked for: opened, copied or exported (pinAnalysis).
+ * explorer recompute is a preview (previewAnalysis): computed the same way
+ * and returned, nothing stored; the explorer stores it (createAnalysis, the
+ * same request, so the same numbers) only when its permalink or an export is
+ * asked for. A draft (`draft: true`, the older explorer's recompute) expires
+ * unless its permalink is opened, copied or exported (pinAnalysis).
  */
 import "server-only";
 import { enginePool } from "../engine/pool";
@@ -25,18 +28,25 @@ export interface CreatedAnalysis {
   deletionNote: string;
 }
 
-/** `draft`: an explorer recompute, kept only until OZONE_DRAFT_TTL_DAYS unless pinned. */
-export async function createAnalysis(body: unknown, o: { draft?: boolean } = {}): Promise<CreatedAnalysis> {
+/** The analysis of a request, computed as createAnalysis computes it and stored nowhere: the explorer's slider steps. */
+export async function previewAnalysis(body: unknown): Promise<{ result: AnalysisResult }> {
+  return { result: (await compute(body)).result };
+}
+
+/** One request's analysis in the engine pool: the one composition both routes share. */
+async function compute(body: unknown) {
   const request = parseAnalysisRequest(body);
   const src = await mechanismSource(request.mechanismId);
   const out = await enginePool().run({ kind: "analysis", mechanism: src, request });
-  const result = out.result;
+  return { request, mechanismId: src.id, result: out.result };
+}
+
+/** `draft`: an explorer recompute, kept only until OZONE_DRAFT_TTL_DAYS unless pinned. */
+export async function createAnalysis(body: unknown, o: { draft?: boolean } = {}): Promise<CreatedAnalysis> {
+  const { request, mechanismId, result } = await compute(body);
   const deletion = newDeletionToken();
   await keepWithinBudget();
-  const id = await putNewAnalysis(
-    { mechanismId: src.id, request, result, pinned: !o.draft },
-    { deleteHash: deletion.hash },
-  );
+  const id = await putNewAnalysis({ mechanismId, request, result, pinned: !o.draft }, { deleteHash: deletion.hash });
   return { id, result, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
 }
 

@@ -475,7 +475,7 @@ export const openApiDocument = {
     "/api/analyses": {
       post: {
         summary:
-          "Compute and store an analysis. With ?draft=1 (the explorer) it is a draft, which expires after OZONE_DRAFT_TTL_DAYS unless its permalink is opened, copied (POST …/pin) or exported",
+          "Compute and store an analysis (the explorer stores one this way when its permalink or a table is asked for). With ?draft=1 it is a draft, which expires after OZONE_DRAFT_TTL_DAYS unless its permalink is opened, copied (POST …/pin) or exported",
         parameters: [{ name: "draft", in: "query", required: false, schema: { enum: ["1"] } }],
         requestBody: {
           required: true,
@@ -487,6 +487,20 @@ export const openApiDocument = {
               "{ id, result, deletionToken, deletionNote }: steady state, rates, budget, cycles, per-reaction ozone destroyed, diagnostics. A steady state that failed is still 201 with its status.",
           },
           ...errors(400, 404, 410, 413, 422, 429, 507),
+        },
+      },
+    },
+    "/api/analyses/preview": {
+      post: {
+        summary:
+          "Compute an analysis and store nothing (the explorer's recompute on every slider step); POST /api/analyses with the same request stores the same result for a permalink",
+        requestBody: {
+          required: true,
+          content: { "application/json": { schema: { $ref: "#/components/schemas/AnalysisRequest" } } },
+        },
+        responses: {
+          200: { description: "{ result }: the result POST /api/analyses would store, without id or deletion token" },
+          ...errors(400, 404, 410, 413, 422, 429),
         },
       },
     },

@@ -9,9 +9,12 @@
  * date (YYYY-MM-DD), t (local solar time, h), sza (solar zenith angle, °;
  * replaces lat/date/t for the sun), mode (instantaneous | diurnal),
  * o3 (held | solved), total.<pool> and held.<species> (mixing ratio, mol/mol),
- * color (flux | ox), spectators (hide), cycle (cycle id), sel (element id).
+ * color (flux | ox), spectators (hide), cycle (cycle id), sel (element id),
+ * detail (reactions drawn at most: one of DETAIL_LEVELS, "all" for every
+ * reaction with flux; the default, 40, is left out).
  */
-import { CONDITION_DEFAULTS, type ConditionInput } from "../atmosphere/condition";
+import { type AnalysisMode, CONDITION_DEFAULTS, type ConditionInput } from "../atmosphere/condition";
+import { DETAIL_DEFAULTS, DETAIL_LEVELS } from "./reactionDetail";
 import type { ColorMode } from "./types";
 
 export const EXPLORER_DEFAULTS = {
@@ -34,6 +37,8 @@ export interface ExplorerView {
   cycle: string | null;
   /** id of the inspected element ("s:ClO", "r:C3") */
   select: string | null;
+  /** reactions drawn at most (reactionDetail's limit); Infinity draws every reaction with flux; default 40 */
+  detail: number;
 }
 
 export interface ExplorerQuery {
@@ -111,11 +116,17 @@ export function parseExplorerQuery(params: Params): ExplorerQuery {
     condition[field] = { ...(condition[field] ?? {}), [m[2]]: v };
   }
   const color = q.get("color");
+  const detailRaw = q.get("detail");
+  const detail = detailRaw === "all" ? Infinity : Number(detailRaw);
+  const detailOk = (DETAIL_LEVELS as readonly number[]).includes(detail);
+  if (detailRaw !== undefined && !detailOk)
+    warnings.push(`detail=${detailRaw} ignored: expected one of ${DETAIL_LEVELS.map(detailParam).join(", ")}`);
   const view: ExplorerView = {
     colorMode: color === "ox" ? "ox" : "flux",
     showHeld: q.get("spectators") !== "hide",
     cycle: q.get("cycle") || null,
     select: q.get("sel") || null,
+    detail: detailOk ? detail : DETAIL_DEFAULTS.limit,
   };
   const m = q.get("m");
   return { mechanismId: m && /^[\w.-]{1,80}$/.test(m) ? m : D.mechanismId, condition, view, warnings };
@@ -147,5 +158,8 @@ export function explorerQueryString(q: Omit<ExplorerQuery, "warnings">): string 
   if (!q.view.showHeld) out.set("spectators", "hide");
   if (q.view.cycle) out.set("cycle", q.view.cycle);
   if (q.view.select) out.set("sel", q.view.select);
+  if (q.view.detail !== DETAIL_DEFAULTS.limit) out.set("detail", detailParam(q.view.detail));
   return out.toString();
 }
+
+const detailParam = (n: number) => (Number.isFinite(n) ? String(n) : "all");

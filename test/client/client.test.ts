@@ -102,6 +102,14 @@ describe("OzoneCyclesClient", () => {
     ]);
   });
 
+  it("posts a preview to /api/analyses/preview and gets the result without an id", async () => {
+    const s = stub([json(200, { result: { engineVersion: "x" } })]);
+    const c = new OzoneCyclesClient({ baseUrl: "http://h", fetch: s.fetch });
+    const out = await c.previewAnalysis({ mechanismId: "reference", condition: { altitude_km: 30 } });
+    expect(out).toEqual({ result: { engineVersion: "x" } });
+    expect(s.calls.map((x) => [x.url, x.method])).toEqual([["http://h/api/analyses/preview", "POST"]]);
+  });
+
   it("fills in path parameters and asks for the bare table", async () => {
     const s = stub([new Response("a,b\r\n", { status: 200 })]);
     const c = new OzoneCyclesClient({ baseUrl: "http://h", fetch: s.fetch });

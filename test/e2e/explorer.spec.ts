@@ -161,11 +161,13 @@ test("a species and a reaction can be inspected", async ({ page }) => {
 
 test("the permalink copies and opens in a fresh page with the same numbers", async ({ page, browser }) => {
   await openExplorer(page, "m=reference&z=42&lat=30&date=2026-06-21&t=10");
-  const link = await page.getByTestId("permalink").inputValue();
-  expect(link).toMatch(/\/a\/[\w-]+$/);
+  // a recompute stores nothing: the permalink appears when it is asked for
+  await expect(page.getByTestId("permalink")).toHaveValue("");
   await page.context().grantPermissions(["clipboard-read", "clipboard-write"]);
   await page.getByRole("button", { name: "Copy" }).click();
   await expect(page.getByRole("button", { name: "Copied ✓" })).toBeVisible();
+  const link = await page.getByTestId("permalink").inputValue();
+  expect(link).toMatch(/\/a\/[\w-]+$/);
   expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(link);
   const original = await numbers(page);
   const fresh = await browser.newContext({ viewport: { width: 1280, height: 800 } });
@@ -199,6 +201,13 @@ test("the graph exports as PNG and SVG and the tables as CSV and JSON", async ({
   const text = readFileSync(svgPath, "utf8");
   expect(text.startsWith("<svg")).toBe(true);
   expect(text).toContain("ClO");
+  // the first table asked for stores the analysis, then downloads
+  const [csv] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("button", { name: "rates.csv", exact: true }).click(),
+  ]);
+  expect(csv.suggestedFilename()).toMatch(/rates\.csv$/);
+  await expect(page.getByTestId("permalink")).toHaveValue(/\/a\/[\w-]+$/);
   for (const name of ["rates.csv", "species.csv", "cycles.csv", "JSON"]) {
     const href = await page.getByRole("link", { name, exact: true }).getAttribute("href");
     const res = await page.request.get(href!);

@@ -36,6 +36,17 @@ test("the default view of the reference mechanism at 35 km draws at most 40 reac
   await shot(page, "glance-35km");
   await page.getByTestId("detail").selectOption("all");
   await expect.poll(async () => (await nodes(page)).filter((n) => n.id.startsWith("r:")).length).toBeGreaterThan(40);
+  // the detail level is in the address, so a shared link keeps it
+  await expect(page).toHaveURL(/&detail=all$/);
+});
+
+test("a shared explorer link keeps its detail level", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=35&detail=15");
+  await expect(page.getByTestId("detail")).toHaveValue("15");
+  const reactions = (await nodes(page)).filter((n) => n.id.startsWith("r:"));
+  expect(reactions.length).toBeLessThanOrEqual(15);
+  await page.getByTestId("detail").selectOption("40");
+  await expect(page).not.toHaveURL(/detail=/);
 });
 
 test("the cycle map's loops and its folded rest add up to the cycles' shares of the analysis", async ({ page }) => {

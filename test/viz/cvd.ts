@@ -42,4 +42,35 @@ export function simulate(hex: string, kind: keyof typeof MACHADO_2009) {
   return hexToOklab(hex2);
 }
 
+/** The colour as seen with the given deficiency, as sRGB hex (clamped to the gamut). */
+export function simulateHex(hex: string, kind: keyof typeof MACHADO_2009): string {
+  return oklabToHex(simulate(hex, kind));
+}
+
+export interface Cielab {
+  L: number;
+  a: number;
+  b: number;
+}
+
+/**
+ * CIELAB (CIE 15:2004) of an sRGB colour: sRGB decoding and the linear-RGB →
+ * XYZ matrix of IEC 61966-2-1, white point D65 (Xn 0.95047, Yn 1, Zn 1.08883).
+ */
+export function hexToCielab(hex: string): Cielab {
+  const rgb = [1, 3, 5].map((i) => {
+    const c = Number.parseInt(hex.slice(i, i + 2), 16) / 255;
+    return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+  });
+  const X = 0.4124 * rgb[0] + 0.3576 * rgb[1] + 0.1805 * rgb[2];
+  const Y = 0.2126 * rgb[0] + 0.7152 * rgb[1] + 0.0722 * rgb[2];
+  const Z = 0.0193 * rgb[0] + 0.1192 * rgb[1] + 0.9505 * rgb[2];
+  const f = (t: number) => (t > (6 / 29) ** 3 ? Math.cbrt(t) : t / (3 * (6 / 29) ** 2) + 4 / 29);
+  const [fx, fy, fz] = [f(X / 0.95047), f(Y), f(Z / 1.08883)];
+  return { L: 116 * fy - 16, a: 500 * (fx - fy), b: 200 * (fy - fz) };
+}
+
+/** ΔE*ab (CIE 1976): the Euclidean distance in CIELAB. */
+export const deltaE76 = (x: Cielab, y: Cielab) => Math.hypot(x.L - y.L, x.a - y.a, x.b - y.b);
+
 export { oklabToHex };

@@ -3,7 +3,7 @@ import { deltaE, hexToOklab } from "@/lib/viz/colorSpace";
 import { divergingColor } from "@/lib/viz/divergingColor";
 import { sequentialColor } from "@/lib/viz/sequentialColor";
 import { expectClose } from "../helpers/close";
-import { MACHADO_2009, simulate } from "./cvd";
+import { deltaE76, hexToCielab, MACHADO_2009, simulate, simulateHex } from "./cvd";
 
 const samples = (n: number, lo: number, hi: number) =>
   Array.from({ length: n }, (_, i) => lo + ((hi - lo) * i) / (n - 1));
@@ -14,6 +14,40 @@ describe("the colour-deficiency matrices used by these tests", () => {
       for (const row of m) expectClose(row[0] + row[1] + row[2], 1, { abs: 2e-4 }, kind);
     }
   });
+});
+
+describe("the CIELAB conversion used by these tests", () => {
+  it("puts sRGB white at L* 100, a* = b* = 0 and pure red at (53.24, 80.09, 67.20) (CIE 15:2004 with D65; the red values common practice, from memory)", () => {
+    const white = hexToCielab("#ffffff");
+    expectClose(white.L, 100, { abs: 1e-3 }, "white L*");
+    expectClose(Math.hypot(white.a, white.b), 0, { abs: 0.02 }, "white chroma");
+    const red = hexToCielab("#ff0000");
+    expectClose(red.L, 53.24, { abs: 0.02 }, "red L*");
+    expectClose(red.a, 80.09, { abs: 0.05 }, "red a*");
+    expectClose(red.b, 67.2, { abs: 0.05 }, "red b*");
+  });
+});
+
+/**
+ * The legend's ramp steps (9 on the flux ramp, 17 on the Ox ramp: networkLegend), seen with deuteranopia
+ * (Machado et al. 2009, severity 1.0) and with protanopia: every pair of neighbouring steps differs by more
+ * than ΔE*ab 5, about twice the just-noticeable difference of 2.3 (Sharma & Trussell 1997, from memory), so
+ * that a reader with red–green colour-vision deficiency tells one step from the next. Threshold: common practice.
+ */
+describe("neighbouring ramp steps under simulated red–green deficiency", () => {
+  const MIN_DELTA_E = 5;
+  const steps = (n: number, color: (t: number) => string, lo: number) =>
+    Array.from({ length: n }, (_, i) => color(lo + ((1 - lo) * i) / (n - 1)));
+  const ramps = { flux: steps(9, sequentialColor, 0), ox: steps(17, divergingColor, -1) };
+  for (const kind of ["deutan", "protan"] as const) {
+    for (const [name, ramp] of Object.entries(ramps)) {
+      it(`keeps every neighbouring step of the ${name} ramp more than ΔE*ab ${MIN_DELTA_E} apart (${kind})`, () => {
+        const seen = ramp.map((c) => hexToCielab(simulateHex(c, kind)));
+        for (let i = 1; i < seen.length; i++)
+          expect(deltaE76(seen[i - 1], seen[i]), `${name} steps ${i - 1}–${i}`).toBeGreaterThan(MIN_DELTA_E);
+      });
+    }
+  }
 });
 
 describe("the sequential flux ramp", () => {

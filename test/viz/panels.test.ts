@@ -134,7 +134,7 @@ describe("explorer query", () => {
         poolTotals: { Cly: 3.3e-9, Bry: 2e-11 },
         held: { H2O: 5e-6 },
       },
-      view: { colorMode: "ox" as const, showHeld: false, cycle: "C1+C2", select: "s:ClO" },
+      view: { colorMode: "ox" as const, showHeld: false, cycle: "C1+C2", select: "s:ClO", detail: 15 },
     };
     const back = parseExplorerQuery(new URLSearchParams(explorerQueryString(q)));
     expect(back.warnings).toEqual([]);
@@ -159,7 +159,18 @@ describe("explorer query", () => {
       localSolarTime_h: 12,
       mode: "instantaneous",
     });
-    expect(q.view).toEqual({ colorMode: "flux", showHeld: true, cycle: null, select: null });
+    expect(q.view).toEqual({ colorMode: "flux", showHeld: true, cycle: null, select: null, detail: 40 });
+  });
+
+  it("keeps the detail level, 'all' for every reaction with flux, and leaves the default out", () => {
+    const all = parseExplorerQuery({ detail: "all" });
+    expect(all.view.detail).toBe(Infinity);
+    expect(explorerQueryString(all)).toMatch(/&detail=all$/);
+    expect(parseExplorerQuery({ detail: "80" }).view.detail).toBe(80);
+    expect(explorerQueryString(parseExplorerQuery({ detail: "40" }))).not.toContain("detail");
+    const bad = parseExplorerQuery({ detail: "33" });
+    expect(bad.view.detail).toBe(40);
+    expect(bad.warnings).toEqual(["detail=33 ignored: expected one of 15, 25, 40, 80, all"]);
   });
 
   it("ignores bad values and says which", () => {

@@ -4,6 +4,7 @@ import { SweepView } from "@/components/profile/SweepView";
 import { recordForPage } from "@/lib/service/pageRecord";
 import { getProfileRecord } from "@/lib/service/profiles";
 import { explorerQueryString } from "@/lib/viz/explorerQuery";
+import { DETAIL_DEFAULTS } from "@/lib/viz/reactionDetail";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Profile sweep · Ozone Loss Cycles" };
@@ -18,7 +19,7 @@ export default async function ProfilePage({ params }: { params: Promise<{ id: st
       `/explore?${explorerQueryString({
         mechanismId: l.request.mechanismId,
         condition: l.request.condition,
-        view: { colorMode: "flux", showHeld: false, cycle: null, select: null },
+        view: { colorMode: "flux", showHeld: false, cycle: null, select: null, detail: DETAIL_DEFAULTS.limit },
       })}`,
   );
   // the view needs neither the species nor the per-level requests

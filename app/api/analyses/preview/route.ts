@@ -1,0 +1,13 @@
+import { MAX_ANALYSIS_BODY, previewAnalysis } from "@/lib/service/analyses";
+import { readJsonBody, respond } from "@/lib/service/http";
+import { limitRequest } from "@/lib/service/rateLimit";
+
+export const dynamic = "force-dynamic";
+
+/** The explorer's recompute: the analysis, not stored (POST /api/analyses stores the same request for a permalink). */
+export function POST(req: Request) {
+  return respond(async () => {
+    await limitRequest(req);
+    return Response.json(await previewAnalysis(await readJsonBody(req, MAX_ANALYSIS_BODY)));
+  });
+}
