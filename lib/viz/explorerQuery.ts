@@ -13,7 +13,7 @@
  * detail (reactions drawn at most: one of DETAIL_LEVELS, "all" for every
  * reaction with flux; the default, 40, is left out).
  */
-import { type AnalysisMode, CONDITION_DEFAULTS, type ConditionInput } from "../atmosphere/condition";
+import { CONDITION_DEFAULTS, type ConditionInput } from "../atmosphere/condition";
 import { DETAIL_DEFAULTS, DETAIL_LEVELS } from "./reactionDetail";
 import type { ColorMode } from "./types";
 
