@@ -25,7 +25,7 @@ const engineBundle = path.join(root, ".engine", "worker.mjs");
 if (!existsSync(engineBundle)) {
   const tmp = `${engineBundle}.${process.pid}.tmp.mjs`;
   await build({
-    entryPoints: ["lib/engine/worker-entry.ts"],
+    entryPoints: ["lib/runtime/worker-entry.ts"],
     outfile: tmp,
     bundle: true,
     platform: "node",
@@ -52,7 +52,7 @@ process.on("exit", () => rmSync(out, { force: true }));
 await build({
   stdin: {
     contents: `
-      import { EnginePool, POOL_DEFAULTS } from "./lib/engine/pool";
+      import { EnginePool, POOL_DEFAULTS } from "./lib/runtime/pool";
       import { bullmqConfigFromEnv } from "./lib/jobs/bullmqConfig";
       import { startQueueWorker } from "./lib/jobs/bullmqWorker";
       import { JOB_HANDLERS } from "./lib/service/jobs";

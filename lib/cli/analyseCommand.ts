@@ -6,10 +6,10 @@
  * block. Exit 1 when the steady state did not converge.
  */
 
-import { runJob } from "../engine/jobs";
 import { compileSource } from "../engine/mechanism-source";
 import { parseAnalysisRequest } from "../engine/request-schema";
 import type { AnalysisResult } from "../engine/types";
+import { runJob } from "../runtime/taskTable";
 import { ANALYSIS_CSV_TABLES } from "../service/csv";
 import { conditionEntries } from "../service/provenanceBlock";
 import { analysisSummary } from "./analysisSummary";

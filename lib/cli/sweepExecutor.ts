@@ -12,9 +12,9 @@
 
 import type { MechanismSource } from "../engine/mechanism-source";
 import { compileSource } from "../engine/mechanism-source";
-import { EnginePool, POOL_DEFAULTS } from "../engine/pool";
 import { runLevelBatch } from "../profiles/runLevelBatch";
 import { inlineExecutor, type SweepExecutor } from "../profiles/runSweep";
+import { EnginePool, POOL_DEFAULTS } from "../runtime/pool";
 
 export interface ClosableExecutor extends SweepExecutor {
   close(): Promise<void>;

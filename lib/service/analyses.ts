@@ -6,10 +6,10 @@
  * permalink is asked for: opened, copied or exported (pinAnalysis).
  */
 import "server-only";
-import { enginePool } from "../engine/pool";
 import { parseAnalysisRequest } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
+import { enginePool } from "../runtime/pool";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";

@@ -25,10 +25,10 @@ import {
   studentView,
 } from "../assessment";
 import { sortFamilies, stepsInMechanismOrder, stepText } from "../assessment/templates/cycleText";
-import { enginePool } from "../engine/pool";
 import { conditionSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
+import { enginePool } from "../runtime/pool";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { type CsvExportOptions, type CsvProvenance, csvExport, csvMechanism } from "./csvProvenance";
 import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";

@@ -17,11 +17,11 @@ import { solveConditionsOf } from "../engine/resolve-condition";
 import "server-only";
 import { z } from "zod";
 import { compileSource, type MechanismSource } from "../engine/mechanism-source";
-import { enginePool, POOL_DEFAULTS } from "../engine/pool";
 import { analysisRequestSchema, parseWith } from "../engine/request-schema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import type { JobContext } from "../jobs/types";
+import { enginePool, POOL_DEFAULTS } from "../runtime/pool";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import {
   finishMonteCarlo,

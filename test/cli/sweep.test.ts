@@ -12,7 +12,6 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { DEMO_PROFILES } from "@/lib/atmosphere/demo-profiles";
 import { withoutCsvComments } from "@/lib/csv";
 import { compileSource } from "@/lib/engine/mechanism-source";
-import { POOL_DEFAULTS } from "@/lib/engine/pool";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";
 import { compareSweeps } from "@/lib/profiles/compareSweeps";
 import { comparisonCsv, sweepLevelsCsv } from "@/lib/profiles/csvTables";
@@ -20,6 +19,7 @@ import { prepareSweep, runPreparedSweep } from "@/lib/profiles/prepareSweep";
 import { runLevelBatch } from "@/lib/profiles/runLevelBatch";
 import { inlineExecutor } from "@/lib/profiles/runSweep";
 import type { SweepRequest, SweepResult } from "@/lib/profiles/types";
+import { POOL_DEFAULTS } from "@/lib/runtime/pool";
 import { runCli, withoutRunFields } from "./runCli";
 
 const oxygen = BUILTIN_MECHANISMS.find((m) => m.id === "oxygen-chlorine");

@@ -13,8 +13,8 @@ vi.hoisted(() => {
   delete process.env.DATABASE_URL;
 });
 vi.mock("server-only", () => ({}));
-vi.mock("@/lib/engine/pool", async () => {
-  const { runJob } = await import("@/lib/engine/jobs");
+vi.mock("@/lib/runtime/pool", async () => {
+  const { runJob } = await import("@/lib/runtime/taskTable");
   // yield to the event loop before each job, as a real worker round trip does
   const pool = {
     run: async (job: Parameters<typeof runJob>[0]) => {

@@ -1,7 +1,16 @@
 /**
- * The engine's units of work, as plain messages that cross a worker-thread
- * boundary. `runJob` executes one in the current thread.
+ * The task table: every kind of engine task (an analysis, profile levels,
+ * Monte Carlo samples, days of a run, an upload check), as plain messages
+ * that cross a worker-thread or queue boundary. `runJob` executes one in the
+ * current thread (lib/runtime/worker-entry.ts in a worker thread, the
+ * command line in its own).
  */
+
+import { checkUploadBody, type UploadCheck } from "../engine/check-upload";
+import { compileSource, type MechanismSource } from "../engine/mechanism-source";
+import { summarise } from "../engine/mechanism-summary";
+import { runAnalysis } from "../engine/run-analysis";
+import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
 import { type RunDaysTask, type RunStartTask, runDaysTask, runStartTask } from "../runs/runTasks";
@@ -9,11 +18,6 @@ import type { StartState } from "../runs/startState";
 import type { RunSegment } from "../runs/types";
 import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
 import type { SampleBatchResult } from "../uncertainty/types";
-import { checkUploadBody, type UploadCheck } from "./check-upload";
-import { compileSource, type MechanismSource } from "./mechanism-source";
-import { summarise } from "./mechanism-summary";
-import { runAnalysis } from "./run-analysis";
-import type { AnalysisRequest, AnalysisResult } from "./types";
 
 export type EngineJob =
   | { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] }
