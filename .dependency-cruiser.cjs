@@ -22,6 +22,8 @@ const LAYERS = [
   // samples, run days), the pool of worker threads that runs it, the health report
   ["runtime", "^lib/runtime/"],
   ["service", "^lib/service/"],
+  // the queue worker's process (scripts/worker.mjs bundles it): the service's job handlers on the engine pool
+  ["worker", "^lib/worker/"],
   // the command line (bin/ozone-cycles.mjs): the engine and the service's store-free parts, in one process
   // the typed client of the routes (its types come from the layers below, the service's included)
   ["client", "^lib/client/"],
