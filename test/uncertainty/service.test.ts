@@ -34,6 +34,7 @@ import { getUncertaintyProfile } from "@/lib/service/uncertainty";
 import { cancelUncertaintyJob, getUncertaintyJob, startUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 import { getStore, newRecordId } from "@/lib/store";
 import { monteCarlo } from "@/lib/uncertainty";
+import { expectClose } from "../helpers/close";
 
 async function finished(id: string) {
   for (let i = 0; i < 600; i++) {
@@ -93,7 +94,13 @@ describe("uncertainty jobs", () => {
     expect(s.state).toBe("done");
     const mc = (await getAnalysisRecord(s.resultId as string)).result.uncertainty?.monteCarlo;
     const direct = inThread(volcanic, 12, 5);
-    expect(solveConditionsOf(direct.condition).aerosolSurface_cm2cm3).toBeCloseTo(20e-8, 20);
+    // 20 µm² cm⁻³ = 20 × 10⁻⁸ cm² cm⁻³ (unit conversion)
+    expectClose(
+      solveConditionsOf(direct.condition).aerosolSurface_cm2cm3 as number,
+      20e-8,
+      { rel: 1e-12 },
+      "aerosol surface",
+    );
     expect(mc?.failed).toBe(0);
     expect(mc?.summaries).toEqual(direct.mc.summaries);
   });
