@@ -32,7 +32,7 @@
 import { type ChildProcess, spawn } from "node:child_process";
 import os from "node:os";
 import { Queue, QueueEvents } from "bullmq";
-import { solveConditionsOf } from "../lib/engine/resolve-condition";
+import { solveConditionsOf } from "../lib/engine/resolveCondition";
 import type { AnalysisResult } from "../lib/engine/types";
 import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "../lib/jobs/bullmqConfig";
 import { queueTaskRunner } from "../lib/jobs/bullmqWorker";

@@ -25,7 +25,7 @@ const engineBundle = path.join(root, ".engine", "worker.mjs");
 if (!existsSync(engineBundle)) {
   const tmp = `${engineBundle}.${process.pid}.tmp.mjs`;
   await build({
-    entryPoints: ["lib/runtime/worker-entry.ts"],
+    entryPoints: ["lib/runtime/workerEntry.ts"],
     outfile: tmp,
     bundle: true,
     platform: "node",

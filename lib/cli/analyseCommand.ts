@@ -6,8 +6,8 @@
  * block. Exit 1 when the steady state did not converge.
  */
 
-import { compileSource } from "../engine/mechanism-source";
-import { parseAnalysisRequest } from "../engine/request-schema";
+import { compileSource } from "../engine/mechanismSource";
+import { parseAnalysisRequest } from "../engine/requestSchema";
 import type { AnalysisResult } from "../engine/types";
 import { runJob } from "../runtime/taskTable";
 import { ANALYSIS_CSV_TABLES } from "../service/csv";

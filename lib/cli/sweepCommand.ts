@@ -6,8 +6,8 @@
  * `compare` reads.
  */
 import path from "node:path";
-import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
-import { compileSource } from "../engine/mechanism-source";
+import { DEMO_PROFILES } from "../atmosphere/demoProfiles";
+import { compileSource } from "../engine/mechanismSource";
 import { prepareSweep, runPreparedSweep } from "../profiles/prepareSweep";
 import { parseSweepRequest } from "../profiles/requestSchema";
 import { useParallel } from "../profiles/runSweep";

@@ -10,8 +10,8 @@
  * chains one after another.
  */
 
-import type { MechanismSource } from "../engine/mechanism-source";
-import { compileSource } from "../engine/mechanism-source";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { compileSource } from "../engine/mechanismSource";
 import { runLevelBatch } from "../profiles/runLevelBatch";
 import { inlineExecutor, type SweepExecutor } from "../profiles/runSweep";
 import { EnginePool, POOL_DEFAULTS } from "../runtime/pool";

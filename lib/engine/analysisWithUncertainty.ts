@@ -14,8 +14,8 @@ import {
   type SampleBatchResult,
   type SampleScheduleOptions,
 } from "../uncertainty";
-import { compileSource, type MechanismSource } from "./mechanism-source";
-import { solveConditionsOf } from "./resolve-condition";
+import { compileSource, type MechanismSource } from "./mechanismSource";
+import { solveConditionsOf } from "./resolveCondition";
 import type { AnalysisRequest, AnalysisResult } from "./types";
 
 /** Where the central solve and the sample batches run. */

@@ -2,14 +2,14 @@
  * The task table: every kind of engine task (an analysis, profile levels,
  * Monte Carlo samples, days of a run, an upload check), as plain messages
  * that cross a worker-thread or queue boundary. `runJob` executes one in the
- * current thread (lib/runtime/worker-entry.ts in a worker thread, the
+ * current thread (lib/runtime/workerEntry.ts in a worker thread, the
  * command line in its own).
  */
 
-import { checkUploadBody, type UploadCheck } from "../engine/check-upload";
-import { compileSource, type MechanismSource } from "../engine/mechanism-source";
-import { summarise } from "../engine/mechanism-summary";
-import { runAnalysis } from "../engine/run-analysis";
+import { checkUploadBody, type UploadCheck } from "../engine/checkUpload";
+import { compileSource, type MechanismSource } from "../engine/mechanismSource";
+import { summarise } from "../engine/mechanismSummary";
+import { runAnalysis } from "../engine/runAnalysis";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
@@ -29,7 +29,7 @@ export type EngineJob =
   | { kind: "run-start"; mechanism: MechanismSource; task: RunStartTask }
   /** a span of days of a run from a state (lib/runs) */
   | { kind: "run-days"; mechanism: MechanismSource; task: RunDaysTask }
-  /** parse and check an upload's raw body off the main thread (lib/engine/check-upload.ts); `body` is transferred */
+  /** parse and check an upload's raw body off the main thread (lib/engine/checkUpload.ts); `body` is transferred */
   | { kind: "check-upload"; body: Uint8Array; contentType: string }
   /** an uploaded mechanism's species, reactions and pools (its text stays with the caller) */
   | { kind: "describe-mechanism"; mechanism: MechanismSource };

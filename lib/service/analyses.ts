@@ -6,7 +6,7 @@
  * permalink is asked for: opened, copied or exported (pinAnalysis).
  */
 import "server-only";
-import { parseAnalysisRequest } from "../engine/request-schema";
+import { parseAnalysisRequest } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import { enginePool } from "../runtime/pool";

@@ -25,7 +25,7 @@ import {
   studentView,
 } from "../assessment";
 import { sortFamilies, stepsInMechanismOrder, stepText } from "../assessment/templates/cycleText";
-import { conditionSchema, parseWith } from "../engine/request-schema";
+import { conditionSchema, parseWith } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import { enginePool } from "../runtime/pool";

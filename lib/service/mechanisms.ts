@@ -7,9 +7,9 @@
  * stored before that keep working.
  */
 import "server-only";
-import type { MechanismSource } from "../engine/mechanism-source";
-import { compileSource } from "../engine/mechanism-source";
-import { summarise } from "../engine/mechanism-summary";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { compileSource } from "../engine/mechanismSource";
+import { summarise } from "../engine/mechanismSummary";
 import { builtinMechanisms, loadBuiltinMechanism } from "../mechanism";
 import { enginePool } from "../runtime/pool";
 import { getStore, ID_PATTERN, newRecordId } from "../store";

@@ -6,9 +6,9 @@
  * of the stored result, not a failed job.
  */
 import "server-only";
-import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
+import { DEMO_PROFILES } from "../atmosphere/demoProfiles";
 import type { DemoProfile } from "../atmosphere/types";
-import type { MechanismSource } from "../engine/mechanism-source";
+import type { MechanismSource } from "../engine/mechanismSource";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
 import type { JobContext, TaskRunner } from "../jobs/types";

@@ -8,7 +8,7 @@
  * result with its status and the hours up to the failure, not a failed job.
  */
 import "server-only";
-import { compileSource, type MechanismSource } from "../engine/mechanism-source";
+import { compileSource, type MechanismSource } from "../engine/mechanismSource";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
 import type { JobContext, TaskRunner } from "../jobs/types";

@@ -19,8 +19,8 @@
 import "server-only";
 import { z } from "zod";
 import { analysisWithUncertainty, type UncertaintyExecutor } from "../engine/analysisWithUncertainty";
-import type { MechanismSource } from "../engine/mechanism-source";
-import { analysisRequestSchema, parseWith } from "../engine/request-schema";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { analysisRequestSchema, parseWith } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
 import type { JobContext, TaskRunner } from "../jobs/types";

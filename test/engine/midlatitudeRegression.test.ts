@@ -12,7 +12,7 @@
  */
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import { loadBuiltinMechanism, loadMechanism } from "@/lib/mechanism";
 import { expectClose } from "../helpers/close";
 

@@ -25,8 +25,8 @@ vi.mock("@/lib/runtime/pool", async () => {
   return { enginePool: () => pool, POOL_DEFAULTS: { size: 2, timeout_ms: 30_000, script: "" } };
 });
 
-import { solveConditionsOf } from "@/lib/engine/resolve-condition";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { solveConditionsOf } from "@/lib/engine/resolveCondition";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { getAnalysisRecord } from "@/lib/service/analyses";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { standardAtmosphere } from "@/lib/atmosphere";
-import { resolveCondition } from "@/lib/engine/resolve-condition";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { resolveCondition } from "@/lib/engine/resolveCondition";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisRequest } from "@/lib/engine/types";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
