@@ -1,11 +1,13 @@
 // A soak and fuzz run against a production server (not part of `npm test`):
-//   node bench/soak.mjs [--minutes 10] [--fuzz 10000] [--port 3294]
+//   node bench/soak.mjs [--minutes 10] [--fuzz 10000] [--port 3294] [--timeout-s 60]
 // starts `scripts/serve.mjs` on the port with a temporary store (rate limits raised, so that the
 // run measures the server and not the limiter), then
 //   1. sends mixed requests for --minutes (analyses, uploads, reads, exports, deletions, sweeps,
 //      malformed bodies) from 4 concurrent clients, sampling the server's RSS every 10 s;
 //   2. sends --fuzz generated malformed requests and documents, counting every status.
-// It prints the RSS trend, every status with its count, the 5xx and the responses that contain NaN.
+// It prints the RSS trend, every status with its count, the 5xx, the responses that contain NaN, the
+// requests that got no answer within --timeout-s (counted as "timeout", so that a hang cannot stall
+// the run) and the slowest requests of each part with their bodies.
 // Goal: 0 responses of 5xx, flat memory after warm-up, 0 NaN. Needs a build (`npm run build`).
 import { readFileSync } from "node:fs";
 import { startBenchServer } from "./server.mjs";
@@ -17,6 +19,7 @@ const arg = (name, d) => {
 const MINUTES = arg("minutes", 10);
 const FUZZ = arg("fuzz", 10_000);
 const PORT = arg("port", 3294);
+const TIMEOUT_MS = arg("timeout-s", 60) * 1000;
 const base = `http://127.0.0.1:${PORT}`;
 
 // seeded, so that a run can be repeated (mulberry32)
@@ -41,23 +44,42 @@ const rss_MiB = () => {
 const statuses = new Map();
 const fiveHundreds = [];
 const nans = [];
+const timeouts = [];
+/** the slowest requests so far, slowest first: { ms, label, url, body } */
+let slowest = [];
+const excerpt = (body) => JSON.stringify(String(body ?? "").slice(0, 160));
 async function send(label, url, init = {}) {
   let status = "network-error";
+  const t0 = performance.now();
   try {
-    const r = await fetch(`${base}${url}`, init);
+    const r = await fetch(`${base}${url}`, { ...init, signal: AbortSignal.timeout(TIMEOUT_MS) });
     status = r.status;
     const text = await r.text();
     if (status >= 500) fiveHundreds.push(`${label}: ${status} ${text.slice(0, 160)}`);
     // a NaN the server computed, not one quoted back from a document that contained the word
     if (/\bNaN\b/.test(text) && !/\bNaN\b/.test(String(init.body ?? ""))) nans.push(`${label}: ${url}`);
-    statuses.set(status, (statuses.get(status) ?? 0) + 1);
     return { status, text };
   } catch (e) {
-    statuses.set(status, (statuses.get(status) ?? 0) + 1);
-    fiveHundreds.push(`${label}: ${e.message}`);
+    if (e.name === "TimeoutError") {
+      status = "timeout";
+      timeouts.push(`${label}: ${init.method ?? "GET"} ${url} ${excerpt(init.body)}`);
+    } else fiveHundreds.push(`${label}: ${e.message}`);
     return { status, text: "" };
+  } finally {
+    statuses.set(status, (statuses.get(status) ?? 0) + 1);
+    const ms = performance.now() - t0;
+    if (slowest.length < 10 || ms > slowest[slowest.length - 1].ms) {
+      slowest = [...slowest, { ms, label, url, body: excerpt(init.body), status }]
+        .sort((a, b) => b.ms - a.ms)
+        .slice(0, 10);
+    }
   }
 }
+const printSlowest = (part) => {
+  console.log(`${part}: the slowest requests`);
+  for (const s of slowest) console.log(`  ${(s.ms / 1000).toFixed(1)} s  ${s.status}  ${s.label} ${s.url} ${s.body}`);
+  slowest = [];
+};
 const json = (body) => ({ method: "POST", headers: { "content-type": "application/json" }, body });
 
 const minimal = readFileSync("test/fixtures/mechanisms/chapman-minimal.yaml", "utf8");
@@ -184,10 +206,14 @@ try {
     );
   }
 
+  if (MINUTES > 0) printSlowest("soak");
+
   console.log(`fuzz: ${FUZZ} generated malformed requests and documents`);
+  const tf = Date.now();
   const fuzzStatuses = new Map();
   const before = new Map(statuses);
   for (let i = 0; i < FUZZ; i += 8) {
+    if (i > 0 && i % 1000 === 0) console.log(`  ${i} sent, ${((Date.now() - tf) / 1000).toFixed(0)} s`);
     await Promise.all(
       Array.from({ length: Math.min(8, FUZZ - i) }, (_, k) =>
         (i + k) % 2
@@ -201,6 +227,8 @@ try {
     );
   }
   for (const [s, n] of statuses) fuzzStatuses.set(s, n - (before.get(s) ?? 0));
+  console.log(`fuzz: ${FUZZ} requests in ${((Date.now() - tf) / 1000).toFixed(0)} s`);
+  printSlowest("fuzz");
   const list = (m) =>
     [...m]
       .filter(([, n]) => n > 0)
@@ -209,8 +237,10 @@ try {
       .join(", ");
   console.log(`fuzz statuses: ${list(fuzzStatuses)}`);
   console.log(`all statuses: ${list(statuses)}`);
-  console.log(`5xx or network errors: ${fiveHundreds.length}; responses with NaN: ${nans.length}`);
-  for (const x of [...fiveHundreds, ...nans].slice(0, 20)) console.log(`  ${x}`);
+  console.log(
+    `5xx or network errors: ${fiveHundreds.length}; responses with NaN: ${nans.length}; no answer within ${TIMEOUT_MS / 1000} s: ${timeouts.length}`,
+  );
+  for (const x of [...fiveHundreds, ...nans, ...timeouts].slice(0, 30)) console.log(`  ${x}`);
   console.log(`RSS at the end: ${rss_MiB().toFixed(0)} MiB`);
 } finally {
   server.stop();

@@ -20,5 +20,6 @@ export { JsonDepthScanner, jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooD
 export { type EquationTerm, type ParsedEquation, parseEquation } from "./parseEquation";
 export { parseFormula } from "./parseFormula";
 export { poolExpression, weightedSum } from "./poolExpression";
+export { findRecursiveAlias } from "./recursiveAlias";
 export { stoichiometryMatrix } from "./stoichiometryMatrix";
 export type * from "./types";

@@ -13,6 +13,7 @@ import { DiagnosticSink } from "./diagnostics";
 import { type Locator, lazyLocator, makeLocator } from "./locateInDocument";
 import { jsonTooDeep, NESTING_DEFAULTS, type TooDeep, yamlTooDeep } from "./nestingDepth";
 import { readDocument } from "./readDocument";
+import { findRecursiveAlias } from "./recursiveAlias";
 import type { LoadedMechanism, MechanismLimits } from "./types";
 
 export const DEFAULTS: MechanismLimits = {
@@ -137,6 +138,19 @@ export function loadMechanism(text: string, options: LoadMechanismOptions = {}):
       };
     });
     if (syntax.length) fail(syntax);
+    const loop = findRecursiveAlias(doc);
+    if (loop) {
+      const p = lineCounter.linePos(loop.offset);
+      fail([
+        {
+          severity: "error",
+          code: "recursive-alias",
+          message: `the alias *${printable(loop.name).slice(0, 40)} stands inside the node its anchor names, which would make the document endless; write the entries out`,
+          line: p.line,
+          column: p.col,
+        },
+      ]);
+    }
     try {
       data = doc.toJS({ maxAliasCount: 100 });
     } catch (e) {

@@ -38,8 +38,12 @@ export const DEFAULTS = {
   rayleigh: true,
   /** diffuse light (two-stream) on */
   diffuse: true,
-  /** optical depth beyond which a path is taken as dark */
-  opaque: 50,
+  /**
+   * optical depth beyond which a path is taken as dark: near the exponential's underflow
+   * (e^−700 ≈ 1e-304), so that a faint direct beam (e.g. through the O2 windows of the
+   * Schumann–Runge bands to 10 km at 85°) still gives a species such as N its small source
+   */
+  opaque: 700,
 };
 
 /** Fully resolved input of the flux kernel (columns filled in). */

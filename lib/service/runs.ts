@@ -37,6 +37,7 @@ import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { getAnalysisRecord } from "./analyses";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { notFound } from "./http";
+import { liveOrThrow } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";
 
 export const RUN_KIND = "run";
@@ -177,8 +178,7 @@ export interface StoredRunRecord {
 }
 
 export async function getRunRecord(id: string): Promise<StoredRunRecord> {
-  const r = ID_PATTERN.test(id) ? await getStore().getRecord(RUN_KIND, id) : null;
-  if (!r) throw notFound("run", id);
+  const r = liveOrThrow(ID_PATTERN.test(id) ? await getStore().getRecord(RUN_KIND, id) : null, "run", id);
   return {
     id: r.id,
     createdAt: r.createdAt,

@@ -237,6 +237,19 @@ test.describe("refusals of hostile and over-limit documents", () => {
     expect(error.message).not.toMatch(/call stack/i);
   });
 
+  test("a YAML alias inside its own anchor is a 400 recursive-alias, not a worker busy until the job limit", async ({
+    request,
+  }) => {
+    // the fuzz document of bench/soak.mjs that stalled the 10,000-request run: each held a worker for 30 s (422 timeout)
+    const r = await request.post("/api/mechanisms", {
+      headers: { "content-type": "application/yaml" },
+      data: `a: &a [${"*a, ".repeat(50)}]`,
+    });
+    expect(r.status()).toBe(400);
+    const { error } = await r.json();
+    expect(error).toMatchObject({ code: "recursive-alias", line: 1, column: 8 });
+  });
+
   test("every over-limit document is a 413 with the one code too-large (5,001 species)", async ({ request }) => {
     const lines = ["title: big", "species:", "  - { id: M, role: third-body }"];
     for (let i = 0; i < 5_000; i++) lines.push(`  - { id: X${i}, role: solved, atoms: { C: 1 } }`);

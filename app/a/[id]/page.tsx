@@ -5,6 +5,7 @@ import { Explorer } from "@/components/explorer";
 import { getAnalysisRecord, pinAnalysis } from "@/lib/service/analyses";
 import { listMechanisms, mechanismDetail } from "@/lib/service/mechanisms";
 import { ownerFromCookies } from "@/lib/service/owner";
+import { recordForPage } from "@/lib/service/pageRecord";
 import { parseExplorerQuery } from "@/lib/viz/explorerQuery";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 
@@ -17,14 +18,10 @@ type Search = Promise<Record<string, string | string[] | undefined>>;
 /** A permalink: reopens the explorer with the stored request and its stored numbers. */
 export default async function AnalysisPage({ params, searchParams }: { params: Params; searchParams: Search }) {
   const { id } = await params;
-  let record: Awaited<ReturnType<typeof getAnalysisRecord>>;
-  try {
-    record = await getAnalysisRecord(id);
-    // an opened permalink is one a user asked for: the draft is kept for good
-    await pinAnalysis(id);
-  } catch {
-    notFound();
-  }
+  const record = await recordForPage(getAnalysisRecord(id));
+  if (!record) notFound();
+  // an opened permalink is one a user asked for: the draft is kept for good
+  await pinAnalysis(id);
   const view = parseExplorerQuery(await searchParams).view;
   const mechanismId = record.request.mechanismId;
   let mechanisms: MechanismSummary[] = [];

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { ComparisonView } from "@/components/profile/ComparisonView";
+import { recordForPage } from "@/lib/service/pageRecord";
 import { getComparisonRecord } from "@/lib/service/profiles";
 
 export const dynamic = "force-dynamic";
@@ -8,12 +9,8 @@ export const metadata: Metadata = { title: "Profile comparison · Ozone Loss Cyc
 
 export default async function ComparisonPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  let record: Awaited<ReturnType<typeof getComparisonRecord>>;
-  try {
-    record = await getComparisonRecord(id);
-  } catch {
-    notFound();
-  }
+  const record = await recordForPage(getComparisonRecord(id));
+  if (!record) notFound();
   return (
     <div className="mx-auto max-w-7xl px-4 py-6">
       <ComparisonView id={record.id} result={record.body.result} createdAt={record.createdAt} />

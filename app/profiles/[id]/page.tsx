@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { SweepView } from "@/components/profile/SweepView";
+import { recordForPage } from "@/lib/service/pageRecord";
 import { getProfileRecord } from "@/lib/service/profiles";
 import { explorerQueryString } from "@/lib/viz/explorerQuery";
 
@@ -9,12 +10,8 @@ export const metadata: Metadata = { title: "Profile sweep · Ozone Loss Cycles" 
 
 export default async function ProfilePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  let record: Awaited<ReturnType<typeof getProfileRecord>>;
-  try {
-    record = await getProfileRecord(id);
-  } catch {
-    notFound();
-  }
+  const record = await recordForPage(getProfileRecord(id));
+  if (!record) notFound();
   const r = record.body.result;
   const links = r.levels.map(
     (l) =>

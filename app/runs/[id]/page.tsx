@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { RunView } from "@/components/runs/RunView";
 import { dailyLossChart, runChartSeries, timeLineChart } from "@/lib/runs";
+import { recordForPage } from "@/lib/service/pageRecord";
 import { getRunRecord } from "@/lib/service/runs";
 
 export const dynamic = "force-dynamic";
@@ -9,12 +10,8 @@ export const metadata: Metadata = { title: "Run · Ozone Loss Cycles" };
 
 export default async function RunPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  let record: Awaited<ReturnType<typeof getRunRecord>>;
-  try {
-    record = await getRunRecord(id);
-  } catch {
-    notFound();
-  }
+  const record = await recordForPage(getRunRecord(id));
+  if (!record) notFound();
   const r = record.body.result;
   const s = runChartSeries(r);
   return (

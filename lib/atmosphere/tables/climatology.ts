@@ -4,7 +4,7 @@
  * (pool totals: mol of the pool's atoms per mol of air), interpolated
  * log-linearly between nodes by climatologyAt.
  *
- * Every profile except O2 and N2 is "approximate, from memory": rounded
+ * Every profile except O2, N2 and O3 at 10–70 km is "approximate, from memory": rounded
  * values meant to resemble satellite and balloon climatologies of the
  * middle atmosphere; none is copied from a single published table. Each
  * profile's `source` says what it is meant to match.
@@ -52,17 +52,22 @@ export const CLIMATOLOGY: Readonly<Record<ClimatologySpecies, MixingRatioProfile
       "approximate, from memory: ~336 ppbv in the troposphere (2020s), falling through the stratosphere by photolysis and O(1D) reaction",
   },
   O3: {
+    // 10–70 km: the mid-latitude ozone model of the U.S. Standard Atmosphere 1976 (annual mean at
+    // 45° N; Krueger and Minzner 1976, J. Geophys. Res. 81, 4477), as tabulated in ppmv in
+    // Anderson et al. 1986, AFGL Atmospheric Constituent Profiles (0–120 km), AFGL-TR-86-0110,
+    // table 1f ("U.S. Standard"). Below 10 km present-day tropospheric values and above 70 km the
+    // daytime mesosphere, both approximate, from memory.
     z_km: [
-      0, 2, 4, 6, 8, 10, 12, 14, 16, 18, 20, 22, 24, 26, 28, 30, 32, 34, 36, 38, 40, 42, 44, 46, 48, 50, 55, 60, 65, 70,
-      75, 80, 86,
+      0, 2, 4, 6, 8, 10, 11, 12, 13, 14, 15, 16, 17, 18, 19, 20, 21, 22, 23, 24, 25, 27.5, 30, 32.5, 35, 37.5, 40, 42.5,
+      45, 47.5, 50, 55, 60, 65, 70, 75, 80, 86,
     ],
     mixingRatio: [
-      30e-9, 40e-9, 50e-9, 55e-9, 65e-9, 90e-9, 220e-9, 450e-9, 800e-9, 1.35e-6, 2.0e-6, 3.0e-6, 4.1e-6, 5.2e-6, 6.3e-6,
-      7.2e-6, 7.8e-6, 8.0e-6, 7.8e-6, 7.3e-6, 6.5e-6, 5.6e-6, 4.7e-6, 3.8e-6, 3.0e-6, 2.3e-6, 1.2e-6, 0.7e-6, 0.4e-6,
-      0.25e-6, 0.15e-6, 0.1e-6, 0.1e-6,
+      30e-9, 40e-9, 50e-9, 55e-9, 65e-9, 0.131e-6, 0.215e-6, 0.31e-6, 0.385e-6, 0.503e-6, 0.651e-6, 0.87e-6, 1.19e-6,
+      1.59e-6, 2.03e-6, 2.58e-6, 3.03e-6, 3.65e-6, 4.17e-6, 4.63e-6, 5.12e-6, 5.8e-6, 6.55e-6, 7.37e-6, 7.84e-6, 7.8e-6,
+      7.3e-6, 6.2e-6, 5.25e-6, 4.1e-6, 3.1e-6, 1.8e-6, 1.1e-6, 0.7e-6, 0.3e-6, 0.15e-6, 0.1e-6, 0.1e-6,
     ],
     source:
-      "approximate, from memory: mid-latitude annual mean; number-density peak near 22 km, mixing-ratio peak ~8 ppmv near 34 km, total column near 300 DU (daytime mesosphere)",
+      "10–70 km: U.S. Standard Atmosphere 1976 mid-latitude ozone model (annual mean, 45° N; Krueger and Minzner 1976, J. Geophys. Res. 81, 4477; ppmv of Anderson et al. 1986, AFGL-TR-86-0110, table 1f); below 10 km and above 70 km approximate, from memory (present-day troposphere, daytime mesosphere)",
   },
   CO: {
     z_km: [0, 5, 10, 12, 14, 16, 20, 30, 40, 50, 60, 70, 80, 86],

@@ -6,6 +6,7 @@ import { formatTolerance } from "@/lib/assessment";
 import type { InstructorAssessment } from "@/lib/assessment/types";
 import { CAUTION_LINE } from "@/lib/caution";
 import { getInstructorAssessment, studentPath } from "@/lib/service/assessments";
+import { recordForPage } from "@/lib/service/pageRecord";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Assessment key · Ozone Loss Cycles", robots: { index: false } };
@@ -13,12 +14,9 @@ export const metadata: Metadata = { title: "Assessment key · Ozone Loss Cycles"
 /** The instructor link: the assessment with its key, the downloads and the marking. */
 export default async function InstructorPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  let a: InstructorAssessment;
-  try {
-    a = await getInstructorAssessment(id);
-  } catch {
-    notFound();
-  }
+  const found: InstructorAssessment | null = await recordForPage(getInstructorAssessment(id));
+  if (!found) notFound();
+  const a = found;
   const answer = (v: number, q: number) => a.key.find((k) => k.variant === v && k.question === q);
   const analysisOf = (v: number) => a.analyses.filter((x) => x.variant === v);
   const condition = (v: (typeof a.variants)[number]) =>

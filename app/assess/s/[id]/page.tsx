@@ -3,6 +3,7 @@ import { notFound } from "next/navigation";
 import { PrintButton, StudentSheetView } from "@/components/assessment";
 import type { StudentAssessment } from "@/lib/assessment/types";
 import { getStudentAssessment } from "@/lib/service/assessments";
+import { recordForPage } from "@/lib/service/pageRecord";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Assessment sheets · Ozone Loss Cycles", robots: { index: false } };
@@ -19,12 +20,9 @@ export default async function StudentSheetsPage({
 }) {
   const { id } = await params;
   const v = Number((await searchParams).v);
-  let a: StudentAssessment;
-  try {
-    a = await getStudentAssessment(id);
-  } catch {
-    notFound();
-  }
+  const found: StudentAssessment | null = await recordForPage(getStudentAssessment(id));
+  if (!found) notFound();
+  const a = found;
   const sheets =
     Number.isInteger(v) && v >= 1 && v <= a.sheets.length ? a.sheets.filter((s) => s.variant === v) : a.sheets;
   return (
