@@ -11,16 +11,19 @@ const LAYERS = [
   ["solver", "^lib/solver/"],
   ["analysis", "^lib/analysis/"],
   ["uncertainty", "^lib/uncertainty/"],
-  // the composition of one analysis (not its worker threads, below)
-  ["engine", "^lib/engine/(?!(jobs|pool|worker-entry)\\.ts$)"],
+  // the composition of one analysis
+  ["engine", "^lib/engine/"],
   ["viz", "^lib/viz/"],
   ["profiles", "^lib/profiles/"],
   ["assessment", "^lib/assessment/"],
   // runs over days (at a place or along a trajectory), their daily budgets
   ["runs", "^lib/runs/"],
-  // the worker threads run every kind of engine task (profile levels, Monte Carlo samples)
-  ["engine-workers", "^lib/engine/(jobs|pool|worker-entry)\\.ts$"],
+  // the worker-thread runtime: the task table of every kind of engine task (profile levels, Monte Carlo
+  // samples, run days), the pool of worker threads that runs it, the health report
+  ["runtime", "^lib/runtime/"],
   ["service", "^lib/service/"],
+  // the queue worker's process (scripts/worker.mjs bundles it): the service's job handlers on the engine pool
+  ["worker", "^lib/worker/"],
   // the command line (bin/ozone-cycles.mjs): the engine and the service's store-free parts, in one process
   // the typed client of the routes (its types come from the layers below, the service's included)
   ["client", "^lib/client/"],

@@ -1,5 +1,5 @@
 /**
- * Bundles the engine worker (lib/engine/worker-entry.ts) for a benchmark's
+ * Bundles the engine worker (lib/runtime/workerEntry.ts) for a benchmark's
  * own pool into .engine/bench/<name>.mjs and returns its path. esbuild is
  * imported at run time: it cannot be bundled into the case file itself.
  */
@@ -10,7 +10,7 @@ export async function bundleEngineWorker(name: string): Promise<string> {
   const specifier = "esbuild";
   const { build } = (await import(specifier)) as typeof import("esbuild");
   await build({
-    entryPoints: ["lib/engine/worker-entry.ts"],
+    entryPoints: ["lib/runtime/workerEntry.ts"],
     outfile: out,
     bundle: true,
     platform: "node",

@@ -32,8 +32,7 @@
 import { type ChildProcess, spawn } from "node:child_process";
 import os from "node:os";
 import { Queue, QueueEvents } from "bullmq";
-import { EnginePool, POOL_DEFAULTS } from "../lib/engine/pool";
-import { solveConditionsOf } from "../lib/engine/resolve-condition";
+import { solveConditionsOf } from "../lib/engine/resolveCondition";
 import type { AnalysisResult } from "../lib/engine/types";
 import { type BullmqConfig, bullmqConfigFromEnv, connect, TASKS_QUEUE } from "../lib/jobs/bullmqConfig";
 import { queueTaskRunner } from "../lib/jobs/bullmqWorker";
@@ -42,6 +41,7 @@ import { loadBuiltinMechanism } from "../lib/mechanism";
 import { planSweep } from "../lib/profiles/planSweep";
 import { runLevelBatch } from "../lib/profiles/runLevelBatch";
 import { standardProfile } from "../lib/profiles/standardProfile";
+import { EnginePool, POOL_DEFAULTS } from "../lib/runtime/pool";
 import { planMonteCarlo } from "../lib/uncertainty/monteCarlo";
 
 export const BENCH_DEFAULTS = {

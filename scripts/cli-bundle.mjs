@@ -61,7 +61,7 @@ export async function ensureCliBundles(root) {
   await Promise.all(
     [
       [cli, "lib/cli/main.ts"],
-      [worker, "lib/engine/worker-entry.ts"],
+      [worker, "lib/runtime/workerEntry.ts"],
     ].map(async ([out, entry]) => {
       const tmp = `${out}.${process.pid}.tmp.mjs`;
       await build({ ...common, entryPoints: [entry], outfile: tmp });

@@ -1,10 +1,10 @@
-// Bundles lib/engine/worker-entry.ts into .engine/worker.mjs: the engine runs
+// Bundles lib/runtime/workerEntry.ts into .engine/worker.mjs: the engine runs
 // in worker threads off the request thread, and a worker needs a plain JS file.
 import { build } from "esbuild";
 
 export async function buildEngineWorker() {
   await build({
-    entryPoints: ["lib/engine/worker-entry.ts"],
+    entryPoints: ["lib/runtime/workerEntry.ts"],
     outfile: ".engine/worker.mjs",
     bundle: true,
     platform: "node",

@@ -25,7 +25,7 @@ const engineBundle = path.join(root, ".engine", "worker.mjs");
 if (!existsSync(engineBundle)) {
   const tmp = `${engineBundle}.${process.pid}.tmp.mjs`;
   await build({
-    entryPoints: ["lib/engine/worker-entry.ts"],
+    entryPoints: ["lib/runtime/workerEntry.ts"],
     outfile: tmp,
     bundle: true,
     platform: "node",
@@ -50,31 +50,8 @@ for (const f of readdirSync(path.join(root, ".engine"))) {
 const out = path.join(root, ".engine", `queue-worker.${process.pid}.mjs`);
 process.on("exit", () => rmSync(out, { force: true }));
 await build({
-  stdin: {
-    contents: `
-      import { EnginePool, POOL_DEFAULTS } from "./lib/engine/pool";
-      import { bullmqConfigFromEnv } from "./lib/jobs/bullmqConfig";
-      import { startQueueWorker } from "./lib/jobs/bullmqWorker";
-      import { JOB_HANDLERS } from "./lib/service/jobs";
-      export async function main() {
-        const config = bullmqConfigFromEnv();
-        const pool = new EnginePool({ ...POOL_DEFAULTS, size: config.workerTasks });
-        const worker = await startQueueWorker(config, {
-          handlers: JOB_HANDLERS,
-          runTask: (t) => pool.run(t),
-          // Redis gone for good: exit, so that a supervisor starts a fresh worker
-          onLost: () => {
-            console.error("queue worker: the connection to Redis is lost; exiting");
-            process.exit(1);
-          },
-        });
-        return { worker, config, close: async () => { await worker.close(); await pool.close(); } };
-      }
-    `,
-    resolveDir: root,
-    loader: "ts",
-    sourcefile: "queue-worker-entry.ts",
-  },
+  // the process itself is TypeScript in lib/, type-checked and linted with the rest
+  entryPoints: ["lib/worker/queueWorkerMain.ts"],
   outfile: out,
   bundle: true,
   platform: "node",

@@ -8,7 +8,7 @@
  * of the Ox loss and the direct-formula mismatch of each level.
  */
 import { analyseCycles, findPathways } from "../../lib/analysis";
-import { runAnalysis } from "../../lib/engine/run-analysis";
+import { runAnalysis } from "../../lib/engine/runAnalysis";
 import { loadBuiltinMechanism } from "../../lib/mechanism";
 import type { CompiledMechanism, Species } from "../../lib/mechanism/types";
 import type { SteadyState } from "../../lib/solver/types";

@@ -9,8 +9,8 @@
  */
 import { spawn } from "node:child_process";
 import { existsSync } from "node:fs";
-import { DEMO_PROFILES } from "../../lib/atmosphere/demo-profiles";
-import { compileSource } from "../../lib/engine/mechanism-source";
+import { DEMO_PROFILES } from "../../lib/atmosphere/demoProfiles";
+import { compileSource } from "../../lib/engine/mechanismSource";
 import { prepareSweep, runPreparedSweep } from "../../lib/profiles/prepareSweep";
 import { runLevelBatch } from "../../lib/profiles/runLevelBatch";
 import { inlineExecutor } from "../../lib/profiles/runSweep";

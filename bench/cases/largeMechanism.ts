@@ -7,7 +7,7 @@
  * ordering and fill pattern worked out again); and the reference mechanism
  * both ways, to show the small case is no slower.
  */
-import { resolveCondition, solveConditionsOf } from "../../lib/engine/resolve-condition";
+import { resolveCondition, solveConditionsOf } from "../../lib/engine/resolveCondition";
 import { loadBuiltinMechanism, loadMechanism } from "../../lib/mechanism";
 import type { CompiledMechanism } from "../../lib/mechanism/types";
 import { solveSteadyState } from "../../lib/solver";

@@ -8,8 +8,9 @@
  * 51,000 / median s. The per-level cost is reported beside it, because the
  * cycle analysis at 10–15 km costs many times more than above 20 km.
  */
-import { EnginePool } from "../../lib/engine/pool";
+
 import type { AnalysisRequest } from "../../lib/engine/types";
+import { EnginePool } from "../../lib/runtime/pool";
 import { bundleEngineWorker } from "../bundleWorker";
 import type { BenchCase } from "../types";
 

@@ -6,7 +6,7 @@
  * once and go to DEVELOPERS.md ("Storage").
  */
 import { brotliCompressSync, constants, gzipSync } from "node:zlib";
-import { runAnalysis } from "../../lib/engine/run-analysis";
+import { runAnalysis } from "../../lib/engine/runAnalysis";
 import { loadBuiltinMechanism } from "../../lib/mechanism";
 import { packJson, unpackJson } from "../../lib/store/compress";
 import type { BenchCase } from "../types";

@@ -13,7 +13,7 @@
  * - "vortex parcel, cold start": the instantaneous steady state of the demo.
  */
 import { POLAR_VORTEX_DEMO } from "../../lib/engine/demoConditions";
-import { resolveCondition, solveConditionsOf } from "../../lib/engine/resolve-condition";
+import { resolveCondition, solveConditionsOf } from "../../lib/engine/resolveCondition";
 import { sulfateGammas } from "../../lib/kinetics";
 import { loadBuiltinMechanism } from "../../lib/mechanism";
 import type { CompiledMechanism } from "../../lib/mechanism/types";

@@ -7,11 +7,11 @@
  * Samples per second = samples / median time. The pool cases bundle the
  * engine worker (with the "uncertainty-samples" job kind) into .engine/bench.
  */
-import { compileSource } from "../../lib/engine/mechanism-source";
-import { EnginePool } from "../../lib/engine/pool";
-import { solveConditionsOf } from "../../lib/engine/resolve-condition";
-import { runAnalysis } from "../../lib/engine/run-analysis";
+import { compileSource } from "../../lib/engine/mechanismSource";
+import { solveConditionsOf } from "../../lib/engine/resolveCondition";
+import { runAnalysis } from "../../lib/engine/runAnalysis";
 import type { AnalysisRequest } from "../../lib/engine/types";
+import { EnginePool } from "../../lib/runtime/pool";
 import { monteCarlo, planMonteCarlo, runSampleBatch, sensitivities } from "../../lib/uncertainty";
 import { bundleEngineWorker } from "../bundleWorker";
 import type { BenchCase } from "../types";

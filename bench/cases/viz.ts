@@ -3,7 +3,7 @@
  * SVG export of the reference mechanism at 40 km. The analysis is computed
  * once, outside the timed part.
  */
-import { runAnalysis } from "../../lib/engine/run-analysis";
+import { runAnalysis } from "../../lib/engine/runAnalysis";
 import { loadBuiltinMechanism } from "../../lib/mechanism";
 import { graphSvg, networkElements, networkLayout, networkLegend } from "../../lib/viz";
 import type { MechanismView } from "../../lib/viz/types";

@@ -72,14 +72,6 @@ export function matchingMultipliers(p: [number, number], d: [number, number]): {
   return { a, c, L: (a * p[0]) / p[1] };
 }
 
-/** Integer vector scaled to coprime entries; returns the vector and the divisor. */
-export function normaliseIntegers(v: number[]): { v: number[]; g: number } {
-  let g = 0;
-  for (const x of v) g = gcd(g, x);
-  if (g <= 1) return { v, g: 1 };
-  return { v: v.map((x) => x / g), g };
-}
-
 /** Real vector (its first n entries) with rational ratios to the smallest integer vector proportional to it, or null. */
 export function integerProportional(v: ArrayLike<number>, n: number = v.length): number[] | null {
   let min = Number.POSITIVE_INFINITY;

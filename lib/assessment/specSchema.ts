@@ -4,7 +4,7 @@
  * bounds, and each question kind must carry the parameters its template needs.
  */
 import { z } from "zod";
-import { conditionSchema, parseWith } from "../engine/request-schema";
+import { conditionSchema, parseWith } from "../engine/requestSchema";
 import { InputError } from "../errors";
 import { QUESTION_TEMPLATES, templateOf } from "./templates/registry";
 import type { AssessmentSpec, QuestionKind } from "./types";

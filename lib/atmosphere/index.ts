@@ -32,7 +32,7 @@ export {
 } from "./constants";
 export { type DaylightInput, daylightHours } from "./daylightHours";
 export { dayOfYear, isLeapYear } from "./dayOfYear";
-export { DEMO_PROFILES, INVENTED_COLD_PROFILE, INVENTED_WARM_PROFILE } from "./demo-profiles";
+export { DEMO_PROFILES, INVENTED_COLD_PROFILE, INVENTED_WARM_PROFILE } from "./demoProfiles";
 export { equationOfTime_min } from "./equationOfTime";
 export { erfcx } from "./erfcx";
 export { frostPoint_K, iceVapourPressure_hPa } from "./frostPoint";

@@ -8,11 +8,11 @@
  * its permalink is printed. Exit 1 when the steady state did not converge.
  */
 
-import { runJob } from "../engine/jobs";
-import type { MechanismSource } from "../engine/mechanism-source";
-import { compileSource } from "../engine/mechanism-source";
-import { parseAnalysisRequest } from "../engine/request-schema";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { compileSource } from "../engine/mechanismSource";
+import { parseAnalysisRequest } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
+import { runJob } from "../runtime/taskTable";
 import { ANALYSIS_CSV_TABLES, type AnalysisCsvTable } from "../service/csv";
 import { conditionEntries } from "../service/provenanceBlock";
 import { analysisSummary } from "./analysisSummary";

@@ -14,7 +14,7 @@ export interface CliIo {
   stderr: (text: string) => void;
   /** true when stderr is a terminal: progress bars are drawn on it */
   stderrIsTTY: boolean;
-  /** the bundled engine worker (lib/engine/worker-entry.ts) for sweeps; absent: levels run in this thread */
+  /** the bundled engine worker (lib/runtime/workerEntry.ts) for sweeps; absent: levels run in this thread */
   workerScript?: string;
 }
 

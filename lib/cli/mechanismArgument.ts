@@ -4,7 +4,7 @@
  * results carry the same mechanism id as the service would give it.
  */
 import path from "node:path";
-import type { MechanismSource } from "../engine/mechanism-source";
+import type { MechanismSource } from "../engine/mechanismSource";
 import { MechanismError } from "../errors";
 import { loadMechanism } from "../mechanism";
 import type { LoadedMechanism } from "../mechanism/types";

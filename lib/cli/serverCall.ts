@@ -4,7 +4,7 @@
  * by its own id); the service's answers and refusals become the command's output and one-line errors.
  */
 import { ApiError, OzoneCyclesClient } from "../client";
-import type { MechanismSource } from "../engine/mechanism-source";
+import type { MechanismSource } from "../engine/mechanismSource";
 import { CliError, EXIT } from "./io";
 
 /** A client of the service at `url`; an address that is not http(s) is a usage error. */

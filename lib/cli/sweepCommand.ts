@@ -7,10 +7,10 @@
  * service instead (serverCall.ts), and its permalink is printed on stderr.
  */
 import path from "node:path";
-import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
+import { DEMO_PROFILES } from "../atmosphere/demoProfiles";
 import { CLIENT_DEFAULTS } from "../client";
-import type { MechanismSource } from "../engine/mechanism-source";
-import { compileSource } from "../engine/mechanism-source";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { compileSource } from "../engine/mechanismSource";
 import { prepareSweep, runPreparedSweep } from "../profiles/prepareSweep";
 import { parseSweepRequest } from "../profiles/requestSchema";
 import { useParallel } from "../profiles/runSweep";

@@ -10,11 +10,11 @@
  * chains one after another.
  */
 
-import type { MechanismSource } from "../engine/mechanism-source";
-import { compileSource } from "../engine/mechanism-source";
-import { EnginePool, POOL_DEFAULTS } from "../engine/pool";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { compileSource } from "../engine/mechanismSource";
 import { runLevelBatch } from "../profiles/runLevelBatch";
 import { inlineExecutor, type SweepExecutor } from "../profiles/runSweep";
+import { EnginePool, POOL_DEFAULTS } from "../runtime/pool";
 
 export interface ClosableExecutor extends SweepExecutor {
   close(): Promise<void>;

@@ -5,10 +5,10 @@
  * and path. Uses the global fetch (Node 18+, browsers); nothing else.
  */
 import type { AssessmentSpec, InstructorAssessment, StudentAssessment } from "../assessment/types";
-import type { Health } from "../engine/health";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import type { ComparisonRequest, SweepRequest } from "../profiles/types";
 import type { RunRequest } from "../runs/types";
+import type { Health } from "../runtime/health";
 import type { AnalysisRecord } from "../service/analyses";
 import type { JobView } from "../service/jobs";
 import type { StoredComparisonRecord, StoredProfileRecord } from "../service/profiles";

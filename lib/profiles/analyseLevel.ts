@@ -4,7 +4,7 @@
  * so that the stored request and its explorer link reproduce the level.
  */
 import { DOBSON_UNIT_cm2 } from "../atmosphere";
-import { type AnalysisRun, analyse } from "../engine/run-analysis";
+import { type AnalysisRun, analyse } from "../engine/runAnalysis";
 import type { AnalysisRequest } from "../engine/types";
 import type { CompiledMechanism } from "../mechanism/types";
 

@@ -6,8 +6,8 @@
  * both run the same sweep for the same request.
  */
 import type { DemoProfile } from "../atmosphere/types";
-import { compileSource, type MechanismSource } from "../engine/mechanism-source";
-import { resolveCondition } from "../engine/resolve-condition";
+import { compileSource, type MechanismSource } from "../engine/mechanismSource";
+import { resolveCondition } from "../engine/resolveCondition";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
 import { resolveProfileSpec } from "./builtinProfiles";

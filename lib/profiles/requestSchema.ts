@@ -3,7 +3,7 @@
  * routes and the pages. The per-level condition reuses the analysis schema.
  */
 import { z } from "zod";
-import { conditionSchema, finiteIn, parseWith } from "../engine/request-schema";
+import { conditionSchema, finiteIn, parseWith } from "../engine/requestSchema";
 import { InputError } from "../errors";
 import type { ComparisonRequest, SweepRequest } from "./types";
 

@@ -4,7 +4,7 @@
  * the run), the first condition resolved (bad overrides fail here, not
  * inside a job), the options with their defaults.
  */
-import { resolveCondition } from "../engine/resolve-condition";
+import { resolveCondition } from "../engine/resolveCondition";
 import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";
 import { parseTrajectoryCsv } from "./parseTrajectoryCsv";

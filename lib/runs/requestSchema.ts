@@ -5,7 +5,7 @@
  * 1 MiB (and 10,000 rows, parseTrajectoryCsv.ts).
  */
 import { z } from "zod";
-import { conditionSchema, finiteIn, parseWith } from "../engine/request-schema";
+import { conditionSchema, finiteIn, parseWith } from "../engine/requestSchema";
 import type { RunRequest } from "./types";
 
 export const RUN_LIMITS = {

@@ -10,7 +10,7 @@
  * engine knows flows through unchanged. Units: h, s, K, hPa, cm⁻³, degrees.
  */
 import { airNumberDensity_cm3, BOLTZMANN_J_K, dayOfYear, solarZenithAngle } from "../atmosphere";
-import { jAt, resolveCondition, solveConditionsOf, yearOf } from "../engine/resolve-condition";
+import { jAt, resolveCondition, solveConditionsOf, yearOf } from "../engine/resolveCondition";
 import type { ConditionInput, ResolvedCondition } from "../engine/types";
 import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";

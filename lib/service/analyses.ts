@@ -9,9 +9,9 @@
  * unless its permalink is opened, copied or exported (pinAnalysis).
  */
 import "server-only";
-import { enginePool } from "../engine/pool";
-import { parseAnalysisRequest } from "../engine/request-schema";
+import { parseAnalysisRequest } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
+import { enginePool } from "../runtime/pool";
 import { getStore } from "../store";
 import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";

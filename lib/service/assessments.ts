@@ -25,10 +25,10 @@ import {
   studentView,
 } from "../assessment";
 import { sortFamilies, stepsInMechanismOrder, stepText } from "../assessment/templates/cycleText";
-import { enginePool } from "../engine/pool";
-import { parseWith } from "../engine/request-schema";
+import { parseWith } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "../engine/types";
 import { ENGINE_VERSION } from "../engine/version";
+import { enginePool } from "../runtime/pool";
 import { newRecordId } from "../store";
 import { type CsvExportOptions, type CsvProvenance, csvExport, csvMechanism } from "./csvProvenance";
 import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";

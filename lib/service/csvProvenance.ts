@@ -7,7 +7,7 @@
  * "CSV exports"; the keys are listed there).
  */
 import "server-only";
-import { compileSource } from "../engine/mechanism-source";
+import { compileSource } from "../engine/mechanismSource";
 import { InputError } from "../errors";
 import { mechanismSource } from "./mechanisms";
 import { type CsvMechanism, type CsvProvenance, provenanceBlock } from "./provenanceBlock";

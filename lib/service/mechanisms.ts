@@ -7,11 +7,11 @@
  * stored before that keep working.
  */
 import "server-only";
-import type { MechanismSource } from "../engine/mechanism-source";
-import { compileSource } from "../engine/mechanism-source";
-import { summarise } from "../engine/mechanism-summary";
-import { enginePool } from "../engine/pool";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { compileSource } from "../engine/mechanismSource";
+import { summarise } from "../engine/mechanismSummary";
 import { builtinMechanisms, loadBuiltinMechanism } from "../mechanism";
+import { enginePool } from "../runtime/pool";
 import { getStore, ID_PATTERN, newRecordId } from "../store";
 import { notFound } from "./http";
 import { DELETION_NOTE, deleteWithToken, liveOrThrow, newDeletionToken } from "./lifecycle";

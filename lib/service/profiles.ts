@@ -6,10 +6,9 @@
  * of the stored result, not a failed job.
  */
 import "server-only";
-import { DEMO_PROFILES } from "../atmosphere/demo-profiles";
+import { DEMO_PROFILES } from "../atmosphere/demoProfiles";
 import type { DemoProfile } from "../atmosphere/types";
-import type { MechanismSource } from "../engine/mechanism-source";
-import { enginePool, POOL_DEFAULTS } from "../engine/pool";
+import type { MechanismSource } from "../engine/mechanismSource";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
 import type { JobContext, TaskRunner } from "../jobs/types";
@@ -22,6 +21,7 @@ import { parseComparisonRequest, parseSweepRequest } from "../profiles/requestSc
 import type { LevelBatchResult } from "../profiles/runLevelBatch";
 import type { SweepExecutor, SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
+import { enginePool, POOL_DEFAULTS } from "../runtime/pool";
 import { getStore, ID_PATTERN } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { liveOrThrow } from "./lifecycle";

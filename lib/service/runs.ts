@@ -8,8 +8,7 @@
  * result with its status and the hours up to the failure, not a failed job.
  */
 import "server-only";
-import { compileSource, type MechanismSource } from "../engine/mechanism-source";
-import { enginePool } from "../engine/pool";
+import { compileSource, type MechanismSource } from "../engine/mechanismSource";
 import { ENGINE_VERSION } from "../engine/version";
 import { InputError } from "../errors";
 import type { JobContext, TaskRunner } from "../jobs/types";
@@ -33,6 +32,7 @@ import {
   type StartSpec,
   type StartState,
 } from "../runs";
+import { enginePool } from "../runtime/pool";
 import { getStore, ID_PATTERN } from "../store";
 import { getAnalysisRecord } from "./analyses";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";

@@ -1,41 +1,42 @@
 /**
  * Uncertainty jobs: Monte Carlo ranges (and sensitivities) of one analysis or
- * of every level of a stored profile sweep, run in the engine pool with
- * progress. One analysis: the central solve is one pool job, the samples go
- * out in batches (job kind "uncertainty-samples"), and the result is stored
- * as an analysis record with `result.uncertainty` (so GET /api/analyses/{id}
- * and its CSV exports show it). A profile: one pool job per level (the
- * level's analysis with the uncertainty options, samples in that worker),
- * stored as a record of kind "uncertainty-profile" with the family-share
- * bands against altitude.
+ * of every level of a stored profile sweep, with progress, on the shared job
+ * back end (embedded, or BullMQ when REDIS_URL is set). The handler sends its
+ * tasks to `ctx.tasks` when the back end distributes them (queue workers),
+ * else to the process's engine pool. One analysis: the central solve is one
+ * task, the samples go out in batches (task kind "uncertainty-samples";
+ * scheduling in lib/engine/analysisWithUncertainty.ts and
+ * lib/uncertainty/runSampleBatches.ts), and the result is stored as an
+ * analysis record with `result.uncertainty` (so GET /api/analyses/{id} and
+ * its CSV exports show it). A profile: the converged levels, a few at once,
+ * each as one analysis with its samples, stored as a record of kind
+ * "uncertainty-profile" with the family-share bands against altitude.
  *
  * The handler here is registered in lib/service/jobs.ts; submitting, reading
  * and cancelling go through lib/service/uncertaintyJobs.ts (see
  * docs/uncertainty.md, "Routes").
  */
-import { solveConditionsOf } from "../engine/resolve-condition";
 import "server-only";
-import { compileSource, type MechanismSource } from "../engine/mechanism-source";
-import { enginePool, POOL_DEFAULTS } from "../engine/pool";
-import { parseWith } from "../engine/request-schema";
+import { analysisWithUncertainty, type UncertaintyExecutor } from "../engine/analysisWithUncertainty";
+import type { MechanismSource } from "../engine/mechanismSource";
+import { parseWith } from "../engine/requestSchema";
 import type { AnalysisRequest, AnalysisResult } from "../engine/types";
-import type { JobContext } from "../jobs/types";
+import type { JobContext, TaskRunner } from "../jobs/types";
+import { enginePool, POOL_DEFAULTS } from "../runtime/pool";
 import {
-  finishMonteCarlo,
+  inLanes,
   type MonteCarloResult,
   type ProfileBand,
-  planMonteCarlo,
   profileShareBands,
   type SampleBatchResult,
   type SensitivityReport,
 } from "../uncertainty";
 import { mechanismSource } from "./mechanisms";
 import { getProfileRecord } from "./profiles";
+import { liveRecord, putNewAnalysis, putNewRecord } from "./records";
 import { type UncertaintyJobInput, uncertaintyJobSchema } from "./uncertaintyJobSchema";
 
 export type { UncertaintyJobInput };
-
-import { liveRecord, putNewAnalysis, putNewRecord } from "./records";
 
 export const UNCERTAINTY_PROFILE_KIND = "uncertainty-profile";
 export const MAX_UNCERTAINTY_BODY = 256 * 1024;
@@ -59,112 +60,30 @@ export interface UncertaintyProfileBody {
   elapsed_ms: number;
 }
 
-/**
- * Runs `work` over the items with at most one more in flight than the pool
- * has workers, in item order, checking for cancellation before each; the
- * results keep the items' order.
- */
-async function inLanes<T, R>(items: readonly T[], signal: AbortSignal, work: (item: T) => Promise<R>): Promise<R[]> {
-  const out = new Array<R>(items.length);
-  let next = 0;
-  const lane = async () => {
-    while (next < items.length) {
-      if (signal.aborted) throw signal.reason;
-      const i = next++;
-      out[i] = await work(items[i]);
-    }
-  };
-  await Promise.all(Array.from({ length: Math.min(items.length, POOL_DEFAULTS.size + 1) }, lane));
-  return out;
-}
-
 export const UNCERTAINTY_JOB_DEFAULTS = {
-  /** time limit of one pool job of these kinds, ms (a sensitivity run at 10 km on the reference mechanism takes about a minute) */
+  /** time limit of one engine-pool task of these jobs, ms (a sensitivity run at 10 km on the reference mechanism takes about a minute) */
   timeout_ms: 600_000,
-  /** samples in the first batch of a level, which measures the cost of a sample */
-  probeBatch: 4,
-  /** later batches are sized to take about this long, ms */
-  batchTarget_ms: 1500,
-  /** most samples in one batch */
-  maxBatch: 50,
 };
 
-/** Counts units of work for the progress report of one job. */
-interface Progress {
-  step(done: number, stage: string): void;
-}
-
-/**
- * One analysis with its uncertainty: the central solve (with the
- * sensitivities when asked) as one pool job, then the samples in batches,
- * the first small and the rest sized from its cost, so that no job runs
- * long whatever the level costs (a sample at 10 km costs ~40× one at 40 km).
- */
-async function analysisWithUncertainty(
-  src: MechanismSource,
-  request: AnalysisRequest,
-  signal: AbortSignal,
-  progress: Progress,
-): Promise<AnalysisResult> {
-  const t0 = performance.now();
-  const samples = request.options?.uncertaintySamples ?? 0;
-  const centralRequest = { ...request, options: { ...request.options, uncertaintySamples: 0 } };
-  const limit = UNCERTAINTY_JOB_DEFAULTS.timeout_ms;
-  const { result } = await enginePool().run({ kind: "analysis", mechanism: src, request: centralRequest }, limit);
-  progress.step(1, "central steady state");
-  const out: AnalysisResult = { ...result, options: { ...result.options, ...request.options } };
-  const warnings = [...(result.uncertainty?.warnings ?? [])];
-  if (samples > 0 && result.condition.mode === "diurnal")
-    warnings.push("Monte Carlo ranges need the instantaneous steady state; not computed in the 24-hour mode");
-  else if (samples > 0 && result.steadyState.status !== "converged")
-    warnings.push(`no Monte Carlo ranges: the central steady state did not converge (${result.steadyState.message})`);
-  else if (samples > 0) {
-    const mech = compileSource(src);
-    const plan = planMonteCarlo(
-      mech,
-      // every field the engine solved with (also the aerosol surface of uptake reactions)
-      solveConditionsOf(result.condition),
-      result.steadyState,
-      result.cycles,
-      {
-        fminRelative: result.options.fminRelative,
-        oxDefinition: result.options.oxDefinition,
-        heldSpecies: Object.keys(result.condition.held_cm3),
-      },
-      { samples, seed: request.options?.uncertaintySeed, batchSize: samples },
-    );
-    const template = plan.batches[0];
-    const { probeBatch, batchTarget_ms, maxBatch } = UNCERTAINTY_JOB_DEFAULTS;
-    let cursor = 0;
-    let spent_ms = 0;
-    let measured = 0;
-    const results: SampleBatchResult[] = [];
-    const runOne = async () => {
-      if (signal.aborted) throw signal.reason;
-      const size =
-        measured === 0
-          ? probeBatch
-          : Math.max(1, Math.min(maxBatch, Math.floor(batchTarget_ms / (spent_ms / measured))));
-      const batch = { ...template, start: cursor, count: Math.min(size, samples - cursor) };
-      cursor += batch.count;
-      const b0 = performance.now();
-      results.push((await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch }, limit)).result);
-      spent_ms += performance.now() - b0;
-      measured += batch.count;
-      progress.step(batch.count, "Monte Carlo samples");
+/** The process's engine pool, or the job back end's task runner when it distributes tasks (BullMQ). */
+function uncertaintyExecutor(src: MechanismSource, tasks?: TaskRunner): UncertaintyExecutor {
+  if (tasks) {
+    return {
+      workers: tasks.parallel,
+      analysis: async (request) =>
+        ((await tasks.run({ kind: "analysis", mechanism: src, request })) as { result: AnalysisResult }).result,
+      samples: async (batch) =>
+        ((await tasks.run({ kind: "uncertainty-samples", mechanism: src, batch })) as { result: SampleBatchResult })
+          .result,
     };
-    // the probe batch alone, then one lane more than the pool has workers
-    await runOne();
-    await Promise.all(
-      Array.from({ length: POOL_DEFAULTS.size + 1 }, async () => {
-        while (cursor < samples) await runOne();
-      }),
-    );
-    const monteCarlo: MonteCarloResult = finishMonteCarlo(plan, results, performance.now() - t0);
-    out.uncertainty = { ...result.uncertainty, monteCarlo, warnings };
   }
-  if (!out.uncertainty && warnings.length > 0) out.uncertainty = { warnings };
-  return out;
+  const limit = UNCERTAINTY_JOB_DEFAULTS.timeout_ms;
+  return {
+    workers: POOL_DEFAULTS.size,
+    analysis: async (request) => (await enginePool().run({ kind: "analysis", mechanism: src, request }, limit)).result,
+    samples: async (batch) =>
+      (await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch }, limit)).result,
+  };
 }
 
 /** One analysis: stores an analysis record with `result.uncertainty`. */
@@ -174,8 +93,9 @@ async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
   let done = 0;
   const total = samples + 1;
   ctx.progress(0, total, "central steady state");
-  const out = await analysisWithUncertainty(src, request, ctx.signal, {
-    step: (n, stage) => {
+  const out = await analysisWithUncertainty(src, request, uncertaintyExecutor(src, ctx.tasks), {
+    signal: ctx.signal,
+    onProgress: (n, stage) => {
       done += n;
       ctx.progress(done, total, done > 1 ? `${stage} (${done - 1} of ${samples})` : stage);
     },
@@ -183,7 +103,7 @@ async function analysisJob(request: AnalysisRequest, ctx: JobContext) {
   return { resultId: await putNewAnalysis({ mechanismId: src.id, request, result: out }), resultKind: "analysis" };
 }
 
-/** Every converged level of a stored sweep, as analysisWithUncertainty; stores an uncertainty-profile record. */
+/** Every converged level of a stored sweep, each as analysisWithUncertainty; stores an uncertainty-profile record. */
 async function profileJob(input: Extract<UncertaintyJobInput, { profileId: string }>, ctx: JobContext) {
   const t0 = performance.now();
   const profile = await getProfileRecord(input.profileId, "profileId");
@@ -195,14 +115,15 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
   let done = 0;
   let levelsDone = 0;
   ctx.progress(0, total, "levels");
-  const progress: Progress = {
-    step: (n) => {
-      done += n;
-      ctx.progress(done, total, `levels (${levelsDone} of ${converged} done)`);
-    },
+  const executor = uncertaintyExecutor(src, ctx.tasks);
+  const onProgress = (n: number) => {
+    done += n;
+    ctx.progress(done, total, `levels (${levelsDone} of ${converged} done)`);
   };
   const results: UncertaintyProfileLevel[] = await inLanes(
     levels.map((level, i) => ({ level, i })),
+    // one level more in flight than the executor has workers
+    executor.workers + 1,
     ctx.signal,
     async ({ level, i }): Promise<UncertaintyProfileLevel> => {
       const base = { altitude_km: level.altitude_km, monteCarlo: null, sensitivity: null };
@@ -219,7 +140,7 @@ async function profileJob(input: Extract<UncertaintyJobInput, { profileId: strin
         },
       };
       try {
-        const result = await analysisWithUncertainty(src, request, ctx.signal, progress);
+        const result = await analysisWithUncertainty(src, request, executor, { signal: ctx.signal, onProgress });
         levelsDone++;
         return {
           ...base,

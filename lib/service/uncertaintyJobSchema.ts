@@ -4,7 +4,7 @@
  * OpenAPI document can be built from it anywhere.
  */
 import { z } from "zod";
-import { analysisRequestSchema } from "../engine/request-schema";
+import { analysisRequestSchema } from "../engine/requestSchema";
 
 export const uncertaintyJobSchema = z.union([
   z.object({ analysis: analysisRequestSchema }).strict(),

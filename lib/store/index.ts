@@ -4,8 +4,8 @@ import type { Store } from "./types";
 
 export { ID_PATTERN, mechanismContentId, newRecordId } from "./ids";
 export { openStore, type StoreConfig } from "./openStore";
-export { openPostgresStore, POSTGRES_DEFAULTS, type PostgresOptions } from "./postgres-store";
-export { openSqliteStore } from "./sqlite-store";
+export { openPostgresStore, POSTGRES_DEFAULTS, type PostgresOptions } from "./postgresStore";
+export { openSqliteStore } from "./sqliteStore";
 export type { RecordRef, Store, StoredAnalysis, StoredMechanism, StoredRecord } from "./types";
 
 let store: Store | null = null;

@@ -4,8 +4,8 @@
  * SQLite at $OZONE_DATA_DIR/ozone.sqlite (default ./data).
  */
 import path from "node:path";
-import { openPostgresStore } from "./postgres-store";
-import { openSqliteStore } from "./sqlite-store";
+import { openPostgresStore } from "./postgresStore";
+import { openSqliteStore } from "./sqliteStore";
 import type { Store } from "./types";
 
 export interface StoreConfig {

@@ -10,7 +10,7 @@ import { analyseCycles, findPathways, oxWeights } from "@/lib/analysis";
 import { eliminationWork, isElementary } from "@/lib/analysis/elementaryModes";
 import { reactionNet } from "@/lib/analysis/reactionNet";
 import { valueAt } from "@/lib/analysis/sparseVector";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { expectClose } from "../helpers/close";
 

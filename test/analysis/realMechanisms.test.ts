@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { CycleReport } from "@/lib/analysis";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { expectClose } from "../helpers/close";
 

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { type AssessmentSpec, generateAssessment, parseAssessmentSpec } from "@/lib/assessment";
-import { compileSource } from "@/lib/engine/mechanism-source";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { compileSource } from "@/lib/engine/mechanismSource";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 import { expectClose } from "../helpers/close";
 

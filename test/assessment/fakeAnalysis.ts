@@ -6,7 +6,7 @@
  * generator, key and marking be tested without the science core.
  */
 import type { CatalyticCycle } from "@/lib/analysis/types";
-import { ANALYSIS_DEFAULTS } from "@/lib/engine/run-analysis";
+import { ANALYSIS_DEFAULTS } from "@/lib/engine/runAnalysis";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 
 export const CLOX_CYCLE = "R3+R4";

@@ -7,7 +7,7 @@
  */
 import { beforeAll, describe, expect, it } from "vitest";
 import { withoutCsvComments } from "@/lib/csv";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";

@@ -3,8 +3,8 @@
  * request schema and the resolution, with errors that name the field.
  */
 import { describe, expect, it } from "vitest";
-import { parseAnalysisRequest } from "@/lib/engine/request-schema";
-import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolve-condition";
+import { parseAnalysisRequest } from "@/lib/engine/requestSchema";
+import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolveCondition";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 

@@ -7,7 +7,7 @@
  * the radical families.
  */
 import { describe, expect, it } from "vitest";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisResult, ConditionInput } from "@/lib/engine/types";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 

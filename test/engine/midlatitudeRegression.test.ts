@@ -11,7 +11,7 @@
  */
 import { readFileSync } from "node:fs";
 import { describe, it } from "vitest";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisMode } from "@/lib/engine/types";
 import { loadBuiltinMechanism, loadMechanism } from "@/lib/mechanism";
 import { expectClose } from "../helpers/close";

@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { POLAR_VORTEX_DEMO } from "@/lib/engine/demoConditions";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisResult, ConditionInput } from "@/lib/engine/types";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 

@@ -8,8 +8,8 @@
  * the ordinary names, so no outside source applies.
  */
 import { describe, expect, it } from "vitest";
-import { parseAnalysisRequest } from "@/lib/engine/request-schema";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { parseAnalysisRequest } from "@/lib/engine/requestSchema";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisResult, ConditionInput } from "@/lib/engine/types";
 import { ownValue } from "@/lib/idRecord";
 import { loadMechanism } from "@/lib/mechanism";

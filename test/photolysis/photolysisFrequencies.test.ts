@@ -123,7 +123,7 @@ describe("photolysisFrequencies", () => {
       { altitude_km: 60, zenith_deg: 0, T_K: 250, o3ColumnAbove_cm2: 0 },
       { wavelengthRange_nm: [200, 300], albedo: 0 },
     );
-    expect(J.O3_O1D / (J.O3_O1D + J.O3_O)).toBeCloseTo(0.9, 6);
+    expectClose(J.O3_O1D / (J.O3_O1D + J.O3_O), 0.9, { abs: 5e-7 }, "O(1D) yield");
   });
 
   it("sums J as Σ σφF: doubling the sun doubles every J (jScale), and fixed values pass through unscaled", () => {

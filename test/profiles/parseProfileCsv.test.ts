@@ -66,8 +66,9 @@ describe("parseProfileCsv", () => {
     const p = parseProfileCsv(
       `"altitude (km)","T (K)","p (hPa)","total:Iy (pptv)","held:NOy (ppbv)"\n20,216.65,55.29,1.5,3\n`,
     );
-    expect(p.levels[0].poolTotals?.Iy).toBeCloseTo(1.5e-12, 20);
-    expect(p.levels[0].held?.NOy).toBeCloseTo(3e-9, 20);
+    // 1.5 pptv and 3 ppbv as mol/mol (unit conversion)
+    expectClose(p.levels[0].poolTotals?.Iy as number, 1.5e-12, { rel: 1e-12 }, "total Iy");
+    expectClose(p.levels[0].held?.NOy as number, 3e-9, { rel: 1e-12 }, "held NOy");
   });
 
   it("throws naming the header row when a required column is missing", () => {

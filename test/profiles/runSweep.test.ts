@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { columnsAboveLevels, DOBSON_UNIT_cm2, ozoneColumnAbove_cm2 } from "@/lib/atmosphere";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisResult } from "@/lib/engine/types";
 import { EngineError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";

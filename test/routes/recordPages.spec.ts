@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { type APIRequestContext, expect, test } from "@playwright/test";
-import { openSqliteStore } from "../../lib/store/sqlite-store";
+import { openSqliteStore } from "../../lib/store/sqliteStore";
 import { finish } from "./finishJob";
 import { smallAssessment } from "./smallAssessment";
 

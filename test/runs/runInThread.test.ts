@@ -6,7 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { findPathways } from "../../lib/analysis";
 import { reactionNet } from "../../lib/analysis/reactionNet";
-import { runAnalysis } from "../../lib/engine/run-analysis";
+import { runAnalysis } from "../../lib/engine/runAnalysis";
 import { loadBuiltinMechanism } from "../../lib/mechanism";
 import { poolTotalsOf, runInThread } from "../../lib/runs";
 import { expectClose } from "../helpers/close";

@@ -6,8 +6,8 @@ import path from "node:path";
 import pg from "pg";
 import { afterAll, describe, expect, it } from "vitest";
 import { openStore } from "@/lib/store/openStore";
-import { openPostgresStore } from "@/lib/store/postgres-store";
-import { openSqliteStore } from "@/lib/store/sqlite-store";
+import { openPostgresStore } from "@/lib/store/postgresStore";
+import { openSqliteStore } from "@/lib/store/sqliteStore";
 import { databaseUrl } from "./services";
 import { describeStoreContract } from "./storeContract";
 

@@ -5,12 +5,12 @@
 import { execFileSync } from "node:child_process";
 import { type Job, Queue } from "bullmq";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
-import { POOL_DEFAULTS } from "@/lib/engine/pool";
 import { BullmqJobBackend } from "@/lib/jobs/bullmqBackend";
 import { type BullmqConfig, bullmqConfigFromEnv, connect, JOBS_QUEUE, TASKS_QUEUE } from "@/lib/jobs/bullmqConfig";
 import { EmbeddedJobBackend } from "@/lib/jobs/embeddedBackend";
 import { isFinal, type JobBackend, type JobStatus } from "@/lib/jobs/types";
 import type { SweepRequest, SweepResult } from "@/lib/profiles/types";
+import { POOL_DEFAULTS } from "@/lib/runtime/pool";
 import { JOB_HANDLERS } from "@/lib/service/jobs";
 import { getProfileRecord, validateSweep } from "@/lib/service/profiles";
 import { expectClose } from "../helpers/close";

@@ -10,7 +10,7 @@ import { Validator } from "@seriousme/openapi-schema-validator";
 import { Ajv2020 } from "ajv/dist/2020.js";
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { analysisRequestSchema } from "@/lib/engine/request-schema";
+import { analysisRequestSchema } from "@/lib/engine/requestSchema";
 import { parseComparisonRequest } from "@/lib/profiles";
 import { jsonSchemaOf } from "@/lib/service/jsonSchemaOf";
 import { GENERATED_SCHEMAS, openApiDocument } from "@/lib/service/openapi";
@@ -133,7 +133,7 @@ describe("the document's request schemas and the routes' zod schemas", () => {
     );
   });
 
-  // Bodies at and across the schemas' bounds (the bounds themselves: lib/engine/request-schema.ts and the other
+  // Bodies at and across the schemas' bounds (the bounds themselves: lib/engine/requestSchema.ts and the other
   // request schemas). Each is given to the route's parser and to ajv with the document's schema.
   const at30 = { mechanismId: "reference", condition: { altitude_km: 30 } };
   const sweep = { mechanismId: "reference", profile: { kind: "standard" } };

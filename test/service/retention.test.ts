@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { RETENTION_DEFAULTS, retentionConfigFromEnv, retentionPass } from "@/lib/service/retention";
-import { openSqliteStore } from "@/lib/store/sqlite-store";
+import { openSqliteStore } from "@/lib/store/sqliteStore";
 import type { Store } from "@/lib/store/types";
 
 vi.mock("server-only", () => ({}));

@@ -5,7 +5,7 @@
  * on the reference mechanism in an invented cold vortex parcel with NAT.
  */
 import { describe, expect, it } from "vitest";
-import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolve-condition";
+import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolveCondition";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { solveSteadyState } from "@/lib/solver";
 import { buildSystem } from "@/lib/solver/buildSystem";

@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { openNetwork } from "@/bench/generators/openNetwork";
-import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolve-condition";
+import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolveCondition";
 import { loadBuiltinMechanism, loadMechanism } from "@/lib/mechanism";
 import type { CompiledMechanism } from "@/lib/mechanism/types";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { parseAnalysisRequest } from "@/lib/engine/request-schema";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { parseAnalysisRequest } from "@/lib/engine/requestSchema";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisRequest } from "@/lib/engine/types";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { solveConditionsOf } from "@/lib/engine/resolve-condition";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { solveConditionsOf } from "@/lib/engine/resolveCondition";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import { InputError } from "@/lib/errors";
 import { uncertaintyFactor } from "@/lib/kinetics";
 import { loadBuiltinMechanism } from "@/lib/mechanism";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { analyseCycles } from "@/lib/analysis";
-import { solveConditionsOf } from "@/lib/engine/resolve-condition";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { solveConditionsOf } from "@/lib/engine/resolveCondition";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { ConditionInput } from "@/lib/engine/types";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";

@@ -13,8 +13,8 @@ vi.hoisted(() => {
   delete process.env.DATABASE_URL;
 });
 vi.mock("server-only", () => ({}));
-vi.mock("@/lib/engine/pool", async () => {
-  const { runJob } = await import("@/lib/engine/jobs");
+vi.mock("@/lib/runtime/pool", async () => {
+  const { runJob } = await import("@/lib/runtime/taskTable");
   // yield to the event loop before each job, as a real worker round trip does
   const pool = {
     run: async (job: Parameters<typeof runJob>[0]) => {
@@ -25,8 +25,8 @@ vi.mock("@/lib/engine/pool", async () => {
   return { enginePool: () => pool, POOL_DEFAULTS: { size: 2, timeout_ms: 30_000, script: "" } };
 });
 
-import { solveConditionsOf } from "@/lib/engine/resolve-condition";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { solveConditionsOf } from "@/lib/engine/resolveCondition";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import { InputError } from "@/lib/errors";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { getAnalysisRecord } from "@/lib/service/analyses";
@@ -34,6 +34,7 @@ import { getUncertaintyProfile } from "@/lib/service/uncertainty";
 import { cancelUncertaintyJob, getUncertaintyJob, startUncertaintyJob } from "@/lib/service/uncertaintyJobs";
 import { getStore, newRecordId } from "@/lib/store";
 import { monteCarlo } from "@/lib/uncertainty";
+import { expectClose } from "../helpers/close";
 
 async function finished(id: string) {
   for (let i = 0; i < 600; i++) {
@@ -93,7 +94,13 @@ describe("uncertainty jobs", () => {
     expect(s.state).toBe("done");
     const mc = (await getAnalysisRecord(s.resultId as string)).result.uncertainty?.monteCarlo;
     const direct = inThread(volcanic, 12, 5);
-    expect(solveConditionsOf(direct.condition).aerosolSurface_cm2cm3).toBeCloseTo(20e-8, 20);
+    // 20 µm² cm⁻³ = 20 × 10⁻⁸ cm² cm⁻³ (unit conversion)
+    expectClose(
+      solveConditionsOf(direct.condition).aerosolSurface_cm2cm3 as number,
+      20e-8,
+      { rel: 1e-12 },
+      "aerosol surface",
+    );
     expect(mc?.failed).toBe(0);
     expect(mc?.summaries).toEqual(direct.mc.summaries);
   });

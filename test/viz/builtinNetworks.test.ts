@@ -6,7 +6,7 @@
  * label boxes, hidden counts) at 20, 30 and 40 km.
  */
 import { beforeAll, describe, expect, it } from "vitest";
-import { runAnalysis } from "@/lib/engine/run-analysis";
+import { runAnalysis } from "@/lib/engine/runAnalysis";
 import type { AnalysisResult } from "@/lib/engine/types";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { familyOf } from "@/lib/analysis/familyOf";
 import { cycleMap, loopFamilies } from "@/lib/viz/cycleMap";
 import { cycleMapSvg } from "@/lib/viz/cycleMapSvg";
+import { expectClose } from "../helpers/close";
 import { fixtureMechanism, fixtureResult } from "./fixture";
 
 // the fixture's cycles and shares are invented round values (test/viz/fixture.ts)
@@ -20,7 +21,7 @@ describe("cycleMap", () => {
     const [a, b] = map.loops;
     // fixture: 1.6e6 and 1.2e6 molecules cm⁻³ s⁻¹
     expect(a.width).toBe(12);
-    expect(b.width / a.width).toBeCloseTo(1.2 / 1.6, 2);
+    expectClose(b.width / a.width, 1.2 / 1.6, { abs: 5e-3 }, "width ratio");
     // 12 × 1.0e5 / 1.6e6 = 0.75 px is below the thinnest width drawn
     expect(map.loops[2].width).toBe(1);
   });
@@ -31,9 +32,11 @@ describe("cycleMap", () => {
     expect(small.loops).toHaveLength(1);
     expect(small.other.count).toBe(2);
     const drawn = small.loops.reduce((a, l) => a + l.share, 0);
-    expect(drawn + small.other.share).toBeCloseTo(
+    expectClose(
+      drawn + small.other.share,
       report.cycles.reduce((a, c) => a + c.share, 0),
-      12,
+      { abs: 5e-13 },
+      "shares",
     );
   });
 

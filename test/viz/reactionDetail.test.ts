@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { reactionDetail } from "@/lib/viz/reactionDetail";
+import { expectClose } from "../helpers/close";
 import { fixtureMechanism, fixtureResult } from "./fixture";
 
 // the fixture is invented (test/viz/fixture.ts); its rates are round values chosen for these tests
@@ -23,7 +24,7 @@ describe("reactionDetail", () => {
   it("states the share of the total flux the drawn reactions carry", () => {
     const d = reactionDetail(fixtureMechanism, fixtureResult, { limit: 2 });
     const total = fixtureResult.steadyState.reactions.reduce((a, r) => a + r.rate_cm3s, 0);
-    expect(d.covered).toBeCloseTo((3.0e7 + 2.4e7) / total, 12);
+    expectClose(d.covered as number, (3.0e7 + 2.4e7) / total, { rel: 1e-12 }, "covered share");
   });
 
   it("ranks by the odd oxygen destroyed in the Ox colour mode", () => {

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { standardAtmosphere } from "@/lib/atmosphere";
-import { parseWith } from "@/lib/engine/request-schema";
+import { parseWith } from "@/lib/engine/requestSchema";
 import { respond } from "@/lib/service/http";
 
 export const dynamic = "force-dynamic";

@@ -1,4 +1,4 @@
-import { health } from "@/lib/engine/health";
+import { health } from "@/lib/runtime/health";
 
 export const dynamic = "force-dynamic";
 

@@ -1,7 +1,7 @@
 /**
  * What the routes show of a compiled mechanism: its species, reactions,
  * pools, conservation relations and warnings, as plain JSON. Computed in an
- * engine worker for an upload (lib/engine/jobs.ts "describe-mechanism"), so
+ * engine worker for an upload (lib/runtime/taskTable.ts "describe-mechanism"), so
  * that compiling a large stored document never holds the main thread.
  */
 import type { CompiledMechanism } from "../mechanism/types";

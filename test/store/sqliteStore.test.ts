@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterEach, describe, expect, it } from "vitest";
 import { mechanismContentId, newRecordId } from "@/lib/store/ids";
-import { openSqliteStore } from "@/lib/store/sqlite-store";
+import { openSqliteStore } from "@/lib/store/sqliteStore";
 import { describeStoreContract } from "../scale/storeContract";
 
 const dirs: string[] = [];

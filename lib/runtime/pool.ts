@@ -7,7 +7,7 @@ import { availableParallelism } from "node:os";
 import path from "node:path";
 import { Worker } from "node:worker_threads";
 import { EngineError } from "../errors";
-import type { EngineJob, EngineJobResult } from "./jobs";
+import type { EngineJob, EngineJobResult } from "./taskTable";
 
 export const POOL_DEFAULTS = {
   /** worker threads; default: the number of cores */

@@ -1,7 +1,16 @@
 /**
- * The engine's units of work, as plain messages that cross a worker-thread
- * boundary. `runJob` executes one in the current thread.
+ * The task table: every kind of engine task (an analysis, profile levels,
+ * Monte Carlo samples, days of a run, an upload check), as plain messages
+ * that cross a worker-thread or queue boundary. `runJob` executes one in the
+ * current thread (lib/runtime/workerEntry.ts in a worker thread, the
+ * command line in its own).
  */
+
+import { checkUploadBody, type UploadCheck } from "../engine/checkUpload";
+import { compileSource, type MechanismSource } from "../engine/mechanismSource";
+import { summarise } from "../engine/mechanismSummary";
+import { runAnalysis } from "../engine/runAnalysis";
+import type { AnalysisRequest, AnalysisResult } from "../engine/types";
 import { EngineError } from "../errors";
 import { type LevelBatch, type LevelBatchResult, runLevelBatch } from "../profiles/runLevelBatch";
 import { type RunDaysTask, type RunStartTask, runDaysTask, runStartTask } from "../runs/runTasks";
@@ -9,11 +18,6 @@ import type { StartState } from "../runs/startState";
 import type { RunSegment } from "../runs/types";
 import { runSampleBatch, type SampleBatch } from "../uncertainty/runSampleBatch";
 import type { SampleBatchResult } from "../uncertainty/types";
-import { checkUploadBody, type UploadCheck } from "./check-upload";
-import { compileSource, type MechanismSource } from "./mechanism-source";
-import { summarise } from "./mechanism-summary";
-import { runAnalysis } from "./run-analysis";
-import type { AnalysisRequest, AnalysisResult } from "./types";
 
 export type EngineJob =
   | { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] }
@@ -25,7 +29,7 @@ export type EngineJob =
   | { kind: "run-start"; mechanism: MechanismSource; task: RunStartTask }
   /** a span of days of a run from a state (lib/runs) */
   | { kind: "run-days"; mechanism: MechanismSource; task: RunDaysTask }
-  /** parse and check an upload's raw body off the main thread (lib/engine/check-upload.ts); `body` is transferred */
+  /** parse and check an upload's raw body off the main thread (lib/engine/checkUpload.ts); `body` is transferred */
   | { kind: "check-upload"; body: Uint8Array; contentType: string }
   /** an uploaded mechanism's species, reactions and pools (its text stays with the caller) */
   | { kind: "describe-mechanism"; mechanism: MechanismSource };

@@ -1,6 +1,6 @@
 import packageJson from "../../package.json";
+import { ENGINE_VERSION } from "../engine/version";
 import { builtinMechanisms } from "../mechanism";
-import { ENGINE_VERSION } from "./version";
 
 export interface Health {
   status: "ok";

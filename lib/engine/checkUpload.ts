@@ -10,7 +10,7 @@ import { type Diagnostic, EngineError, MechanismError } from "../errors";
 import { jsonTooDeep, loadMechanism, missingContent, NESTING_DEFAULTS } from "../mechanism";
 import { mechanismContentId } from "../store/ids";
 import { engineLimitWarnings } from "./engineLimits";
-import { parseWith } from "./request-schema";
+import { parseWith } from "./requestSchema";
 
 export interface UploadCheck {
   /** SHA-256 address of the canonical document, kept inside the store (never an id handed out) */

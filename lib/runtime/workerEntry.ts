@@ -1,7 +1,7 @@
 /** Entry point of an engine worker thread (bundled to .engine/worker.mjs). */
 import { parentPort } from "node:worker_threads";
 import { EngineError } from "../errors";
-import { type EngineJob, runJob } from "./jobs";
+import { type EngineJob, runJob } from "./taskTable";
 
 parentPort?.on("message", (msg: { id: number; job: EngineJob }) => {
   try {

@@ -11,7 +11,7 @@ import { solveDiurnal, solveSteadyState } from "../solver";
 import type { SteadyState } from "../solver/types";
 import { analysisUncertainty } from "../uncertainty/analysisUncertainty";
 import { checkEngineLimits } from "./engineLimits";
-import { jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolve-condition";
+import { jAt, resolveCondition, solveConditionsOf, yearOf } from "./resolveCondition";
 import type { AnalysisOptions, AnalysisRequest, AnalysisResult, DiurnalSummary } from "./types";
 import { ENGINE_VERSION } from "./version";
 
