@@ -18,12 +18,11 @@ import { comparisonCsv } from "../profiles/csvTables";
 import { type PreparedSweep, prepareSweep, runPreparedSweep } from "../profiles/prepareSweep";
 import { profileToCsv } from "../profiles/profileToCsv";
 import { parseComparisonRequest, parseSweepRequest } from "../profiles/requestSchema";
-import type { LevelBatchResult } from "../profiles/runLevelBatch";
 import type { SweepExecutor, SweepProgress } from "../profiles/runSweep";
 import type { ComparisonRequest, ComparisonResult, Profile, SweepRequest, SweepResult } from "../profiles/types";
-import { enginePool, POOL_DEFAULTS } from "../runtime/pool";
 import { getStore, ID_PATTERN } from "../store";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
+import { engineTasks } from "./engineTasks";
 import { liveOrThrow } from "./lifecycle";
 import { listMechanisms, mechanismSource } from "./mechanisms";
 import {
@@ -70,19 +69,10 @@ async function prepare(request: SweepRequest, path = ""): Promise<PreparedSweep>
   return prepareSweep(request, src, DEMOS, path);
 }
 
-/** The process's engine pool, or the job back end's task runner when it distributes tasks (BullMQ). */
+/** The sweep's level batches, on queue workers or in the engine pool (engineTasks). */
 function poolExecutor(src: MechanismSource, tasks?: TaskRunner): SweepExecutor {
-  if (tasks) {
-    return {
-      workers: tasks.parallel,
-      run: async (batch) =>
-        ((await tasks.run({ kind: "profile-levels", mechanism: src, batch })) as { result: LevelBatchResult }).result,
-    };
-  }
-  return {
-    workers: POOL_DEFAULTS.size,
-    run: async (batch) => (await enginePool().run({ kind: "profile-levels", mechanism: src, batch })).result,
-  };
+  const t = engineTasks(tasks);
+  return { workers: t.workers, run: (batch) => t.run({ kind: "profile-levels", mechanism: src, batch }) };
 }
 
 function runPrepared(

@@ -32,10 +32,10 @@ import {
   type StartSpec,
   type StartState,
 } from "../runs";
-import { enginePool } from "../runtime/pool";
 import { getStore, ID_PATTERN } from "../store";
 import { getAnalysisRecord } from "./analyses";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
+import { engineTasks } from "./engineTasks";
 import { notFound } from "./http";
 import { mechanismSource } from "./mechanisms";
 import { liveRecord, putNewAnalysis, putNewRecord, type RecordView, recordView } from "./records";
@@ -98,17 +98,12 @@ export async function validateRun(body: unknown): Promise<RunRequest> {
   return request;
 }
 
-/** The process's engine pool, or the back end's task runner when it distributes tasks (BullMQ). */
+/** The run's tasks, on queue workers or in the engine pool (engineTasks). */
 function runTask(src: MechanismSource, tasks?: TaskRunner) {
+  const t = engineTasks(tasks);
   return {
-    start: async (task: RunStartTask): Promise<StartState> =>
-      tasks
-        ? ((await tasks.run({ kind: "run-start", mechanism: src, task })) as { result: StartState }).result
-        : (await enginePool().run({ kind: "run-start", mechanism: src, task })).result,
-    days: async (task: RunDaysTask): Promise<RunSegment> =>
-      tasks
-        ? ((await tasks.run({ kind: "run-days", mechanism: src, task })) as { result: RunSegment }).result
-        : (await enginePool().run({ kind: "run-days", mechanism: src, task })).result,
+    start: (task: RunStartTask): Promise<StartState> => t.run({ kind: "run-start", mechanism: src, task }),
+    days: (task: RunDaysTask): Promise<RunSegment> => t.run({ kind: "run-days", mechanism: src, task }),
   };
 }
 

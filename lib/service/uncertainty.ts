@@ -20,17 +20,16 @@ import "server-only";
 import { analysisWithUncertainty, type UncertaintyExecutor } from "../engine/analysisWithUncertainty";
 import type { MechanismSource } from "../engine/mechanismSource";
 import { parseWith } from "../engine/requestSchema";
-import type { AnalysisRequest, AnalysisResult } from "../engine/types";
+import type { AnalysisRequest } from "../engine/types";
 import type { JobContext, TaskRunner } from "../jobs/types";
-import { enginePool, POOL_DEFAULTS } from "../runtime/pool";
 import {
   inLanes,
   type MonteCarloResult,
   type ProfileBand,
   profileShareBands,
-  type SampleBatchResult,
   type SensitivityReport,
 } from "../uncertainty";
+import { engineTasks } from "./engineTasks";
 import { mechanismSource } from "./mechanisms";
 import { getProfileRecord } from "./profiles";
 import { liveRecord, putNewAnalysis, putNewRecord } from "./records";
@@ -65,24 +64,13 @@ export const UNCERTAINTY_JOB_DEFAULTS = {
   timeout_ms: 600_000,
 };
 
-/** The process's engine pool, or the job back end's task runner when it distributes tasks (BullMQ). */
+/** The Monte Carlo's tasks, on queue workers or in the engine pool (engineTasks). */
 function uncertaintyExecutor(src: MechanismSource, tasks?: TaskRunner): UncertaintyExecutor {
-  if (tasks) {
-    return {
-      workers: tasks.parallel,
-      analysis: async (request) =>
-        ((await tasks.run({ kind: "analysis", mechanism: src, request })) as { result: AnalysisResult }).result,
-      samples: async (batch) =>
-        ((await tasks.run({ kind: "uncertainty-samples", mechanism: src, batch })) as { result: SampleBatchResult })
-          .result,
-    };
-  }
-  const limit = UNCERTAINTY_JOB_DEFAULTS.timeout_ms;
+  const t = engineTasks(tasks, UNCERTAINTY_JOB_DEFAULTS.timeout_ms);
   return {
-    workers: POOL_DEFAULTS.size,
-    analysis: async (request) => (await enginePool().run({ kind: "analysis", mechanism: src, request }, limit)).result,
-    samples: async (batch) =>
-      (await enginePool().run({ kind: "uncertainty-samples", mechanism: src, batch }, limit)).result,
+    workers: t.workers,
+    analysis: (request) => t.run({ kind: "analysis", mechanism: src, request }),
+    samples: (batch) => t.run({ kind: "uncertainty-samples", mechanism: src, batch }),
   };
 }
 
