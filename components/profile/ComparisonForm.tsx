@@ -5,7 +5,7 @@
  */
 import { useCallback, useState } from "react";
 import type { SweepGrid } from "@/lib/profiles/types";
-import { submitJob } from "../ui/apiClient";
+import { type SubmittedJob, submitJob } from "../ui/apiClient";
 import { GridFields } from "./GridFields";
 import { JobProgress } from "./JobProgress";
 import { SideFields } from "./SideFields";
@@ -31,7 +31,7 @@ export function ComparisonForm({
   const [b, setB] = useState<SideState>(defaultSide({ source: demoB }));
   const [labels, setLabels] = useState({ a: "", b: "" });
   const [grid, setGrid] = useState<SweepGrid>({});
-  const [jobId, setJobId] = useState<string | null>(null);
+  const [job, setJob] = useState<SubmittedJob | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const onEnd = useCallback(() => setBusy(false), []);
@@ -62,7 +62,7 @@ export function ComparisonForm({
         b: sideOf(b, grid),
         labels: { ...(labels.a ? { a: labels.a } : {}), ...(labels.b ? { b: labels.b } : {}) },
       };
-      setJobId(await submitJob("/api/comparisons", body));
+      setJob(await submitJob("/api/comparisons", body));
     } catch (err) {
       setError((err as Error).message);
       setBusy(false);
@@ -131,7 +131,7 @@ export function ComparisonForm({
           {error}
         </p>
       ) : null}
-      {jobId ? <JobProgress jobId={jobId} what="Comparison" onEnd={onEnd} /> : null}
+      {job ? <JobProgress jobId={job.id} deletionToken={job.deletionToken} what="Comparison" onEnd={onEnd} /> : null}
     </form>
   );
 }

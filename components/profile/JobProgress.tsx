@@ -1,7 +1,9 @@
 "use client";
 /**
  * Follows a job by polling GET /api/jobs/{id}: a progress bar with the levels
- * done, a cancel button, and on success a move to the result's permalink.
+ * done, a cancel button, and on success a move to the result's permalink
+ * (carrying the stored record's deletion token in the address fragment, which
+ * the page shows once with DeletionTokenNote and removes).
  */
 import { useRouter } from "next/navigation";
 import { useEffect, useState } from "react";
@@ -21,11 +23,14 @@ export const POLL_MS = 400;
 
 export function JobProgress({
   jobId,
+  deletionToken,
   what,
   onEnd,
   unit = "levels",
 }: {
   jobId: string;
+  /** the token its start returned, for the result's page */
+  deletionToken?: string;
   what: string;
   onEnd?(state: string): void;
   /** what `done` and `total` count; default "levels" */
@@ -46,7 +51,7 @@ export function JobProgress({
         setNetError(null);
         if (body.state === "done" && body.resultUrl) {
           onEnd?.("done");
-          router.push(body.resultUrl);
+          router.push(deletionToken ? `${body.resultUrl}#deletion-token=${deletionToken}` : body.resultUrl);
           return;
         }
         if (body.state === "failed" || body.state === "cancelled") {
@@ -64,7 +69,7 @@ export function JobProgress({
       stop = true;
       if (timer) clearTimeout(timer);
     };
-  }, [jobId, router, onEnd]);
+  }, [jobId, deletionToken, router, onEnd]);
 
   const total = Math.max(job?.total ?? 0, 1);
   const done = Math.min(job?.done ?? 0, total);

@@ -2,7 +2,7 @@
 /** One profile, its levels, and the sweep run as a job. */
 import { useCallback, useState } from "react";
 import type { SweepGrid } from "@/lib/profiles/types";
-import { submitJob } from "../ui/apiClient";
+import { type SubmittedJob, submitJob } from "../ui/apiClient";
 import { GridFields } from "./GridFields";
 import { JobProgress } from "./JobProgress";
 import { SideFields } from "./SideFields";
@@ -12,7 +12,7 @@ import type { MechanismOption, ProfileOption } from "./types";
 export function SweepForm({ mechanisms, profiles }: { mechanisms: MechanismOption[]; profiles: ProfileOption[] }) {
   const [side, setSide] = useState<SideState>(defaultSide());
   const [grid, setGrid] = useState<SweepGrid>({});
-  const [jobId, setJobId] = useState<string | null>(null);
+  const [job, setJob] = useState<SubmittedJob | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const onEnd = useCallback(() => setBusy(false), []);
@@ -21,7 +21,7 @@ export function SweepForm({ mechanisms, profiles }: { mechanisms: MechanismOptio
     setError(null);
     setBusy(true);
     try {
-      setJobId(await submitJob("/api/profiles", sweepRequestOf(side, grid)));
+      setJob(await submitJob("/api/profiles", sweepRequestOf(side, grid)));
     } catch (err) {
       setError((err as Error).message);
       setBusy(false);
@@ -50,7 +50,7 @@ export function SweepForm({ mechanisms, profiles }: { mechanisms: MechanismOptio
           {error}
         </p>
       ) : null}
-      {jobId ? <JobProgress jobId={jobId} what="Sweep" onEnd={onEnd} /> : null}
+      {job ? <JobProgress jobId={job.id} deletionToken={job.deletionToken} what="Sweep" onEnd={onEnd} /> : null}
     </form>
   );
 }

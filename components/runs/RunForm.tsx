@@ -2,7 +2,7 @@
 /** A run at a fixed place or along an uploaded trajectory, or one of the invented demos, started as a job. */
 import { useCallback, useState } from "react";
 import { JobProgress } from "@/components/profile/JobProgress";
-import { submitJob } from "@/components/ui/apiClient";
+import { type SubmittedJob, submitJob } from "@/components/ui/apiClient";
 import { CONDITION_DEFAULTS } from "@/lib/atmosphere/condition";
 import type { RunRequest } from "@/lib/runs/types";
 
@@ -22,7 +22,7 @@ export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title
   const [date, setDate] = useState<string>(CONDITION_DEFAULTS.date);
   const [days, setDays] = useState("10");
   const [trajectory, setTrajectory] = useState("");
-  const [jobId, setJobId] = useState<string | null>(null);
+  const [job, setJob] = useState<SubmittedJob | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const onEnd = useCallback(() => setBusy(false), []);
@@ -30,9 +30,9 @@ export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title
   const start = async (request: RunRequest) => {
     setError(null);
     setBusy(true);
-    setJobId(null);
+    setJob(null);
     try {
-      setJobId(await submitJob("/api/runs", request));
+      setJob(await submitJob("/api/runs", request));
     } catch (err) {
       setError((err as Error).message);
       setBusy(false);
@@ -115,7 +115,9 @@ export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title
           {error}
         </p>
       ) : null}
-      {jobId ? <JobProgress jobId={jobId} what="Run" onEnd={onEnd} unit="days" /> : null}
+      {job ? (
+        <JobProgress jobId={job.id} deletionToken={job.deletionToken} what="Run" onEnd={onEnd} unit="days" />
+      ) : null}
     </div>
   );
 }

@@ -79,8 +79,14 @@ export const postText = <T>(url: string, text: string, contentType: string) =>
   requestJson<T>(url, { method: "POST", headers: { "content-type": contentType }, body: text });
 
 /** POSTs a job-starting request and returns the job's id. */
-export async function submitJob(url: string, body: unknown): Promise<string> {
-  const out = await postJson<{ id?: unknown } | null>(url, body);
+export async function submitJob(url: string, body: unknown): Promise<SubmittedJob> {
+  const out = await postJson<{ id?: unknown; deletionToken?: unknown } | null>(url, body);
   if (typeof out?.id !== "string") throw new ApiError(0, "no-job", `${url} answered without a job id`);
-  return out.id;
+  return { id: out.id, deletionToken: typeof out.deletionToken === "string" ? out.deletionToken : undefined };
+}
+
+/** A started job, and the deletion token of the record it will store (shown once, on the record's page). */
+export interface SubmittedJob {
+  id: string;
+  deletionToken?: string;
 }

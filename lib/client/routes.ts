@@ -30,6 +30,7 @@ export const CLIENT_ROUTES = {
   pinAnalysis: { method: "post", path: "/api/analyses/{id}/pin" },
   deleteSweep: { method: "delete", path: "/api/profiles/{id}" },
   deleteComparison: { method: "delete", path: "/api/comparisons/{id}" },
+  deleteRun: { method: "delete", path: "/api/runs/{id}" },
   deleteAssessment: { method: "delete", path: "/api/assessments/{id}" },
   revokeStudentLink: { method: "delete", path: "/api/assessments/student/{id}" },
   getJob: { method: "get", path: "/api/jobs/{id}" },
@@ -48,6 +49,7 @@ export const DELETE_METHOD = {
   analysis: "deleteAnalysis",
   sweep: "deleteSweep",
   comparison: "deleteComparison",
+  run: "deleteRun",
   assessment: "deleteAssessment",
   studentLink: "revokeStudentLink",
 } as const satisfies Record<string, ClientMethod>;

@@ -100,8 +100,8 @@ export async function deleteSweepRecord(kind: "profile" | "comparison", id: stri
 }
 
 /** Starts a run over days (no deletion token: a run record is kept until retention removes it). */
-export async function startRun(body: unknown, client = "local"): Promise<JobView> {
-  return jobView(await submitForClient(client, "run", await validateRun(body)));
+export async function startRun(body: unknown, client = "local"): Promise<StartedJob> {
+  return submitDeletable("run", await validateRun(body), client);
 }
 
 const JOB_ID = /^[A-Za-z0-9_-]{16}$/;

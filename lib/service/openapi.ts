@@ -230,6 +230,7 @@ const runPaths = {
     "/api/runs",
     "A stored run: { id, createdAt, engineVersion, body: { request, result } }; a failed integration has status failed, failedAt_h and the hours up to then",
     "run",
+    "a stored run (the analyses opened at its hours stay)",
   ),
   "/api/runs/{id}/hours.csv": runCsv("The hourly state (T, [M], zenith angle, O3 in ppbv, every number density)"),
   "/api/runs/{id}/rates.csv": runCsv("The hourly rate of every reaction"),

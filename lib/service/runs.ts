@@ -37,6 +37,7 @@ import { getAnalysisRecord } from "./analyses";
 import { type CsvExportOptions, csvExport, csvMechanism } from "./csvProvenance";
 import { engineTasks } from "./engineTasks";
 import { notFound } from "./http";
+import { deleteWithToken } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";
 import { liveRecord, putNewAnalysis, putNewRecord, type RecordView, recordView } from "./records";
 
@@ -112,8 +113,9 @@ export interface RunRecordBody {
   result: RunResult;
 }
 
-/** Job handler "run". */
-export async function runJob(input: RunRequest, ctx: JobContext) {
+/** Job handler "run"; `deleteHash`: the hash of the deletion token its start returned. */
+export async function runJob(job: RunRequest & { deleteHash?: string }, ctx: JobContext) {
+  const { deleteHash, ...input } = job;
   const t0 = performance.now();
   const p = await prepareRun(input);
   const mech = compileSource(p.src);
@@ -153,10 +155,15 @@ export async function runJob(input: RunRequest, ctx: JobContext) {
     }),
   );
   const body: RunRecordBody = { request: input, result };
-  return { resultId: await putNewRecord(RUN_KIND, body), resultKind: RUN_KIND };
+  return { resultId: await putNewRecord(RUN_KIND, body, { deleteHash }), resultKind: RUN_KIND };
 }
 
 export type StoredRunRecord = RecordView<RunRecordBody>;
+
+/** DELETE of a stored run with the token its job was started with (its hourly analyses stay: records of their own). */
+export async function deleteRunRecord(id: string, token: string | null): Promise<void> {
+  await deleteWithToken([{ kind: RUN_KIND, id }], token, "run");
+}
 
 export async function getRunRecord(id: string): Promise<StoredRunRecord> {
   return recordView(await liveRecord(RUN_KIND, id, "run"));

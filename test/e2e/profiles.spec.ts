@@ -65,6 +65,7 @@ test("an uploaded CSV with a bad cell is refused with the row and column named",
   await page.getByRole("combobox", { name: /^Mechanism/ }).selectOption("oxygen-chlorine");
   await page.getByRole("button", { name: "Run the sweep" }).click();
   await page.waitForURL(/\/profiles\/[A-Za-z0-9_-]{16}$/, { timeout: 120_000 });
+  await expect(page.getByTestId("deletion-token")).toContainText("DELETE /api/profiles/");
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Profile sweep: my test");
   await expect(page.getByTestId("levels-table").locator("tbody tr")).toHaveCount(6);
   await expect(page.getByTestId("chart-loss")).toBeVisible();

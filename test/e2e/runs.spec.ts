@@ -9,6 +9,9 @@ test("the invented cold-vortex parcel runs from the runs page, shows ozone falli
   await page.getByTestId("demo-invented-vortex-parcel").click();
   await expect(page.getByRole("progressbar")).toBeVisible();
   await page.waitForURL(/\/runs\/[A-Za-z0-9_-]{16}$/, { timeout: 240_000 });
+  // the run's deletion token, shown once on its page (it came in the address fragment, now removed)
+  await expect(page.getByTestId("deletion-token")).toContainText("DELETE /api/runs/");
+  expect(page.url()).not.toContain("deletion-token");
 
   await expect(page.getByRole("heading", { level: 1 })).toContainText("invented");
   await expect(page.getByTestId("run-status")).toContainText("20 days integrated");

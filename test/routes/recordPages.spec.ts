@@ -3,7 +3,6 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { type APIRequestContext, expect, test } from "@playwright/test";
-import { openSqliteStore } from "../../lib/store/sqliteStore";
 import { finish } from "./finishJob";
 import { smallAssessment } from "./smallAssessment";
 
@@ -97,13 +96,12 @@ test.describe("pages of deleted records answer 410 Gone with a page saying so", 
     expect(done.state).toBe("done");
     expect((await request.get(`/runs/${done.resultId}`)).status()).toBe(200);
     expect((await request.get(`/runs/${done.resultId}/at/999`, { maxRedirects: 0 })).status()).toBe(404);
-    // runs have no DELETE route yet: the row is tombstoned through the store, as a deletion would
-    const store = openSqliteStore("test-results/e2e-data/ozone.sqlite");
-    try {
-      expect(await store.tombstone({ kind: "run", id: done.resultId }, new Date().toISOString())).toBe(true);
-    } finally {
-      await store.close();
-    }
+    // DELETE with the token the run's start returned: wrong token 403, then 204, then the pages answer 410
+    const url = `/api/runs/${done.resultId}`;
+    const wrong = "A".repeat(43);
+    expect((await request.delete(url, { headers: { "x-deletion-token": wrong } })).status()).toBe(403);
+    expect((await request.delete(url, { headers: { "x-deletion-token": job.deletionToken } })).status()).toBe(204);
+    expect((await request.delete(url, { headers: { "x-deletion-token": job.deletionToken } })).status()).toBe(410);
     await expectGone(request, `/runs/${done.resultId}`, "run");
     await expectGone(request, `/runs/${done.resultId}/at/12`, "run");
     expect((await request.get(`/api/runs/${done.resultId}`)).status()).toBe(410);

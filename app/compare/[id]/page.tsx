@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { DeletionTokenNote } from "@/components/DeletionTokenNote";
 import { ComparisonView } from "@/components/profile/ComparisonView";
 import { recordForPage } from "@/lib/service/pageRecord";
 import { getComparisonRecord } from "@/lib/service/profiles";
@@ -13,6 +14,10 @@ export default async function ComparisonPage({ params }: { params: Promise<{ id:
   if (!record) notFound();
   return (
     <div className="mx-auto max-w-7xl px-4 py-6">
+      <DeletionTokenNote
+        what="this comparison (the sweeps it ran stay; the same token deletes each on its own API URL, /api/profiles/{id})"
+        deleteUrl={`/api/comparisons/${record.id}`}
+      />
       <ComparisonView id={record.id} result={record.body.result} createdAt={record.createdAt} />
     </div>
   );

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { DeletionTokenNote } from "@/components/DeletionTokenNote";
 import { SweepView } from "@/components/profile/SweepView";
 import { recordForPage } from "@/lib/service/pageRecord";
 import { getProfileRecord } from "@/lib/service/profiles";
@@ -33,6 +34,7 @@ export default async function ProfilePage({ params }: { params: Promise<{ id: st
   };
   return (
     <div className="mx-auto max-w-7xl px-4 py-6">
+      <DeletionTokenNote what="this profile sweep" deleteUrl={`/api/profiles/${record.id}`} />
       <SweepView id={record.id} result={result} createdAt={record.createdAt} explorerLinks={links} />
     </div>
   );

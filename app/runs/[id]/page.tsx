@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { DeletionTokenNote } from "@/components/DeletionTokenNote";
 import { RunView } from "@/components/runs/RunView";
 import { dailyLossChart, runChartSeries, timeLineChart } from "@/lib/runs";
 import { recordForPage } from "@/lib/service/pageRecord";
@@ -16,6 +17,10 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
   const s = runChartSeries(r);
   return (
     <div className="mx-auto max-w-6xl px-4 py-8">
+      <DeletionTokenNote
+        what="this run (the analyses opened at its hours stay: each is a record of its own)"
+        deleteUrl={`/api/runs/${id}`}
+      />
       <RunView
         id={id}
         title={r.title}
