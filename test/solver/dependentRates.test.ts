@@ -7,38 +7,16 @@
 import { describe, expect, it } from "vitest";
 import { resolveCondition, solveConditionsOf } from "@/lib/engine/resolveCondition";
 import { loadBuiltinMechanism } from "@/lib/mechanism";
-import { solveSteadyState } from "@/lib/solver";
-import { buildSystem } from "@/lib/solver/buildSystem";
-import {
-  effectiveConstants,
-  jacobianLinear,
-  jacobianLog,
-  productionLoss,
-  reactionRates,
-} from "@/lib/solver/massAction";
-import { rateConstants } from "@/lib/solver/rateConstants";
+import { jacobianLinear, jacobianLog, reactionRates } from "@/lib/solver/massAction";
 import { expectClose } from "../helpers/close";
+import { offSteadyPoint } from "./offSteadyPoint";
 
 const mech = loadBuiltinMechanism("reference").mechanism;
 const cond = solveConditionsOf(
   resolveCondition(mech, { altitude_km: 19, T_K: 192, latitude_deg: 70, date: "2026-03-01", cloud: "NAT" }),
 );
-const sys = buildSystem(mech, cond);
-const kEff = effectiveConstants(sys, rateConstants(mech, cond), new Float64Array(sys.nReactions));
-const n = sys.n;
-const state = solveSteadyState(mech, cond);
-const x0 = Float64Array.from(sys.unknownSpecies, (s, i) => state.numberDensity_cm3[s] * (1 + 0.3 * Math.sin(i + 1)));
+const { sys, kEff, n, state, x0, tendency } = offSteadyPoint(mech, cond);
 const idx = (id: string) => mech.reactions.findIndex((r) => r.id === id);
-
-function tendency(x: Float64Array, gross?: Float64Array): Float64Array {
-  const rates = new Float64Array(sys.nReactions);
-  const P = new Float64Array(n);
-  const L = new Float64Array(n);
-  reactionRates(sys, kEff, x, rates);
-  productionLoss(sys, rates, P, L);
-  if (gross) for (let i = 0; i < n; i++) gross[i] = P[i] + L[i];
-  return P.map((p, i) => p - L[i]);
-}
 
 describe("amount-dependent surface reactions", () => {
   it("lists the sulfate and partner-limited reactions, and no constant-γ uptake", () => {

@@ -4,37 +4,14 @@
  */
 import { describe, expect, it } from "vitest";
 import { loadBuiltinMechanism } from "../../lib/mechanism";
-import { solveSteadyState } from "../../lib/solver";
-import { buildSystem } from "../../lib/solver/buildSystem";
-import {
-  effectiveConstants,
-  jacobianLinear,
-  jacobianLog,
-  productionLoss,
-  reactionRates,
-} from "../../lib/solver/massAction";
-import { rateConstants } from "../../lib/solver/rateConstants";
+import { jacobianLinear, jacobianLog, reactionRates } from "../../lib/solver/massAction";
 import { expectClose } from "../helpers/close";
+import { offSteadyPoint } from "./offSteadyPoint";
 import { realisticConditions } from "./realistic";
 
 const mech = loadBuiltinMechanism("reference").mechanism;
 const cond = realisticConditions(mech, 30, 30, "solved");
-const sys = buildSystem(mech, cond);
-const kEff = effectiveConstants(sys, rateConstants(mech, cond), new Float64Array(sys.nReactions));
-const n = sys.n;
-const state = solveSteadyState(mech, cond);
-// a point off the steady state, so that no derivative vanishes by balance
-const x0 = Float64Array.from(sys.unknownSpecies, (s, i) => state.numberDensity_cm3[s] * (1 + 0.3 * Math.sin(i + 1)));
-
-function tendency(x: Float64Array, gross?: Float64Array): Float64Array {
-  const rates = new Float64Array(sys.nReactions);
-  const P = new Float64Array(n);
-  const L = new Float64Array(n);
-  reactionRates(sys, kEff, x, rates);
-  productionLoss(sys, rates, P, L);
-  if (gross) for (let i = 0; i < n; i++) gross[i] = P[i] + L[i];
-  return P.map((p, i) => p - L[i]);
-}
+const { sys, kEff, n, x0, tendency } = offSteadyPoint(mech, cond);
 
 describe("mass-action Jacobian", () => {
   it("matches central differences in ln x to 1e-6 relative", () => {
