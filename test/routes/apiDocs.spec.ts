@@ -97,7 +97,8 @@ test.describe("the examples of docs/api.md", () => {
   test("the Python program runs with the standard library alone", async ({ baseURL }) => {
     test.setTimeout(180_000);
     const probe = await run("python3", ["--version"], {}, os.tmpdir());
-    expect(probe.code, "python3 is needed to run the Python example of docs/api.md (apt-get install -y python3)").toBe(0);
+    const needed = "python3 is needed to run the Python example of docs/api.md (apt-get install -y python3)";
+    expect(probe.code, needed).toBe(0);
     const program = block("## Python, standard library only", "python");
     const imports = [...program.matchAll(/^import (\S+)/gm)].map((m) => m[1].split(".")[0]);
     expect(new Set(imports)).toEqual(new Set(["json", "os", "time", "urllib"]));
