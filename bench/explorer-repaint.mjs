@@ -4,6 +4,12 @@
 // (client cache); writes bench/results/repaint.json. No pass/fail: figures
 // from a shared 2-core machine are noisy.
 //
+// The explorer asks for the altitudes one slider step away once a result has
+// painted (components/explorer/useAnalysis.ts), so a "new condition" step is
+// served from that answer when it arrived within the pause between steps
+// (BENCH_PAUSE_MS, default 150 ms), and waits for it, or for its own request,
+// otherwise: the figures are what a reader stepping at that pace sees.
+//
 // Needs a started server: `npm run build && PORT=3226 npm start`, then
 // `BENCH_URL=http://127.0.0.1:3226 npm run bench:repaint` (default port 3000).
 import { mkdirSync, writeFileSync } from "node:fs";
@@ -13,6 +19,7 @@ import { chromium } from "@playwright/test";
 const base = process.env.BENCH_URL ?? "http://127.0.0.1:3000";
 const steps = Number(process.env.BENCH_STEPS ?? 24);
 const start_km = 30;
+const pause_ms = Number(process.env.BENCH_PAUSE_MS ?? 150);
 
 const quantile = (xs, q) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -65,12 +72,12 @@ let km = start_km;
 for (let i = 0; i < steps; i++) {
   km += 0.5;
   fresh.push(await step("ArrowRight", km));
-  await page.waitForTimeout(150);
+  await page.waitForTimeout(pause_ms);
 }
 for (let i = 0; i < steps; i++) {
   km -= 0.5;
   cached.push(await step("ArrowLeft", km));
-  await page.waitForTimeout(150);
+  await page.waitForTimeout(pause_ms);
 }
 await browser.close();
 
@@ -83,6 +90,7 @@ const summary = (xs) => ({
 const out = {
   at: new Date().toISOString(),
   loadAverage: os.loadavg().map((v) => Math.round(v * 10) / 10),
+  pause_ms,
   newCondition: summary(fresh),
   revisited: summary(cached),
   raw_ms: { newCondition: fresh.map(Math.round), revisited: cached.map(Math.round) },

@@ -9,6 +9,7 @@ import { CONDITION_DEFAULTS, type ConditionInput, type ResolvedCondition } from 
 import { CLOUD_DEFAULTS, type CloudType } from "@/lib/atmosphere/polarCloud";
 import { standardAtmosphere } from "@/lib/atmosphere/standardAtmosphere";
 import { DEMO_CONDITIONS } from "@/lib/engine/demoConditions";
+import { ALTITUDE_SLIDER } from "@/lib/viz/altitudeNeighbours";
 import { formatNumber } from "@/lib/viz/formatNumber";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { NumberField } from "../NumberField";
@@ -152,10 +153,10 @@ export function ConditionsPanel(p: Props) {
             <input
               id="altitude"
               type="range"
-              min={0}
-              max={60}
-              step={0.5}
-              value={Math.min(60, c.altitude_km)}
+              min={ALTITUDE_SLIDER.min_km}
+              max={ALTITUDE_SLIDER.max_km}
+              step={ALTITUDE_SLIDER.step_km}
+              value={Math.min(ALTITUDE_SLIDER.max_km, c.altitude_km)}
               onChange={(e) => set({ altitude_km: Number(e.target.value) })}
               className="mt-1 w-full accent-stone-800"
               aria-valuetext={`${c.altitude_km} kilometres`}

@@ -6,6 +6,7 @@
  */
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { AnalysisRequest, AnalysisResult, ConditionInput } from "@/lib/engine/types";
+import { altitudeNeighbours } from "@/lib/viz/altitudeNeighbours";
 import { cycleHighlight } from "@/lib/viz/cycleHighlight";
 import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery";
 import { formatNumber } from "@/lib/viz/formatNumber";
@@ -103,9 +104,11 @@ export function Explorer(props: Props) {
     if (props.stored?.request.options) r.options = props.stored.request.options;
     return r;
   }, [mechanismId, condition, props.stored]);
+  const neighbours = useMemo(() => altitudeNeighbours(request), [request]);
   const analysis = useAnalysis(
     request,
     props.stored ? { id: props.stored.id, result: props.stored.result, request: props.stored.request } : undefined,
+    neighbours,
   );
   const result = analysis.result && analysis.result.mechanism.id === mechanismId ? analysis.result : null;
   const showingStored = !!props.stored && analysis.id === props.stored.id;

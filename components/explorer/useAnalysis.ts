@@ -10,6 +10,13 @@
  * analysis on screen for good (a permalink or an export was asked for): the
  * same request, computed again by the deterministic engine, so the stored
  * numbers are those shown.
+ *
+ * Once a result has stayed on screen for `PREFETCH_AFTER_MS`, the hook also
+ * asks for the `neighbours` (the conditions one key step away) that it has not
+ * seen, so that the next key step repaints from the cache; a request for a
+ * condition already being asked for waits for that answer instead of asking
+ * again. A dragged slider changes faster than that, so a drag asks for nothing
+ * extra.
  */
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
@@ -32,15 +39,20 @@ export interface AnalysisState {
   error: ApiError | null;
 }
 
+/** How long a result stays on screen before its neighbours are asked for, ms. */
+export const PREFETCH_AFTER_MS = 60;
+
 type Computed = { id: string | null; result: AnalysisResult };
 
 /**
  * @param request what to compute; null to compute nothing
  * @param initial a stored analysis shown first without recomputing it
+ * @param neighbours conditions likely to be asked for next, computed ahead once `request`'s result has painted
  */
 export function useAnalysis(
   request: AnalysisRequest | null,
   initial?: { id: string; result: AnalysisResult; request: AnalysisRequest },
+  neighbours: AnalysisRequest[] = [],
 ) {
   const [state, setState] = useState<AnalysisState>({
     id: initial?.id ?? null,
@@ -52,6 +64,22 @@ export function useAnalysis(
   const shownKey = useRef<string | null>(initial ? JSON.stringify(initial.request) : null);
   const cache = useRef(recentCache<Computed>());
   const lastChange = useRef(Number.NEGATIVE_INFINITY);
+  const inFlight = useRef(new Map<string, Promise<AnalysisResult>>());
+  const neighbourKeys = neighbours.map((n) => JSON.stringify(n)).join("\n");
+
+  /** The preview of `k`: the request already on its way if there is one, else a new one. */
+  const preview = useCallback((k: string, signal?: AbortSignal): Promise<AnalysisResult> => {
+    const asked = inFlight.current.get(k);
+    if (asked) return asked;
+    const p = previewAnalysis(JSON.parse(k) as AnalysisRequest, signal).then((out) => {
+      cache.current.set(k, { id: null, result: out.result });
+      return out.result;
+    });
+    inFlight.current.set(k, p);
+    const forget = () => inFlight.current.delete(k);
+    p.then(forget, forget);
+    return p;
+  }, []);
   if (initial && !cache.current.get(JSON.stringify(initial.request)))
     cache.current.set(JSON.stringify(initial.request), { id: initial.id, result: initial.result });
 
@@ -73,13 +101,12 @@ export function useAnalysis(
     const wait = now - lastChange.current < ANALYSIS_DEBOUNCE_MS ? ANALYSIS_DEBOUNCE_MS : 0;
     lastChange.current = now;
     const timer = setTimeout(() => {
-      previewAnalysis(JSON.parse(key) as AnalysisRequest, ctrl.signal)
-        .then((out) => {
-          cache.current.set(key, { id: null, result: out.result });
+      preview(key, ctrl.signal)
+        .then((result) => {
           // an answer that arrives after a newer request was made is kept in the cache but not painted
           if (ctrl.signal.aborted) return;
           shownKey.current = key;
-          setState({ id: null, result: out.result, loading: false, error: null });
+          setState({ id: null, result, loading: false, error: null });
         })
         .catch((e: unknown) => {
           if ((e as Error).name === "AbortError" || ctrl.signal.aborted) return;
@@ -91,7 +118,26 @@ export function useAnalysis(
       clearTimeout(timer);
       ctrl.abort();
     };
-  }, [key]);
+  }, [key, preview]);
+
+  // the neighbours of what is on screen, asked for once it has stayed a moment; their answers go to the cache only
+  const shownResult = state.result;
+  const prefetching = useRef<AbortController | null>(null);
+  useEffect(() => {
+    const ctrl = new AbortController();
+    prefetching.current = ctrl;
+    return () => ctrl.abort();
+  }, []);
+  useEffect(() => {
+    if (!shownResult || !neighbourKeys || shownKey.current !== key) return;
+    const timer = setTimeout(() => {
+      const signal = prefetching.current?.signal;
+      for (const k of neighbourKeys.split("\n"))
+        if (!cache.current.get(k) && !inFlight.current.has(k)) preview(k, signal).catch(() => undefined);
+    }, PREFETCH_AFTER_MS);
+    // a neighbour already on its way is left to finish when the condition changes: the step may be to it
+    return () => clearTimeout(timer);
+  }, [shownResult, key, neighbourKeys, preview]);
 
   /** Stores the analysis on screen (once) and resolves to its id. */
   const store = useCallback(async (): Promise<string> => {

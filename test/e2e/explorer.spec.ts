@@ -99,6 +99,32 @@ test("moving the altitude slider recomputes, changes the numbers and the address
   await shot(page, "explorer-after-slider");
 });
 
+test("once a result has painted, the next key step's altitudes are asked for ahead, and a step to one asks nothing more", async ({
+  page,
+}) => {
+  const asked: number[] = [];
+  let answered = 0;
+  const isPreview = (url: string) => url.endsWith("/api/analyses/preview");
+  page.on("request", (r) => {
+    if (r.method() === "POST" && isPreview(r.url()))
+      asked.push((r.postDataJSON() as { condition: { altitude_km: number } }).condition.altitude_km);
+  });
+  page.on("requestfinished", (r) => {
+    if (isPreview(r.url())) answered++;
+  });
+  await openExplorer(page, "m=reference&z=30");
+  // the condition in the address, then its neighbours one slider step away
+  await expect.poll(() => [...asked].sort((a, b) => a - b), { timeout: 30_000 }).toEqual([29.5, 30, 30.5]);
+  expect(asked[0]).toBe(30);
+  await expect.poll(() => answered, { timeout: 30_000 }).toBe(asked.length);
+  const before = asked.length;
+  await page.getByLabel("Altitude").focus();
+  await page.keyboard.press("ArrowRight");
+  await expect(page.getByTestId("status")).toContainText("30.5 km");
+  // the step itself painted from the cache: the only requests after it are for 30.5 km's own new neighbour
+  await expect.poll(() => asked.slice(before), { timeout: 30_000 }).toEqual([31]);
+});
+
 test("switching the colour mode recolours the edges and the legend", async ({ page }) => {
   await openExplorer(page, "m=reference&z=35");
   const flux = await edges(page);
