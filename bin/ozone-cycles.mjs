@@ -3,13 +3,15 @@
 // engine in this process; `ozone-cycles --help` lists the commands.
 import path from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { ensureCliBundles } from "../scripts/cli-bundle.mjs";
+import { stampedCliBundles } from "../scripts/cli-stamp.mjs";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 const cwd = process.cwd();
 const debug = process.argv.includes("--debug");
 try {
-  const { cli, worker } = await ensureCliBundles(root);
+  // the stamp check stats the sources; only when it fails is the bundler's module loaded (it walks lib/ and may rebuild)
+  const { cli, worker } =
+    stampedCliBundles(root) ?? (await (await import("../scripts/cli-bundle.mjs")).ensureCliBundles(root));
   // the engine reads its built-in documents relative to the working folder; the caller's files are read relative to `cwd`
   process.chdir(root);
   const { main } = await import(pathToFileURL(cli).href);
