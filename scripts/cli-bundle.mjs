@@ -16,7 +16,7 @@ import { cliBundlePaths, STAMP_FILE } from "./cli-stamp.mjs";
 import { NODE_BUNDLE, serverOnlyStub } from "./node-bundle.mjs";
 
 /** The bundle key, and the stamp (scripts/cli-stamp.mjs) that lets the launcher re-check it by statting alone. */
-function sourceKey(root) {
+export function sourceKey(root) {
   const h = createHash("sha256");
   const files = [];
   const dirs = [];
@@ -41,7 +41,7 @@ function sourceKey(root) {
 }
 
 /** Writes the stamp of `key` (temporary file and rename: several processes may write at once). */
-function writeStamp(dir, stamp) {
+export function writeStamp(dir, stamp) {
   const file = path.join(dir, STAMP_FILE);
   writeFileSync(`${file}.${process.pid}.tmp`, JSON.stringify(stamp));
   renameSync(`${file}.${process.pid}.tmp`, file);
