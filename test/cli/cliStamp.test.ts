@@ -28,7 +28,8 @@ function stampAndBundles(): string {
 
 beforeEach(() => {
   root = mkdtempSync(path.join(tmpdir(), "cli-stamp-"));
-  for (const f of ["scripts/cli-bundle.mjs", "scripts/cli-stamp.mjs", "scripts/node-bundle.mjs", "package.json"]) file(f);
+  for (const f of ["scripts/cli-bundle.mjs", "scripts/cli-stamp.mjs", "scripts/node-bundle.mjs", "package.json"])
+    file(f);
   file("lib/errors.ts", "export const a = 1;");
   file("lib/solver/newton.ts", "export const b = 2;");
 });
