@@ -53,6 +53,7 @@ export async function ensureCliBundles(root) {
   const { key, stamp } = sourceKey(root);
   const { cli, worker, storedJson } = cliBundlePaths(dir, key);
   const stored = storedJson.replace(/\.json$/, ".mjs");
+  const storedCjs = storedJson.replace(/\.json$/, ".cjs");
   // the bundles read the stored data (storeComputed) at run time
   if (existsSync(cli) && existsSync(worker) && existsSync(storedJson)) {
     writeStamp(dir, stamp);
@@ -67,21 +68,26 @@ export async function ensureCliBundles(root) {
   mkdirSync(dir, { recursive: true });
   // bundles of older sources go; several processes may build at once, so each writes a temporary file and renames it
   for (const f of readdirSync(dir)) {
-    if (/^cli-(worker-|stored-|tables-)?[0-9a-f]{16}\.(mjs|json)$/.test(f) && !f.includes(key))
+    if (/^cli-(worker-|stored-|tables-)?[0-9a-f]{16}\.(mjs|cjs|json|(\w+\.)?cache)$/.test(f) && !f.includes(key))
       rmSync(path.join(dir, f), { force: true });
   }
   const base = { ...NODE_BUNDLE, absWorkingDir: root, packages: "external", plugins: [serverOnlyStub] };
-  await storeComputed(build, base, root, stored);
+  await storeComputed(build, base, root, stored, storedCjs);
   const common = { ...base, plugins: [serverOnlyStub, prebuilt(stored)] };
   // the command line's own bundle takes its npm packages in too: esbuild then evaluates a package only when a module
   // that imports it first runs (the commands are imported when they run), where an external package is loaded at
   // start by the bundle's hoisted imports (yaml, zod, graphology: ~0.12 s of a --help run, measured at load 6)
   await Promise.all(
     [
-      [cli, "lib/cli/main.ts", { packages: undefined }],
+      // CommonJS, so that the launcher can compile it as a vm.Script with V8's code cache (cli-<key>.cache)
+      [
+        cli,
+        "lib/cli/main.ts",
+        { packages: undefined, format: "cjs", banner: {}, plugins: [serverOnlyStub, prebuilt(storedCjs)] },
+      ],
       [worker, "lib/runtime/workerEntry.ts", {}],
     ].map(async ([out, entry, extra]) => {
-      const tmp = `${out}.${process.pid}.tmp.mjs`;
+      const tmp = `${out}.${process.pid}.tmp${path.extname(out)}`;
       await build({ ...common, ...extra, entryPoints: [entry], outfile: tmp });
       renameSync(tmp, out);
     }),
@@ -91,7 +97,7 @@ export async function ensureCliBundles(root) {
 }
 
 /** Builds the spectral tables and loads the built-in mechanisms once, and writes the module that returns them. */
-async function storeComputed(build, options, root, out) {
+async function storeComputed(build, options, root, out, outCjs) {
   const tmp = `${out}.${process.pid}.build.mjs`;
   const entry = [
     'export { SPECTRAL_TABLES, spectralTablesJson } from "./lib/photolysis/spectralTables.ts";',
@@ -124,6 +130,19 @@ async function storeComputed(build, options, root, out) {
       ].join("\n"),
     );
     renameSync(`${out}.${process.pid}.tmp`, out);
+    writeFileSync(
+      `${outCjs}.${process.pid}.tmp`,
+      [
+        'const { readFileSync } = require("node:fs");',
+        'const { join } = require("node:path");',
+        "let data;",
+        `const stored = () => (data ??= JSON.parse(readFileSync(join(__dirname, ${JSON.stringify(path.basename(json))}), "utf8")));`,
+        "exports.prebuiltSpectralTables = () => stored().spectralTables;",
+        "exports.prebuiltMechanisms = () => stored().mechanisms;",
+        "",
+      ].join("\n"),
+    );
+    renameSync(`${outCjs}.${process.pid}.tmp`, outCjs);
   } finally {
     process.chdir(cwd);
     rmSync(tmp, { force: true });

@@ -29,15 +29,17 @@ export function stampedCliBundles(root) {
   for (const [rel, mtimeMs] of stamp.dirs) if (!same(rel, null, mtimeMs)) return null;
   for (const [rel, size, mtimeMs] of stamp.files) if (!same(rel, size, mtimeMs)) return null;
   const bundles = cliBundlePaths(dir, stamp.key);
-  for (const f of Object.values(bundles)) if (!statSync(f, { throwIfNoEntry: false })) return null;
+  for (const f of [bundles.cli, bundles.worker, bundles.storedJson])
+    if (!statSync(f, { throwIfNoEntry: false })) return null;
   return { cli: bundles.cli, worker: bundles.worker };
 }
 
 /** The files of the bundles of key `key` in `dir`. */
 export function cliBundlePaths(dir, key) {
   return {
-    cli: path.join(dir, `cli-${key}.mjs`),
+    cli: path.join(dir, `cli-${key}.cjs`),
     worker: path.join(dir, `cli-worker-${key}.mjs`),
     storedJson: path.join(dir, `cli-stored-${key}.json`),
+    codeCache: path.join(dir, `cli-${key}.cache`),
   };
 }

@@ -39,7 +39,7 @@ describe("stampedCliBundles", () => {
   it("accepts the stamp of unchanged sources and names the bundles of its key", () => {
     const key = stampAndBundles();
     expect(stampedCliBundles(root)).toEqual({
-      cli: path.join(root, ".engine", `cli-${key}.mjs`),
+      cli: path.join(root, ".engine", `cli-${key}.cjs`),
       worker: path.join(root, ".engine", `cli-worker-${key}.mjs`),
     });
   });
