@@ -1,8 +1,11 @@
 // The command line's two bundles, built from lib/ when its sources change:
-// .engine/cli-<key>.mjs (lib/cli/main.ts) and .engine/cli-worker-<key>.mjs
-// (the engine's worker thread, for sweeps). The key hashes the path, size
-// and modification time of every source file, so a clone runs without a
-// build step and an unchanged tree starts without bundling (tens of ms).
+// .engine/cli-<key>.cjs (lib/cli/main.ts, CommonJS with its npm packages
+// inside, run by the launcher with V8's code cache) and
+// .engine/cli-worker-<key>.mjs (the engine's worker thread, for sweeps). The
+// key hashes the path, size and modification time of every source file, so
+// a clone runs without a build step; the stamp written beside the bundles
+// (scripts/cli-stamp.mjs) lets the launcher re-check the key by statting
+// alone, so an unchanged tree starts without loading this module.
 // The engine's spectral tables (lib/photolysis/spectralTables.ts, ~0.3 s of
 // CPU to build) and the loaded built-in mechanisms (the reference YAML takes
 // ~0.15 s to parse) are made once here and stored in both bundles in place of
