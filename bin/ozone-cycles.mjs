@@ -1,18 +1,55 @@
 #!/usr/bin/env node
 // `ozone-cycles`: the command line of Ozone Loss Cycles (lib/cli). Runs the
 // engine in this process; `ozone-cycles --help` lists the commands.
+import { readFileSync, renameSync, writeFileSync } from "node:fs";
+import { createRequire } from "node:module";
 import path from "node:path";
-import { fileURLToPath, pathToFileURL } from "node:url";
-import { ensureCliBundles } from "../scripts/cli-bundle.mjs";
+import { fileURLToPath } from "node:url";
+import vm from "node:vm";
+import { cliBundlePaths, stampedCliBundles } from "../scripts/cli-stamp.mjs";
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 const cwd = process.cwd();
 const debug = process.argv.includes("--debug");
+
+const COMMANDS = new Set(["analyse", "analyze", "sweep", "check", "compare"]);
+
+/**
+ * Runs the CommonJS bundle `file` as a vm.Script with V8's code cache beside it, one per command (the cache holds
+ * the functions that had been compiled when it was written, so a --help run's would not serve an analysis): the
+ * first run of a command writes its cache once the command is done, later runs skip compiling those functions.
+ * A cache V8 refuses (another Node, other flags) is written again.
+ */
+function loadBundle(file, command) {
+  const key = path.basename(file).replace(/^cli-|\.cjs$/g, "");
+  const cacheFile = cliBundlePaths(path.dirname(file), key).codeCache.replace(/\.cache$/, `.${command}.cache`);
+  let cachedData;
+  try {
+    cachedData = readFileSync(cacheFile);
+  } catch {}
+  const wrapped = `(function (exports, require, module, __filename, __dirname) {${readFileSync(file, "utf8")}\n})`;
+  const script = new vm.Script(wrapped, { filename: file, cachedData });
+  const module = { exports: {} };
+  script.runInThisContext()(module.exports, createRequire(file), module, file, path.dirname(file));
+  const writeCache = () => {
+    if (cachedData && !script.cachedDataRejected) return;
+    try {
+      const tmp = `${cacheFile}.${process.pid}.tmp`;
+      writeFileSync(tmp, script.createCachedData());
+      renameSync(tmp, cacheFile);
+    } catch {} // a cache that cannot be written only costs the next run its compile
+  };
+  return { main: module.exports.main, writeCache };
+}
+
 try {
-  const { cli, worker } = await ensureCliBundles(root);
+  // the stamp check stats the sources; only when it fails is the bundler's module loaded (it walks lib/ and may rebuild)
+  const { cli, worker } =
+    stampedCliBundles(root) ?? (await (await import("../scripts/cli-bundle.mjs")).ensureCliBundles(root));
   // the engine reads its built-in documents relative to the working folder; the caller's files are read relative to `cwd`
   process.chdir(root);
-  const { main } = await import(pathToFileURL(cli).href);
+  const command = process.argv.slice(2).find((a) => !a.startsWith("-"));
+  const { main, writeCache } = loadBundle(cli, COMMANDS.has(command) ? command.replace("analyze", "analyse") : "other");
   process.exitCode = await main(process.argv.slice(2), {
     cwd,
     stdout: (s) => process.stdout.write(s),
@@ -20,6 +57,7 @@ try {
     stderrIsTTY: Boolean(process.stderr.isTTY),
     workerScript: worker,
   });
+  writeCache();
 } catch (e) {
   process.stderr.write(`ozone-cycles: ${e instanceof Error ? e.message : e}\n`);
   if (debug && e instanceof Error) process.stderr.write(`${e.stack}\n`);
