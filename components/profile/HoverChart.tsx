@@ -111,8 +111,8 @@ export function HoverChart({
                     <circle key={r.key} cx={r.x} cy={level.y} r={3.2} fill="#fff" stroke="#0c4a6e" strokeWidth={1.4} />
                   ),
                 )}
-                <rect x={2} y={level.y - 8} width={plot.left - 6} height={16} rx={3} fill="#0c4a6e" />
-                <text x={plot.left - 7} y={level.y + 3.5} textAnchor="end" fontSize={10} fontWeight={600} fill="#fff">
+                <rect x={plot.left - 44} y={level.y - 8} width={42} height={16} rx={3} fill="#0c4a6e" />
+                <text x={plot.left - 6} y={level.y + 3.5} textAnchor="end" fontSize={10} fontWeight={600} fill="#fff">
                   {level.altitude_km} km
                 </text>
               </g>

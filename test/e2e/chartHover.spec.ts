@@ -77,6 +77,7 @@ test("the sweep's charts read out the CSV's value at the level under the pointer
   await page.keyboard.press("ArrowUp");
   await expect(readout).toHaveAttribute("data-altitude-km", "35");
   await expect(chart.locator("[aria-live]")).toHaveText(`35 km: Ox loss ${formatNumber(loss35)} molecules cm⁻³ s⁻¹`);
+  await chart.screenshot({ path: "test-results/screenshots/chart-hover-keyboard.png" });
   await page.keyboard.press("Escape");
   await expect(readout).toHaveCount(0);
 
