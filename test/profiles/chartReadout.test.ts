@@ -11,6 +11,7 @@ import {
 import { type DifferenceLevel, differenceReadout, differenceSeries } from "@/lib/profiles/series/differenceSeries";
 import { familySplitReadout } from "@/lib/profiles/series/familySplitSeries";
 import { lossProfileReadout, lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
+import { profileBandReadout } from "@/lib/profiles/series/profileBandSeries";
 
 // Invented numbers: only the lookup and the formatting are checked.
 const LEVELS = [
@@ -153,5 +154,21 @@ describe("legend toggles", () => {
 
   it("throws if the key is not a series of the chart", () => {
     expect(() => toggleHidden(new Set(), "z", keys)).toThrow(/toggleHidden: no series "z"/);
+  });
+});
+
+describe("band readout", () => {
+  it("gives each family's median share with its 5–95 % range, and 'failed' where the level failed", () => {
+    const r = profileBandReadout([
+      {
+        family: "ClOx",
+        points: [
+          { altitude_km: 30, median: 0.62, p05: 0.55, p95: 0.7 },
+          { altitude_km: 35, median: null, p05: null, p95: null },
+        ],
+      },
+    ]);
+    expect(readoutRows(r, 0)[0].text).toBe("62 % (55 % – 70 %)");
+    expect(readoutRows(r, 1)[0].text).toBe("failed");
   });
 });

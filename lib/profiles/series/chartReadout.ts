@@ -13,6 +13,8 @@ export interface ReadoutPoint {
   value: number | null;
   /** x of the value on the chart, px; absent for marks without a single x (stacked areas) */
   x?: number;
+  /** a range printed after the value, e.g. the 5–95 % of a Monte Carlo band (same unit) */
+  range?: readonly [number | null, number | null];
 }
 
 export interface ReadoutSeries {
@@ -74,9 +76,10 @@ export function stepLevel(count: number, index: number, delta: number): number {
   return Math.min(count - 1, Math.max(0, index + delta));
 }
 
-function formatValue(s: ReadoutSeries, v: number | null): string {
-  if (v === null) return "failed";
-  const text = s.format === "percent" ? formatPercent(v) : formatNumber(v);
+function formatValue(s: ReadoutSeries, p: ReadoutPoint): string {
+  if (p.value === null) return "failed";
+  const f = (v: number | null) => (v === null ? "—" : s.format === "percent" ? formatPercent(v) : formatNumber(v));
+  const text = p.range ? `${f(p.value)} (${f(p.range[0])} – ${f(p.range[1])})` : f(p.value);
   return s.unit ? `${text} ${s.unit}` : text;
 }
 
@@ -92,7 +95,7 @@ export function readoutRows(
     .filter((s) => !hidden.has(s.key))
     .map((s) => {
       const p = s.points.find((q) => q.altitude_km === level.altitude_km);
-      const row: ReadoutRow = { key: s.key, label: s.label, text: p ? formatValue(s, p.value) : "—" };
+      const row: ReadoutRow = { key: s.key, label: s.label, text: p ? formatValue(s, p) : "—" };
       if (p?.x !== undefined && p.value !== null) row.x = p.x;
       return row;
     });
