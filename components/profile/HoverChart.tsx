@@ -72,8 +72,13 @@ export function HoverChart({
     setIndex((i) => stepLevel(readout.levels.length, i, delta));
   };
 
-  // the readout sits above the rule, or below it in the top third of the plot
+  // the readout sits above the rule (below it in the top third of the plot), on the side away from the markers
   const below = level ? level.y < plot.top + (plot.bottom - plot.top) / 3 : false;
+  const marks = rows.flatMap((r) => (r.x === undefined ? [] : [r.x]));
+  const onLeft = marks.length > 0 && marks.reduce((a, b) => a + b, 0) / marks.length > (plot.left + plot.right) / 2;
+  const inset = onLeft
+    ? { left: `${((plot.left + 6) / frame.width) * 100}%` }
+    : { right: `${((frame.width - plot.right + 6) / frame.width) * 100}%` };
   return (
     <figure data-testid={testId}>
       <div className="relative max-w-[520px]">
@@ -121,8 +126,9 @@ export function HoverChart({
         </div>
         {level ? (
           <div
-            className="no-print pointer-events-none absolute right-[4%] max-w-[75%] rounded-sm border-l-4 border-sky-900 bg-white/95 px-2 py-1 text-[11px] text-stone-800 shadow-sm"
+            className="no-print pointer-events-none absolute max-w-[75%] rounded-sm border-l-4 border-sky-900 bg-white/95 px-2 py-1 text-[11px] text-stone-800 shadow-sm"
             style={{
+              ...inset,
               top: `${(level.y / frame.height) * 100}%`,
               transform: below ? "translateY(8px)" : "translateY(calc(-100% - 8px))",
             }}

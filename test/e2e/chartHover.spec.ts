@@ -98,6 +98,22 @@ test("the sweep's charts read out the CSV's value at the level under the pointer
   await page.screenshot({ path: "test-results/screenshots/chart-hover-split.png", fullPage: true });
   await key.click();
   await expect(split.locator(`path[data-family="${family}"]`).first()).toBeAttached();
+
+  // the Monte Carlo share bands: median with its 5–95 % range, and a key hides a family's band
+  await page.getByLabel("samples per level").fill("8");
+  await page.getByRole("button", { name: "Kinetic uncertainty bands" }).click();
+  const bands = page.getByTestId("profile-share-bands");
+  await expect(bands).toBeVisible({ timeout: 120_000 });
+  await hoverAt(page, bands, "35");
+  await expect(bands.getByTestId("chart-readout").locator("[data-readout-value]").first()).toHaveText(
+    /^(\d+(\.\d)? %|<0\.1 %) \(.+ – .+\)$/,
+  );
+  const bandKey = bands.locator("[data-legend-key]").first();
+  const bandFamily = (await bandKey.getAttribute("data-legend-key")) as string;
+  await bandKey.click();
+  await expect(bands.locator(`polygon[data-family="${bandFamily}"]`)).toHaveCount(0);
+  await hoverAt(page, bands, "35");
+  await bands.screenshot({ path: "test-results/screenshots/chart-hover-bands.png" });
 });
 
 test("the comparison's charts read out A, B and B − A as the JSON has them, and a key hides its line", async ({
