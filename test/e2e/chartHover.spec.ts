@@ -30,6 +30,7 @@ async function finished(request: APIRequestContext, jobId: string): Promise<stri
 /** Moves the pointer over the chart at the altitude of the tick labelled `km`, in the middle of the plot. */
 async function hoverAt(page: Page, chart: Locator, km: string) {
   const svg = chart.locator("svg[role=img]").first();
+  await svg.scrollIntoViewIfNeeded();
   const tick = svg.locator("text", { hasText: new RegExp(`^${km}$`) }).first();
   const s = await svg.boundingBox();
   const t = await tick.boundingBox();
@@ -143,6 +144,12 @@ test("the comparison's charts read out A, B and B − A as the JSON has them, an
     `${formatNumber(level.difference.loss_cm3s)} molecules cm⁻³ s⁻¹`,
   );
   await page.screenshot({ path: "test-results/screenshots/chart-hover-compare.png", fullPage: true });
+  // printed, the page shows the plain chart: no rule, no readout
+  await page.emulateMedia({ media: "print" });
+  await expect(diff.locator("[data-hover-layer]")).toBeHidden();
+  await expect(diff.getByTestId("chart-readout")).toBeHidden();
+  await page.emulateMedia({ media: "screen" });
+  await expect(diff.locator("[data-hover-layer]")).toBeVisible();
 
   // hide B's line: one path left, B's row gone; A's key is then the last one shown and cannot hide A
   await loss.getByRole("button", { name: /^B: / }).click();
