@@ -61,21 +61,28 @@ export function LinePaths({ line, width, dataSeries }: { line: ChartLine; width:
   ));
 }
 
+/** A short sample of a line, for a legend or a readout row. */
+export function LineSwatch({ line, width }: { line: ChartLine; width: number }) {
+  return (
+    <svg width="28" height="8" aria-hidden="true">
+      <line
+        x1="0"
+        x2="28"
+        y1="4"
+        y2="4"
+        stroke={line.stroke}
+        strokeWidth={width}
+        strokeDasharray={line.dash || undefined}
+      />
+    </svg>
+  );
+}
+
 /** A legend entry: a short sample of the line and its label. */
 export function LineKey({ line, width }: { line: ChartLine; width: number }) {
   return (
     <span className="flex items-center gap-1.5">
-      <svg width="28" height="8" aria-hidden="true">
-        <line
-          x1="0"
-          x2="28"
-          y1="4"
-          y2="4"
-          stroke={line.stroke}
-          strokeWidth={width}
-          strokeDasharray={line.dash || undefined}
-        />
-      </svg>
+      <LineSwatch line={line} width={width} />
       {line.label}
     </span>
   );

@@ -6,8 +6,8 @@
  */
 import { useMemo, useState } from "react";
 import type { RateScale, SignedScale } from "@/lib/profiles/series/chartFrame";
-import { differenceSeries } from "@/lib/profiles/series/differenceSeries";
-import { familySplitSeries } from "@/lib/profiles/series/familySplitSeries";
+import { differenceReadout, differenceSeries } from "@/lib/profiles/series/differenceSeries";
+import { familySplitReadout, familySplitSeries } from "@/lib/profiles/series/familySplitSeries";
 import { lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
 import type { ComparisonResult } from "@/lib/profiles/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
@@ -33,43 +33,37 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
       ),
     [result, rateScale, labels],
   );
-  const diff = useMemo(
-    () =>
-      differenceSeries(
-        result.levels.map((l) => ({
-          altitude_km: l.altitude_km,
-          total_cm3s: l.difference?.loss_cm3s ?? null,
-          byFamily: l.difference?.oxLoss_cm3s ?? {},
-        })),
-        result.families,
-        diffScale,
-      ),
-    [result, diffScale],
-  );
-  const splitA = useMemo(
-    () =>
-      familySplitSeries(
-        result.levels.map((l) => ({
-          altitude_km: l.altitude_km,
-          fraction: l.a.loss_cm3s === null ? null : l.a.fraction,
-        })),
-        result.families,
-        { height_px: 340 },
-      ),
-    [result],
-  );
-  const splitB = useMemo(
-    () =>
-      familySplitSeries(
-        result.levels.map((l) => ({
-          altitude_km: l.altitude_km,
-          fraction: l.b.loss_cm3s === null ? null : l.b.fraction,
-        })),
-        result.families,
-        { height_px: 340 },
-      ),
-    [result],
-  );
+  const diff = useMemo(() => {
+    const levels = result.levels.map((l) => ({
+      altitude_km: l.altitude_km,
+      total_cm3s: l.difference?.loss_cm3s ?? null,
+      byFamily: l.difference?.oxLoss_cm3s ?? {},
+    }));
+    return {
+      series: differenceSeries(levels, result.families, diffScale),
+      readout: differenceReadout(levels, result.families, diffScale),
+    };
+  }, [result, diffScale]);
+  const splitA = useMemo(() => {
+    const levels = result.levels.map((l) => ({
+      altitude_km: l.altitude_km,
+      fraction: l.a.loss_cm3s === null ? null : l.a.fraction,
+    }));
+    return {
+      series: familySplitSeries(levels, result.families, { height_px: 340 }),
+      readout: familySplitReadout(levels, result.families, { height_px: 340 }),
+    };
+  }, [result]);
+  const splitB = useMemo(() => {
+    const levels = result.levels.map((l) => ({
+      altitude_km: l.altitude_km,
+      fraction: l.b.loss_cm3s === null ? null : l.b.fraction,
+    }));
+    return {
+      series: familySplitSeries(levels, result.families, { height_px: 340 }),
+      readout: familySplitReadout(levels, result.families, { height_px: 340 }),
+    };
+  }, [result]);
   const side = (k: "a" | "b") => result[k];
   const demo = side("a").profile.demo || side("b").profile.demo;
   const levelsTopDown = [...result.levels].reverse();
@@ -164,7 +158,8 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
             Difference B − A, by family
           </h2>
           <DifferenceChart
-            series={diff}
+            series={diff.series}
+            readout={diff.readout}
             title={`B − A of the Ox loss rate against altitude`}
             testId="chart-difference"
           />
@@ -174,7 +169,8 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
             A: {labels.a} — fraction of the Ox loss by family
           </h2>
           <SplitChart
-            series={splitA}
+            series={splitA.series}
+            readout={splitA.readout}
             title={`Family split of the Ox loss against altitude, ${labels.a}`}
             testId="chart-split-a"
           />
@@ -185,7 +181,8 @@ export function ComparisonView({ id, result, createdAt }: { id: string; result: 
             B: {labels.b} — fraction of the Ox loss by family
           </h2>
           <SplitChart
-            series={splitB}
+            series={splitB.series}
+            readout={splitB.readout}
             title={`Family split of the Ox loss against altitude, ${labels.b}`}
             testId="chart-split-b"
           />

@@ -1,33 +1,37 @@
 /** B − A of the Ox loss rate against altitude: total and the largest family changes. */
+import type { ChartReadout } from "@/lib/profiles/series/chartReadout";
 import type { DifferenceSeries } from "@/lib/profiles/series/differenceSeries";
-import { ChartFigure, LineKey, LinePaths } from "./ChartFigure";
+import { LinePaths, LineSwatch } from "./ChartFigure";
+import { HoverChart } from "./HoverChart";
 
 export function DifferenceChart({
   series,
+  readout,
   title,
   testId,
 }: {
   series: DifferenceSeries;
+  readout: ChartReadout;
   title: string;
   testId?: string;
 }) {
-  const { frame } = series;
   return (
-    <ChartFigure
-      frame={frame}
+    <HoverChart
+      frame={series.frame}
       title={title}
       testId={testId}
-      caption={
-        <figcaption className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-[11px] text-stone-700">
-          {series.lines.map((l) => (
-            <LineKey key={l.key} line={l} width={l.width} />
-          ))}
-        </figcaption>
-      }
+      readout={readout}
+      legend={series.lines.map((l) => ({
+        key: l.key,
+        label: l.label,
+        swatch: <LineSwatch line={l} width={l.width} />,
+      }))}
     >
-      {series.lines.map((l) => (
-        <LinePaths key={l.key} line={l} width={l.width} dataSeries={l.key} />
-      ))}
-    </ChartFigure>
+      {(hidden) =>
+        series.lines
+          .filter((l) => !hidden.has(l.key))
+          .map((l) => <LinePaths key={l.key} line={l} width={l.width} dataSeries={l.key} />)
+      }
+    </HoverChart>
   );
 }

@@ -6,7 +6,7 @@
  */
 import { useMemo, useState } from "react";
 import type { RateScale } from "@/lib/profiles/series/chartFrame";
-import { familySplitSeries } from "@/lib/profiles/series/familySplitSeries";
+import { familySplitReadout, familySplitSeries } from "@/lib/profiles/series/familySplitSeries";
 import { lossProfileSeries } from "@/lib/profiles/series/lossProfileSeries";
 import type { SweepResult } from "@/lib/profiles/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
@@ -47,17 +47,16 @@ export function SweepView({
       ),
     [result, scale],
   );
-  const split = useMemo(
-    () =>
-      familySplitSeries(
-        result.levels.map((l) => ({
-          altitude_km: l.altitude_km,
-          fraction: l.budget ? Object.fromEntries(l.budget.byFamily.map((f) => [f.family, f.fraction])) : null,
-        })),
-        result.families,
-      ),
-    [result],
-  );
+  const split = useMemo(() => {
+    const levels = result.levels.map((l) => ({
+      altitude_km: l.altitude_km,
+      fraction: l.budget ? Object.fromEntries(l.budget.byFamily.map((f) => [f.family, f.fraction])) : null,
+    }));
+    return {
+      series: familySplitSeries(levels, result.families),
+      readout: familySplitReadout(levels, result.families),
+    };
+  }, [result]);
   const p = result.profile;
   const failed = result.levels.filter((l) => l.status !== "converged").length;
   const rows = result.levels.map((l, i) => ({ l, link: explorerLinks[i] })).reverse();
@@ -131,7 +130,12 @@ export function SweepView({
           <h2 id="h-split" className="text-[14px] font-semibold">
             Fraction of the Ox loss by family
           </h2>
-          <SplitChart series={split} title="Family split of the Ox loss against altitude" testId="chart-split" />
+          <SplitChart
+            series={split.series}
+            readout={split.readout}
+            title="Family split of the Ox loss against altitude"
+            testId="chart-split"
+          />
           <ProfileUncertaintyRunner profileId={id} />
         </section>
       </div>

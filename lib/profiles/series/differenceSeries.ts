@@ -13,6 +13,7 @@ import {
   type SignedScale,
   signedAxis,
 } from "./chartFrame";
+import { type ChartReadout, type ReadoutSeries, readoutLevels } from "./chartReadout";
 import { familyColor, familyName } from "./familyColor";
 
 export const DIFFERENCE_DEFAULTS = {
@@ -45,12 +46,13 @@ export interface DifferenceSeries {
 
 const DASHES = ["", "5 3", "2 3", "8 3 2 3", "1 2", "10 4", "4 2 1 2"];
 
-export function differenceSeries(
+/** What both the lines and the readout are drawn from: the keys shown, B − A of each at a level, and the axes. */
+function differencePlan(
   levels: readonly DifferenceLevel[],
   families: readonly string[],
   scale: SignedScale,
-  options: FrameOptions & { maxFamilies?: number } = {},
-): DifferenceSeries {
+  options: FrameOptions & { maxFamilies?: number },
+) {
   const width = options.width_px ?? FRAME_DEFAULTS.width_px;
   const height = options.height_px ?? FRAME_DEFAULTS.height_px;
   const maxFamilies = options.maxFamilies ?? DIFFERENCE_DEFAULTS.maxFamilies;
@@ -69,6 +71,8 @@ export function differenceSeries(
     return l.byFamily[key] ?? 0;
   };
   const keys = ["total", ...shown, ...(rest.length ? ["other"] : [])];
+  const labelOf = (key: string) =>
+    key === "total" ? "total" : key === "other" ? `other families (${rest.length})` : familyName(key);
   const all = sorted.flatMap((l) => keys.map((k) => deltaOf(l, k)).filter((v): v is number => v !== null));
   const { y, ticks: yTicks } = altitudeAxis(
     sorted.length ? sorted.map((l) => l.altitude_km) : [0, 1],
@@ -76,6 +80,21 @@ export function differenceSeries(
     plot.bottom,
   );
   const { x, ticks: xTicks, zeroX } = signedAxis(all, plot.left, plot.right, scale);
+  return { width, height, plot, sorted, keys, deltaOf, labelOf, x, y, xTicks, yTicks, zeroX };
+}
+
+export function differenceSeries(
+  levels: readonly DifferenceLevel[],
+  families: readonly string[],
+  scale: SignedScale,
+  options: FrameOptions & { maxFamilies?: number } = {},
+): DifferenceSeries {
+  const { width, height, plot, sorted, keys, deltaOf, labelOf, x, y, xTicks, yTicks, zeroX } = differencePlan(
+    levels,
+    families,
+    scale,
+    options,
+  );
   const lines = keys.map((key, i): DifferenceLine => {
     const pts = sorted.map((l) => {
       const v = deltaOf(l, key);
@@ -88,7 +107,7 @@ export function differenceSeries(
     const color = key === "total" ? "#1c2430" : key === "other" ? "#8f8c84" : familyColor(key).ink;
     return {
       key,
-      label: key === "total" ? "total" : key === "other" ? `other families (${rest.length})` : familyName(key),
+      label: labelOf(key),
       paths: pathSegments(pts),
       stroke: color,
       dash: key === "total" ? "" : DASHES[1 + ((i - 1) % (DASHES.length - 1))],
@@ -109,4 +128,27 @@ export function differenceSeries(
     },
     lines,
   };
+}
+
+/** The hover readout of the difference chart: B − A of each drawn line at every level (null where a side failed). */
+export function differenceReadout(
+  levels: readonly DifferenceLevel[],
+  families: readonly string[],
+  scale: SignedScale,
+  options: FrameOptions & { maxFamilies?: number } = {},
+): ChartReadout {
+  const { sorted, keys, deltaOf, labelOf, x, y } = differencePlan(levels, families, scale, options);
+  const rs: ReadoutSeries[] = keys.map((key) => ({
+    key,
+    label: labelOf(key),
+    unit: "molecules cm⁻³ s⁻¹",
+    format: "number",
+    points: sorted.map((l) => {
+      const v = deltaOf(l, key);
+      return v === null
+        ? { altitude_km: l.altitude_km, value: null }
+        : { altitude_km: l.altitude_km, value: v, x: x(v) };
+    }),
+  }));
+  return { levels: readoutLevels(rs, y), series: rs };
 }

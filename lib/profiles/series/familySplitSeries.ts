@@ -5,6 +5,7 @@
  * family is labelled at the altitude where its band is widest.
  */
 import { altitudeAxis, type ChartFrame, FRAME_DEFAULTS, type FrameOptions } from "./chartFrame";
+import { type ChartReadout, type ReadoutSeries, readoutLevels } from "./chartReadout";
 import { familyColor, familyName } from "./familyColor";
 
 export interface SplitLevel {
@@ -102,4 +103,26 @@ export function familySplitSeries(
     areas,
     failed: sorted.filter((l) => !l.fraction).map((l) => ({ altitude_km: l.altitude_km, y: y(l.altitude_km) })),
   };
+}
+
+/** The hover readout of the split chart: each family's fraction (0–1) at every level, for the families that have any. */
+export function familySplitReadout(
+  levels: readonly SplitLevel[],
+  families: readonly string[],
+  options: FrameOptions = {},
+): ChartReadout {
+  const height = options.height_px ?? FRAME_DEFAULTS.height_px;
+  const m = FRAME_DEFAULTS.margin;
+  const sorted = [...levels].sort((a, b) => a.altitude_km - b.altitude_km);
+  const { y } = altitudeAxis(sorted.length ? sorted.map((l) => l.altitude_km) : [0, 1], m.top, height - m.bottom);
+  const rs: ReadoutSeries[] = families
+    .filter((f) => sorted.some((l) => (l.fraction?.[f] ?? 0) > 0))
+    .map((family) => ({
+      key: family,
+      label: familyName(family),
+      unit: "",
+      format: "percent",
+      points: sorted.map((l) => ({ altitude_km: l.altitude_km, value: l.fraction ? (l.fraction[family] ?? 0) : null })),
+    }));
+  return { levels: readoutLevels(rs, y), series: rs };
 }

@@ -1,4 +1,5 @@
 export * from "./chartFrame";
+export * from "./chartReadout";
 export * from "./differenceSeries";
 export * from "./familyColor";
 export * from "./familySplitSeries";

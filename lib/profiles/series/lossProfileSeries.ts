@@ -12,6 +12,7 @@ import {
   type RateScale,
   rateAxis,
 } from "./chartFrame";
+import { type ChartReadout, type ReadoutSeries, readoutLevels } from "./chartReadout";
 
 export interface ProfileSide {
   label: string;
@@ -98,4 +99,22 @@ export function lossProfileSeries(
     lines,
     failed,
   };
+}
+
+/** The hover readout of the loss chart: each side's rate at every level (failed levels as null). */
+export function lossProfileReadout(series: LossProfileSeries): ChartReadout {
+  const rs: ReadoutSeries[] = series.lines.map((l) => ({
+    key: l.key,
+    label: l.label,
+    unit: "molecules cm⁻³ s⁻¹",
+    format: "number",
+    points: [
+      ...l.points.map((p) => ({ altitude_km: p.altitude_km, value: p.value, x: p.x })),
+      ...series.failed.filter((f) => f.side === l.label).map((f) => ({ altitude_km: f.altitude_km, value: null })),
+    ].sort((a, b) => a.altitude_km - b.altitude_km),
+  }));
+  const yOf = new Map<number, number>();
+  for (const l of series.lines) for (const p of l.points) yOf.set(p.altitude_km, p.y);
+  for (const f of series.failed) yOf.set(f.altitude_km, f.y);
+  return { levels: readoutLevels(rs, (z) => yOf.get(z) ?? 0), series: rs };
 }

@@ -10,6 +10,7 @@
 import { bandPolygons } from "../../uncertainty/bandPolygons";
 import type { ProfileBand } from "../../uncertainty/bandSeries";
 import { altitudeAxis, type ChartFrame, FRAME_DEFAULTS, type FrameOptions, pathSegments } from "./chartFrame";
+import { type ChartReadout, type ReadoutSeries, readoutLevels } from "./chartReadout";
 import { familyColor } from "./familyColor";
 
 export interface ProfileBandSeries {
@@ -58,4 +59,28 @@ export function profileBandSeries(bands: readonly ProfileBand[], options: FrameO
       };
     }),
   };
+}
+
+/** The hover readout of the band chart: each family's median share with its 5–95 % range at every level. */
+export function profileBandReadout(bands: readonly ProfileBand[], options: FrameOptions = {}): ChartReadout {
+  const width = options.width_px ?? FRAME_DEFAULTS.width_px;
+  const height = options.height_px ?? FRAME_DEFAULTS.height_px;
+  const m = FRAME_DEFAULTS.margin;
+  const altitudes = bands.flatMap((b) => b.points.map((p) => p.altitude_km));
+  const { y } = altitudeAxis(altitudes.length ? altitudes : [0, 1], m.top, height - m.bottom);
+  const x = (f: number) => Math.round((m.left + Math.min(1, Math.max(0, f)) * (width - m.right - m.left)) * 10) / 10;
+  const rs: ReadoutSeries[] = bands.map((b) => ({
+    key: b.family,
+    label: b.family,
+    unit: "",
+    format: "percent",
+    points: [...b.points]
+      .sort((p, q) => p.altitude_km - q.altitude_km)
+      .map((p) =>
+        p.median === null
+          ? { altitude_km: p.altitude_km, value: null }
+          : { altitude_km: p.altitude_km, value: p.median, x: x(p.median), range: [p.p05, p.p95] as const },
+      ),
+  }));
+  return { levels: readoutLevels(rs, y), series: rs };
 }
