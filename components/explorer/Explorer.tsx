@@ -12,10 +12,9 @@ import { formatNumber } from "@/lib/viz/formatNumber";
 import { graphSvg } from "@/lib/viz/graphSvg";
 import { isolateText } from "@/lib/viz/isolateText";
 import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkElements";
-import { networkLayout } from "@/lib/viz/networkLayout";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
-import { reactionDetail } from "@/lib/viz/reactionDetail";
+import { LARGE_MECHANISM_CAP, reactionDetail } from "@/lib/viz/reactionDetail";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { DeletionTokenNote } from "../DeletionTokenNote";
 import type { ApiError, Problem } from "../ui/apiClient";
@@ -27,11 +26,13 @@ import { CyclesPanel } from "./CyclesPanel";
 import { download } from "./download";
 import { ExportBar } from "./ExportBar";
 import { Inspector } from "./Inspector";
+import { LargeMechanismNotice } from "./LargeMechanismNotice";
 import { LegendCard } from "./LegendCard";
 import { type NetworkHandle, NetworkView } from "./NetworkView";
 import { Toolbar } from "./Toolbar";
 import { UncertaintyCard } from "./UncertaintyCard";
 import { useAnalysis } from "./useAnalysis";
+import { useNetworkLayout } from "./useNetworkLayout";
 
 export interface StoredAnalysis {
   id: string;
@@ -131,7 +132,9 @@ export function Explorer(props: Props) {
     setView((v) => ({ ...v, ...patch }));
   };
 
-  const layout = useMemo(() => (mechanism ? networkLayout(mechanism) : null), [mechanism]);
+  const layoutProgress = useNetworkLayout(mechanism);
+  const layout = layoutProgress.layout;
+  const large = !!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES;
   const cycle = result?.cycles.cycles.find((c) => c.id === view.cycle) ?? null;
   // the selected cycle and the inspected reaction stay drawn whatever the detail
   const keepKey = [
@@ -145,9 +148,10 @@ export function Explorer(props: Props) {
             limit: view.detail,
             colorMode: view.colorMode,
             keep: keepKey ? keepKey.split(" ") : [],
+            cap: large ? LARGE_MECHANISM_CAP : undefined,
           })
         : null,
-    [mechanism, result, view.detail, view.colorMode, keepKey],
+    [mechanism, result, view.detail, view.colorMode, keepKey, large],
   );
   const elements = useMemo(
     () =>
@@ -156,10 +160,10 @@ export function Explorer(props: Props) {
             colorMode: view.colorMode,
             showHeld: view.showHeld,
             visible: new Set(detail.shown),
-            onlyTouched: mechanism.species.length > LARGE_MECHANISM_SPECIES,
+            onlyTouched: large,
           })
         : [],
-    [mechanism, layout, result, detail, view.colorMode, view.showHeld],
+    [mechanism, layout, result, detail, view.colorMode, view.showHeld, large],
   );
   const highlight = useMemo(() => cycleHighlight(elements, cycle), [elements, cycle]);
   const legend = useMemo(() => networkLegend(result, view.colorMode), [result, view.colorMode]);
@@ -240,7 +244,7 @@ export function Explorer(props: Props) {
             detailLimit={view.detail}
             onDetailLimit={(detail) => setViewPart({ detail })}
             detail={detail}
-            largeMechanism={!!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES}
+            largeMechanism={large}
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}
@@ -276,6 +280,9 @@ export function Explorer(props: Props) {
               deleteUrl={`/api/mechanisms/${uploadToken.id}`}
             />
           ) : null}
+          {large && mechanism && detail ? (
+            <LargeMechanismNotice mechanism={mechanism} detail={detail} analysed={!!result} layout={layoutProgress} />
+          ) : null}
           {notice ? (
             <div className="flex items-start justify-between gap-2 rounded border border-stone-300 bg-stone-50 px-3 py-1 text-[12px] text-stone-700">
               <span>{notice}</span>
@@ -302,7 +309,11 @@ export function Explorer(props: Props) {
               />
             ) : (
               <div className="absolute inset-0 grid place-items-center text-sm text-stone-500">
-                {mechError ? "" : "Loading the mechanism…"}
+                {mechError
+                  ? ""
+                  : mechanism
+                    ? `Laying out the network… ${layoutProgress.placed} of ${layoutProgress.total} reactions placed`
+                    : "Loading the mechanism…"}
               </div>
             )}
             <div className="pointer-events-none absolute inset-x-2 top-2 flex flex-col items-start gap-2">
