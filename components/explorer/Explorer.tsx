@@ -11,7 +11,7 @@ import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery"
 import { formatNumber } from "@/lib/viz/formatNumber";
 import { graphSvg } from "@/lib/viz/graphSvg";
 import { isolateText } from "@/lib/viz/isolateText";
-import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkElements";
+import { LARGE_MECHANISM_SPECIES, networkElements, reactionNodeId, speciesNodeId } from "@/lib/viz/networkElements";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
 import { LARGE_MECHANISM_CAP, reactionDetail } from "@/lib/viz/reactionDetail";
@@ -165,6 +165,16 @@ export function Explorer(props: Props) {
         : [],
     [mechanism, layout, result, detail, view.colorMode, view.showHeld, large],
   );
+  // a very large mechanism offers only what is drawn for inspection: ten thousand options cost a long render
+  const inspectable = useMemo(() => {
+    if (!mechanism || !large) return mechanism;
+    const drawn = new Set(elements.map((e) => e.data.id));
+    return {
+      ...mechanism,
+      species: mechanism.species.filter((s) => drawn.has(speciesNodeId(s.id))),
+      reactions: mechanism.reactions.filter((r) => drawn.has(reactionNodeId(r.id))),
+    };
+  }, [mechanism, large, elements]);
   const highlight = useMemo(() => cycleHighlight(elements, cycle), [elements, cycle]);
   const legend = useMemo(() => networkLegend(result, view.colorMode), [result, view.colorMode]);
   const selected = view.select && elements.some((e) => e.data.id === view.select) ? view.select : null;
@@ -248,7 +258,7 @@ export function Explorer(props: Props) {
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}
-            mechanism={mechanism}
+            mechanism={inspectable}
             selected={selected}
             onInspect={(id) => setViewPart({ select: id })}
             status={
