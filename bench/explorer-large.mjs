@@ -107,6 +107,7 @@ async function openOnce(n) {
     keyPress_ms: inputDelay,
     reactionsDrawn: out.drawn,
     uploadBytes: doc.length,
+    tasks: out.tasks.map((t) => [Math.round(t.start), Math.round(t.duration)]),
   };
 }
 
