@@ -4,14 +4,15 @@
 // cycle analysis has odd oxygen to follow). For each size: the upload, then
 // /explore on it, recording every long task (PerformanceObserver 'longtask',
 // buffered from navigation start) until the analysed graph is painted and
-// the page has answered a key press. Prints the time to the graph's first
+// the page has answered a key press; the built-in reference mechanism first,
+// for comparison. Prints the time to the graph's first
 // paint and to the analysed graph, the longest task, the count of tasks over
 // 50 ms and over 200 ms; writes bench/results/explorer-large.json. No
 // pass/fail: figures from a shared 2-core machine are noisy.
 //
 // Needs a started server: `npm run build && PORT=3250 npm start`, then
 // `BENCH_URL=http://127.0.0.1:3250 npm run bench:large` (default port 3000).
-// BENCH_SIZES=500,2000 and BENCH_REPEATS=3 change what is run.
+// BENCH_SIZES=reference,500,2000 and BENCH_REPEATS=3 change what is run.
 import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -20,7 +21,9 @@ import { chromium } from "@playwright/test";
 import { build } from "esbuild";
 
 const base = process.env.BENCH_URL ?? "http://127.0.0.1:3000";
-const sizes = (process.env.BENCH_SIZES ?? "500,1000,2000").split(",").map(Number);
+const sizes = (process.env.BENCH_SIZES ?? "reference,500,1000,2000")
+  .split(",")
+  .map((s) => (s === "reference" ? s : Number(s)));
 const repeats = Number(process.env.BENCH_REPEATS ?? 1);
 
 const gen = path.resolve(".engine/bench/openNetwork.mjs");
@@ -50,14 +53,18 @@ const browser = await chromium.launch({
 async function openOnce(n) {
   const context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
   const page = await context.newPage();
-  const doc = openNetwork(n, 4 * n, { ozone: true });
-  const up = await page.request.post(`${base}/api/mechanisms`, {
-    headers: { "content-type": "application/json" },
-    data: doc,
-    timeout: 120_000,
-  });
-  if (!up.ok()) throw new Error(`upload of ${n} species: ${up.status()} ${await up.text()}`);
-  const { id } = await up.json();
+  // "reference": the built-in mechanism, for comparison (what the canvas costs at any size)
+  const doc = n === "reference" ? "" : openNetwork(n, 4 * n, { ozone: true });
+  let id = "reference";
+  if (doc) {
+    const up = await page.request.post(`${base}/api/mechanisms`, {
+      headers: { "content-type": "application/json" },
+      data: doc,
+      timeout: 120_000,
+    });
+    if (!up.ok()) throw new Error(`upload of ${n} species: ${up.status()} ${await up.text()}`);
+    id = (await up.json()).id;
+  }
   await page.addInitScript(() => {
     window.__longTasks = [];
     new PerformanceObserver((list) => {
@@ -118,7 +125,7 @@ for (const n of sizes) {
   const pick = (key) => median(runs.map((r) => r[key]));
   const row = {
     species: n,
-    reactions: 4 * n,
+    reactions: n === "reference" ? null : 4 * n + 24,
     runs: runs.length,
     firstPaint_ms: pick("firstPaint_ms"),
     analysedPaint_ms: pick("analysedPaint_ms"),

@@ -30,9 +30,10 @@ export interface DetailOptions extends Partial<typeof DETAIL_DEFAULTS> {
   /** reaction ids always drawn when they exist */
   keep?: readonly string[];
   /**
-   * hard cap on the reactions drawn, whatever `limit` says and before any
-   * analysis too (then the first ones in mechanism order); `keep` still adds
-   * to it; default no cap. The explorer sets it for very large mechanisms.
+   * hard cap on the reactions drawn, whatever `limit` says; with a cap, the
+   * view before any analysis draws the first min(cap, limit) reactions in
+   * mechanism order instead of all; `keep` still adds to it; default no cap.
+   * The explorer sets it for very large mechanisms.
    */
   cap?: number;
 }
@@ -60,7 +61,7 @@ export function reactionDetail(
   const ids = mech.reactions.map((r) => r.id);
   if (!result) {
     if (ids.length <= cap) return { shown: ids, hidden: 0, zeroFlux: 0, covered: null };
-    const chosen = new Set(ids.slice(0, cap));
+    const chosen = new Set(ids.slice(0, Math.min(cap, o.limit)));
     const exists = new Set(ids);
     for (const id of o.keep ?? []) if (exists.has(id)) chosen.add(id);
     return { shown: ids.filter((id) => chosen.has(id)), hidden: ids.length - chosen.size, zeroFlux: 0, covered: null };
