@@ -4,6 +4,7 @@ import { Explorer } from "@/components/explorer";
 import { listMechanisms, mechanismDetail } from "@/lib/service/mechanisms";
 import { ownerFromCookies } from "@/lib/service/owner";
 import { parseExplorerQuery } from "@/lib/viz/explorerQuery";
+import { LARGE_MECHANISM_SPECIES } from "@/lib/viz/networkElements";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 
 export const dynamic = "force-dynamic";
@@ -40,7 +41,9 @@ async function loadMechanisms(
   }
   try {
     const d = await mechanismDetail(id);
-    mechanism = { ...d, text: undefined } as MechanismView;
+    // a very large mechanism is fetched by the browser instead: inlined in the page, its megabytes of
+    // props made hydration one long task
+    mechanism = d.species.length > LARGE_MECHANISM_SPECIES ? null : ({ ...d, text: undefined } as MechanismView);
   } catch {
     mechanism = null;
   }

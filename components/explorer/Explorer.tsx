@@ -12,11 +12,10 @@ import { type ExplorerView, explorerQueryString } from "@/lib/viz/explorerQuery"
 import { formatNumber } from "@/lib/viz/formatNumber";
 import { graphSvg } from "@/lib/viz/graphSvg";
 import { isolateText } from "@/lib/viz/isolateText";
-import { LARGE_MECHANISM_SPECIES, networkElements } from "@/lib/viz/networkElements";
-import { networkLayout } from "@/lib/viz/networkLayout";
+import { LARGE_MECHANISM_SPECIES, networkElements, reactionNodeId, speciesNodeId } from "@/lib/viz/networkElements";
 import { networkLegend } from "@/lib/viz/networkLegend";
 import { networkStyle } from "@/lib/viz/networkStyle";
-import { reactionDetail } from "@/lib/viz/reactionDetail";
+import { LARGE_MECHANISM_CAP, reactionDetail } from "@/lib/viz/reactionDetail";
 import type { MechanismSummary, MechanismView } from "@/lib/viz/types";
 import { DeletionTokenNote } from "../DeletionTokenNote";
 import type { ApiError, Problem } from "../ui/apiClient";
@@ -28,11 +27,13 @@ import { CyclesPanel } from "./CyclesPanel";
 import { download } from "./download";
 import { ExportBar } from "./ExportBar";
 import { Inspector } from "./Inspector";
+import { LargeMechanismNotice } from "./LargeMechanismNotice";
 import { LegendCard } from "./LegendCard";
 import { type NetworkHandle, NetworkView } from "./NetworkView";
 import { Toolbar } from "./Toolbar";
 import { UncertaintyCard } from "./UncertaintyCard";
 import { useAnalysis } from "./useAnalysis";
+import { useNetworkLayout } from "./useNetworkLayout";
 
 export interface StoredAnalysis {
   id: string;
@@ -134,7 +135,9 @@ export function Explorer(props: Props) {
     setView((v) => ({ ...v, ...patch }));
   };
 
-  const layout = useMemo(() => (mechanism ? networkLayout(mechanism) : null), [mechanism]);
+  const layoutProgress = useNetworkLayout(mechanism);
+  const layout = layoutProgress.layout;
+  const large = !!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES;
   const cycle = result?.cycles.cycles.find((c) => c.id === view.cycle) ?? null;
   // the selected cycle and the inspected reaction stay drawn whatever the detail
   const keepKey = [
@@ -148,9 +151,10 @@ export function Explorer(props: Props) {
             limit: view.detail,
             colorMode: view.colorMode,
             keep: keepKey ? keepKey.split(" ") : [],
+            cap: large ? LARGE_MECHANISM_CAP : undefined,
           })
         : null,
-    [mechanism, result, view.detail, view.colorMode, keepKey],
+    [mechanism, result, view.detail, view.colorMode, keepKey, large],
   );
   const elements = useMemo(
     () =>
@@ -159,11 +163,21 @@ export function Explorer(props: Props) {
             colorMode: view.colorMode,
             showHeld: view.showHeld,
             visible: new Set(detail.shown),
-            onlyTouched: mechanism.species.length > LARGE_MECHANISM_SPECIES,
+            onlyTouched: large,
           })
         : [],
-    [mechanism, layout, result, detail, view.colorMode, view.showHeld],
+    [mechanism, layout, result, detail, view.colorMode, view.showHeld, large],
   );
+  // a very large mechanism offers only what is drawn for inspection: ten thousand options cost a long render
+  const inspectable = useMemo(() => {
+    if (!mechanism || !large) return mechanism;
+    const drawn = new Set(elements.map((e) => e.data.id));
+    return {
+      ...mechanism,
+      species: mechanism.species.filter((s) => drawn.has(speciesNodeId(s.id))),
+      reactions: mechanism.reactions.filter((r) => drawn.has(reactionNodeId(r.id))),
+    };
+  }, [mechanism, large, elements]);
   const highlight = useMemo(() => cycleHighlight(elements, cycle), [elements, cycle]);
   const legend = useMemo(() => networkLegend(result, view.colorMode), [result, view.colorMode]);
   const selected = view.select && elements.some((e) => e.data.id === view.select) ? view.select : null;
@@ -243,11 +257,11 @@ export function Explorer(props: Props) {
             detailLimit={view.detail}
             onDetailLimit={(detail) => setViewPart({ detail })}
             detail={detail}
-            largeMechanism={!!mechanism && mechanism.species.length > LARGE_MECHANISM_SPECIES}
+            largeMechanism={large}
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}
-            mechanism={mechanism}
+            mechanism={inspectable}
             selected={selected}
             onInspect={(id) => setViewPart({ select: id })}
             status={
@@ -279,6 +293,9 @@ export function Explorer(props: Props) {
               deleteUrl={`/api/mechanisms/${uploadToken.id}`}
             />
           ) : null}
+          {large && mechanism && detail ? (
+            <LargeMechanismNotice mechanism={mechanism} detail={detail} analysed={!!result} layout={layoutProgress} />
+          ) : null}
           {notice ? (
             <div className="flex items-start justify-between gap-2 rounded border border-stone-300 bg-stone-50 px-3 py-1 text-[12px] text-stone-700">
               <span>{notice}</span>
@@ -305,7 +322,11 @@ export function Explorer(props: Props) {
               />
             ) : (
               <div className="absolute inset-0 grid place-items-center text-sm text-stone-500">
-                {mechError ? "" : "Loading the mechanism…"}
+                {mechError
+                  ? ""
+                  : mechanism
+                    ? `Laying out the network… ${layoutProgress.placed} of ${layoutProgress.total} reactions placed`
+                    : "Loading the mechanism…"}
               </div>
             )}
             <div className="pointer-events-none absolute inset-x-2 top-2 flex flex-col items-start gap-2">

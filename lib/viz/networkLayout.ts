@@ -111,6 +111,22 @@ export function networkLayout(
   mech: Pick<MechanismView, "species" | "reactions">,
   options: LayoutOptions = {},
 ): NetworkLayout {
+  const steps = networkLayoutSteps(mech, options);
+  let step = steps.next();
+  while (!step.done) step = steps.next();
+  return step.value;
+}
+
+/**
+ * The same layout, one reaction at a time: yields the count of reactions
+ * placed so far after each one and returns the finished layout, so that a
+ * caller can spread a large mechanism's layout over several short slices of
+ * work (components/explorer/useNetworkLayout). Same result as networkLayout.
+ */
+export function* networkLayoutSteps(
+  mech: Pick<MechanismView, "species" | "reactions">,
+  options: LayoutOptions = {},
+): Generator<number, NetworkLayout, void> {
   const o = { ...LAYOUT_DEFAULTS, ...options };
   const stubbed = new Set(mech.species.filter(isStubSpecies).map((s) => s.id));
   const drawn = mech.species.filter((s) => s.role !== "third-body" && !stubbed.has(s.id));
@@ -206,11 +222,13 @@ export function networkLayout(
 
   const occupied = new RectIndex();
   for (const b of labels) occupied.add(b.kind === "species" ? grown(b, o.clearSpecies_px) : grown(b, 2));
+  yield 0;
   const reactions: NetworkLayout["reactions"] = idRecord();
   const stubs: NetworkLayout["stubs"] = idRecord();
   const solved = new Set(drawn.filter((s) => s.role === "solved").map((s) => s.id));
   const stubOrder = mech.species.filter((s) => stubbed.has(s.id)).map((s) => s.id);
   let lane = 0;
+  let placedCount = 0;
   // a large mechanism looks less far for room near its species, so that laying it out stays quick
   const nearTries = mech.reactions.length > LARGE_REACTIONS ? NEAR_TRIES_LARGE : NEAR_TRIES;
   for (const rx of mech.reactions) {
@@ -249,6 +267,7 @@ export function networkLayout(
       if (k === 1) labels.push({ id: `r:${rx.id}`, kind: "reaction", ...b });
       if (k >= 2) labels.push({ id: `t:${rx.id}:${rxStubs[k - 2]}`, kind: "stub", ...b });
     });
+    yield ++placedCount;
   }
   return { species, reactions, stubs, frames, labels };
 }

@@ -16,12 +16,26 @@ export const DETAIL_DEFAULTS = {
   colorMode: "flux" as ColorMode,
 };
 
+/**
+ * The most reactions the explorer draws of a very large mechanism (more than
+ * LARGE_MECHANISM_SPECIES species), whatever the detail control says: more
+ * would make the canvas's first drawing one long task of seconds.
+ */
+export const LARGE_MECHANISM_CAP = 120;
+
 /** The choices offered by the detail control, reactions drawn at most. */
 export const DETAIL_LEVELS = [15, 25, 40, 80, Infinity] as const;
 
 export interface DetailOptions extends Partial<typeof DETAIL_DEFAULTS> {
   /** reaction ids always drawn when they exist */
   keep?: readonly string[];
+  /**
+   * hard cap on the reactions drawn, whatever `limit` says; with a cap, the
+   * view before any analysis draws the first min(cap, limit) reactions in
+   * mechanism order instead of all; `keep` still adds to it; default no cap.
+   * The explorer sets it for very large mechanisms.
+   */
+  cap?: number;
 }
 
 export interface ReactionDetail {
@@ -42,17 +56,26 @@ export function reactionDetail(
 ): ReactionDetail {
   const o = { ...DETAIL_DEFAULTS, ...options };
   if (!(o.limit > 0)) throw new RangeError(`reactionDetail: invalid limit: ${o.limit} (expected a positive count)`);
+  const cap = options.cap ?? Infinity;
+  if (!(cap > 0)) throw new RangeError(`reactionDetail: invalid cap: ${cap} (expected a positive count)`);
   const ids = mech.reactions.map((r) => r.id);
-  if (!result) return { shown: ids, hidden: 0, zeroFlux: 0, covered: null };
+  if (!result) {
+    if (ids.length <= cap) return { shown: ids, hidden: 0, zeroFlux: 0, covered: null };
+    const chosen = new Set(ids.slice(0, Math.min(cap, o.limit)));
+    const exists = new Set(ids);
+    for (const id of o.keep ?? []) if (exists.has(id)) chosen.add(id);
+    return { shown: ids.filter((id) => chosen.has(id)), hidden: ids.length - chosen.size, zeroFlux: 0, covered: null };
+  }
+  const order = new Map(ids.map((id, i) => [id, i]));
   const rate = new Map(result.steadyState.reactions.map((r) => [r.id, r.rate_cm3s]));
   const ox = new Map(result.cycles.perReaction.map((r) => [r.reactionId, r.oxDestroyed_cm3s]));
   const flowing = ids.filter((id) => (rate.get(id) ?? 0) > 0);
   const weight = (id: string) => (o.colorMode === "ox" ? (ox.get(id) ?? 0) : (rate.get(id) ?? 0));
   // Ox mode: the Ox destroyed ranks first, the rate breaks ties (most reactions destroy none)
   const ranked = [...flowing].sort(
-    (a, b) => weight(b) - weight(a) || (rate.get(b) ?? 0) - (rate.get(a) ?? 0) || ids.indexOf(a) - ids.indexOf(b),
+    (a, b) => weight(b) - weight(a) || (rate.get(b) ?? 0) - (rate.get(a) ?? 0) || order.get(a)! - order.get(b)!,
   );
-  const chosen = new Set(ranked.slice(0, Math.min(o.limit, ranked.length)));
+  const chosen = new Set(ranked.slice(0, Math.min(o.limit, cap, ranked.length)));
   const exists = new Set(ids);
   for (const id of o.keep ?? []) if (exists.has(id)) chosen.add(id);
   const total = flowing.reduce((a, id) => a + weight(id), 0);
