@@ -69,7 +69,10 @@ export async function createAnalysis(
   const result = JSON.parse(decoder.decode(json)) as AnalysisResult;
   const deletion = newDeletionToken();
   await keepWithinBudget();
-  const id = await putNewAnalysis({ mechanismId, request, result, pinned: !o.draft }, { deleteHash: deletion.hash });
+  const id = await putNewAnalysis(
+    { mechanismId, request, result, resultJson: json, pinned: !o.draft },
+    { deleteHash: deletion.hash },
+  );
   return { id, result, resultJson: json, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
 }
 
