@@ -4,8 +4,7 @@
  * a write, and the ratio is close to the slow qualities' on this repetitive
  * JSON (DEVELOPERS.md gives the measured figures).
  */
-import { promisify } from "node:util";
-import { brotliCompress, brotliCompressSync, brotliDecompressSync, constants } from "node:zlib";
+import { brotliCompressSync, brotliDecompressSync, constants } from "node:zlib";
 
 export const COMPRESSION_DEFAULTS = {
   /** brotli quality 0–11; default 5 */
@@ -20,15 +19,15 @@ export function packJson(value: unknown, quality = COMPRESSION_DEFAULTS.quality)
   return brotliCompressSync(Buffer.from(JSON.stringify(value), "utf8"), paramsOf(quality));
 }
 
-const brotliCompressAsync = promisify(brotliCompress);
-
 /**
- * JSON text already written (UTF-8), compressed on libuv's thread pool, so
- * that the main thread serves other requests meanwhile; the same bytes as
- * packJson of the parsed value.
+ * JSON text already written (UTF-8), compressed as it is: the same bytes as
+ * packJson of the parsed value, without writing it again. Synchronous on
+ * purpose: zlib's asynchronous brotli (libuv's thread pool) took 24–38 ms of
+ * wall time for a 170 KB text where the synchronous call took 6 ms, on the 2
+ * shared cores at load average 12 (DEVELOPERS.md, service benchmark).
  */
-export function packJsonText(text: Uint8Array, quality = COMPRESSION_DEFAULTS.quality): Promise<Buffer> {
-  return brotliCompressAsync(text, paramsOf(quality));
+export function packJsonText(text: Uint8Array, quality = COMPRESSION_DEFAULTS.quality): Buffer {
+  return brotliCompressSync(text, paramsOf(quality));
 }
 
 export function unpackJson(packed: Uint8Array): unknown {

@@ -93,7 +93,7 @@ export function openPostgresStore(url: string, options: PostgresOptions = {}): S
         `INSERT INTO analyses (id, mechanism_id, engine_version, request_json, result_json, result_br, created_at,
            pinned, delete_hash, stored_bytes)
          VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10)`,
-        analysisColumns(a, await packAnalysisResult(a)),
+        analysisColumns(a, packAnalysisResult(a)),
       );
     },
     async getAnalysis(id) {

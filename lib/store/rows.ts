@@ -96,8 +96,8 @@ export function toRecord(r: RecordRow): StoredRecord {
 }
 
 /** The columns of a new analysis, in the order of the INSERT statements of both back ends. */
-/** The compressed result of a new analysis (its JSON text as given, or written here), off the main thread. */
-export function packAnalysisResult(a: StoredAnalysis): Promise<Buffer> {
+/** The compressed result of a new analysis: its JSON text as given, or written here. */
+export function packAnalysisResult(a: StoredAnalysis): Buffer {
   return packJsonText(a.resultJson ?? Buffer.from(JSON.stringify(a.result), "utf8"));
 }
 

@@ -88,7 +88,7 @@ export function openSqliteStore(file: string): Store {
       return (rows as MechanismRow[]).map(toMechanism);
     },
     async putAnalysis(a: StoredAnalysis) {
-      insertAnalysis.run(...analysisColumns(a, await packAnalysisResult(a)));
+      insertAnalysis.run(...analysisColumns(a, packAnalysisResult(a)));
     },
     async getAnalysis(id) {
       const row = selectAnalysis.get(id) as AnalysisRow | undefined;
