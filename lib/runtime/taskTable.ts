@@ -21,6 +21,8 @@ import type { SampleBatchResult } from "../uncertainty/types";
 
 export type EngineJob =
   | { kind: "analysis"; mechanism: MechanismSource; request: AnalysisRequest; initialState?: number[] }
+  /** an analysis whose result comes back as its JSON text in UTF-8 (transferred, not cloned): what a route sends as is */
+  | { kind: "analysis-json"; mechanism: MechanismSource; request: AnalysisRequest }
   /** neighbouring levels of a profile sweep, each warm-started from the one before (lib/profiles) */
   | { kind: "profile-levels"; mechanism: MechanismSource; batch: LevelBatch }
   /** a batch of Monte Carlo samples around a central steady state (lib/uncertainty) */
@@ -36,6 +38,7 @@ export type EngineJob =
 
 export type EngineJobResult =
   | { kind: "analysis"; result: AnalysisResult }
+  | { kind: "analysis-json"; result: Uint8Array }
   | { kind: "profile-levels"; result: LevelBatchResult }
   | { kind: "uncertainty-samples"; result: SampleBatchResult }
   | { kind: "run-start"; result: StartState }
@@ -53,6 +56,11 @@ export function runJob(job: EngineJob): EngineJobResult {
           initialState: job.initialState,
         }),
       };
+    }
+    case "analysis-json": {
+      const mech = compileSource(job.mechanism);
+      const result = runAnalysis(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.request);
+      return { kind: "analysis-json", result: new TextEncoder().encode(JSON.stringify(result)) };
     }
     case "profile-levels": {
       const mech = compileSource(job.mechanism);

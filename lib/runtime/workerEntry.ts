@@ -5,7 +5,10 @@ import { type EngineJob, runJob } from "./taskTable";
 
 parentPort?.on("message", (msg: { id: number; job: EngineJob }) => {
   try {
-    parentPort?.postMessage({ id: msg.id, ok: true, value: runJob(msg.job) });
+    const value = runJob(msg.job);
+    // bytes are moved to the main thread, not copied
+    const transfer = value.result instanceof Uint8Array ? [value.result.buffer as ArrayBuffer] : [];
+    parentPort?.postMessage({ id: msg.id, ok: true, value }, transfer);
   } catch (e) {
     const err =
       e instanceof EngineError

@@ -2,7 +2,7 @@
  * Analyses: validate the request, run it in the engine pool, store the
  * result immutably under an unguessable id. A failed steady state is a
  * stored result with its status; an invalid request stores nothing. An
- * explorer recompute is a preview (previewAnalysis): computed the same way
+ * explorer recompute is a preview (previewAnalysisJson): computed the same way
  * and returned, nothing stored; the explorer stores it (createAnalysis, the
  * same request, so the same numbers) only when its permalink or an export is
  * asked for. A draft (`draft: true`, the older explorer's recompute) expires
@@ -16,6 +16,7 @@ import { getStore } from "../store";
 import { DELETION_NOTE, deleteWithToken, newDeletionToken } from "./lifecycle";
 import { mechanismSource } from "./mechanisms";
 import { liveAnalysis, provenanceOf, putNewAnalysis } from "./records";
+import { ResultCache, resultKey } from "./resultCache";
 import { keepWithinBudget } from "./retention";
 
 export const MAX_ANALYSIS_BODY = 256 * 1024;
@@ -28,26 +29,61 @@ export interface CreatedAnalysis {
   deletionNote: string;
 }
 
-/** The analysis of a request, computed as createAnalysis computes it and stored nowhere: the explorer's slider steps. */
-export async function previewAnalysis(body: unknown): Promise<{ result: AnalysisResult }> {
-  return { result: (await compute(body)).result };
+const recent = new ResultCache();
+
+/**
+ * The analysis of a request, computed as createAnalysis computes it and stored
+ * nowhere (the explorer's slider steps): the JSON text of the result, as the
+ * worker wrote it or from the cache of recent results, sent without being
+ * parsed or written again.
+ */
+export async function previewAnalysisJson(body: unknown): Promise<Uint8Array> {
+  return (await computeJson(body)).json;
 }
 
-/** One request's analysis in the engine pool: the one composition both routes share. */
-async function compute(body: unknown) {
+/** The one composition both routes share: a recent identical request's result, or the engine pool's. */
+async function computeJson(body: unknown) {
   const request = parseAnalysisRequest(body);
   const src = await mechanismSource(request.mechanismId);
-  const out = await enginePool().run({ kind: "analysis", mechanism: src, request });
-  return { request, mechanismId: src.id, result: out.result };
+  const key = resultKey(src.id, request);
+  let json = recent.get(key);
+  if (!json) {
+    json = (await enginePool().run({ kind: "analysis-json", mechanism: src, request })).result;
+    recent.set(key, json);
+  }
+  return { request, mechanismId: src.id, json };
 }
 
-/** `draft`: an explorer recompute, kept only until OZONE_DRAFT_TTL_DAYS unless pinned. */
-export async function createAnalysis(body: unknown, o: { draft?: boolean } = {}): Promise<CreatedAnalysis> {
-  const { request, mechanismId, result } = await compute(body);
+const decoder = new TextDecoder();
+
+/**
+ * `draft`: an explorer recompute, kept only until OZONE_DRAFT_TTL_DAYS unless
+ * pinned. `resultJson` is the result's JSON text, for a response that need not
+ * write it again (createdAnalysisBody).
+ */
+export async function createAnalysis(
+  body: unknown,
+  o: { draft?: boolean } = {},
+): Promise<CreatedAnalysis & { resultJson: Uint8Array }> {
+  const { request, mechanismId, json } = await computeJson(body);
+  const result = JSON.parse(decoder.decode(json)) as AnalysisResult;
   const deletion = newDeletionToken();
   await keepWithinBudget();
-  const id = await putNewAnalysis({ mechanismId, request, result, pinned: !o.draft }, { deleteHash: deletion.hash });
-  return { id, result, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
+  const id = await putNewAnalysis(
+    { mechanismId, request, result, resultJson: json, pinned: !o.draft },
+    { deleteHash: deletion.hash },
+  );
+  return { id, result, resultJson: json, deletionToken: deletion.token, deletionNote: DELETION_NOTE };
+}
+
+/** The pieces of the JSON of a CreatedAnalysis, in its field order, with the result's text as it is. */
+export function createdAnalysisBody(out: CreatedAnalysis & { resultJson: Uint8Array }): (string | Uint8Array)[] {
+  const s = JSON.stringify;
+  return [
+    `{"id":${s(out.id)},"result":`,
+    out.resultJson,
+    `,"deletionToken":${s(out.deletionToken)},"deletionNote":${s(out.deletionNote)}}`,
+  ];
 }
 
 /** The permalink was asked for (page opened, link copied, a table exported): the analysis is kept for good. */

@@ -175,6 +175,16 @@ export function csvResponse(csv: string, filename: string): Response {
   });
 }
 
+/**
+ * A JSON response from text already written (a worker's result bytes between
+ * literal pieces), as Response.json would send it, without parsing and
+ * writing it again.
+ */
+export function jsonBytesResponse(parts: (string | Uint8Array)[], status = 200): Response {
+  const body = Buffer.concat(parts.map((p) => (typeof p === "string" ? Buffer.from(p, "utf8") : p)));
+  return new Response(body, { status, headers: { "content-type": "application/json" } });
+}
+
 /** A JSON file to download: indented for people unless `indent` is 0 (large records). */
 export function jsonDownload(value: unknown, filename: string, indent = 2): Response {
   return new Response(JSON.stringify(value, null, indent), {

@@ -48,7 +48,7 @@ export async function putNewRecord(kind: string, body: unknown, o: NewRecordOpti
 
 /** Stores a new analysis; resolves to its id. `pinned` false: an explorer draft (lib/service/retention.ts). */
 export async function putNewAnalysis(
-  a: Pick<StoredAnalysis, "mechanismId" | "request" | "result" | "pinned">,
+  a: Pick<StoredAnalysis, "mechanismId" | "request" | "result" | "pinned" | "resultJson">,
   o: NewRecordOptions = {},
 ): Promise<string> {
   const r: StoredAnalysis = { ...a, ...stamp(o) };

@@ -14,6 +14,7 @@ import {
   analysisColumns,
   type MechanismRow,
   mechanismColumns,
+  packAnalysisResult,
   type RecordRow,
   recordColumns,
   refTable,
@@ -92,7 +93,7 @@ export function openPostgresStore(url: string, options: PostgresOptions = {}): S
         `INSERT INTO analyses (id, mechanism_id, engine_version, request_json, result_json, result_br, created_at,
            pinned, delete_hash, stored_bytes)
          VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10)`,
-        analysisColumns(a),
+        analysisColumns(a, packAnalysisResult(a)),
       );
     },
     async getAnalysis(id) {

@@ -4,7 +4,7 @@
  * written since migration 2 are brotli-compressed JSON (compress.ts); older
  * rows keep their plain JSON text and read as before.
  */
-import { packJson, unpackJson } from "./compress";
+import { packJson, packJsonText, unpackJson } from "./compress";
 import type { RecordRef, StoredAnalysis, StoredMechanism, StoredRecord } from "./types";
 
 export interface MechanismRow {
@@ -96,9 +96,14 @@ export function toRecord(r: RecordRow): StoredRecord {
 }
 
 /** The columns of a new analysis, in the order of the INSERT statements of both back ends. */
-export function analysisColumns(a: StoredAnalysis): unknown[] {
+/** The compressed result of a new analysis: its JSON text as given, or written here. */
+export function packAnalysisResult(a: StoredAnalysis): Buffer {
+  return packJsonText(a.resultJson ?? Buffer.from(JSON.stringify(a.result), "utf8"));
+}
+
+/** The columns of a new analysis, in the order of the INSERT statements of both back ends; `packed` from packAnalysisResult. */
+export function analysisColumns(a: StoredAnalysis, packed: Uint8Array): unknown[] {
   const request = JSON.stringify(a.request);
-  const packed = packJson(a.result);
   return [
     a.id,
     a.mechanismId,

@@ -13,6 +13,7 @@ import {
   analysisColumns,
   type MechanismRow,
   mechanismColumns,
+  packAnalysisResult,
   type RecordRow,
   recordColumns,
   refTable,
@@ -87,7 +88,7 @@ export function openSqliteStore(file: string): Store {
       return (rows as MechanismRow[]).map(toMechanism);
     },
     async putAnalysis(a: StoredAnalysis) {
-      insertAnalysis.run(...analysisColumns(a));
+      insertAnalysis.run(...analysisColumns(a, packAnalysisResult(a)));
     },
     async getAnalysis(id) {
       const row = selectAnalysis.get(id) as AnalysisRow | undefined;

@@ -43,6 +43,8 @@ export interface StoredAnalysis<Request = unknown, Result = unknown> extends Lif
   createdAt: string;
   /** false for an explorer draft, which expires; default true (kept) */
   pinned?: boolean;
+  /** on a write only: `result`'s JSON text (UTF-8) when the caller has it, stored instead of writing it again */
+  resultJson?: Uint8Array;
 }
 
 /** A stored record of any other kind (profiles, comparisons, assessments): immutable JSON by id. */

@@ -50,6 +50,24 @@ test.describe("the analysis preview", () => {
     expect(numbersOf(again)).toEqual(numbersOf(record.result));
   });
 
+  test("answers a request asked before from the recent results: the same JSON text, elapsed_ms included", async ({
+    request,
+  }) => {
+    const body = { mechanismId: "reference", condition: { altitude_km: 27.25, zenith_deg: 55 } };
+    const first = await request.post("/api/analyses/preview", { data: body });
+    expect(first.headers()["content-type"]).toBe("application/json");
+    const text = await first.text();
+    // the same request with its keys in another order is the same request
+    const reordered = { condition: { zenith_deg: 55, altitude_km: 27.25 }, mechanismId: "reference" };
+    expect(await (await request.post("/api/analyses/preview", { data: reordered })).text()).toBe(text);
+    const created = await request.post("/api/analyses", { data: body });
+    expect(created.headers()["content-type"]).toBe("application/json");
+    const { id, result, deletionToken } = await created.json();
+    expect(result).toEqual(JSON.parse(text).result);
+    expect(typeof deletionToken).toBe("string");
+    expect((await (await request.get(`/api/analyses/${id}`)).json()).result).toEqual(result);
+  });
+
   test("refuses a bad request as the storing route does, naming the field", async ({ request }) => {
     const bad = { mechanismId: "reference", condition: { altitude_km: 500 } };
     const res = await request.post("/api/analyses/preview", { data: bad });

@@ -59,6 +59,17 @@ describe("the SQLite store", () => {
     await s.close();
   });
 
+  it("stores the result's JSON text when it is given (resultJson) and reads back the same result", async () => {
+    const s = openSqliteStore(tempFile());
+    const result = { b: [0.1, 1e-300, 6.02214076e23], c: "x" };
+    const a = { id: newRecordId(), mechanismId: mech.id, engineVersion: "0.1.0", request: { a: 1 }, createdAt: "x" };
+    await s.putAnalysis({ ...a, result, resultJson: Buffer.from(JSON.stringify(result)) });
+    const back = await s.getAnalysis(a.id);
+    expect(back?.result).toStrictEqual(result);
+    expect(back).not.toHaveProperty("resultJson");
+    await s.close();
+  });
+
   it("keeps what it stored across a close and reopen", async () => {
     const file = tempFile();
     const s = openSqliteStore(file);

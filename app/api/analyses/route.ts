@@ -1,5 +1,5 @@
-import { createAnalysis, MAX_ANALYSIS_BODY } from "@/lib/service/analyses";
-import { readJsonBody, respond } from "@/lib/service/http";
+import { createAnalysis, createdAnalysisBody, MAX_ANALYSIS_BODY } from "@/lib/service/analyses";
+import { jsonBytesResponse, readJsonBody, respond } from "@/lib/service/http";
 import { limitRequest } from "@/lib/service/rateLimit";
 
 export const dynamic = "force-dynamic";
@@ -10,6 +10,6 @@ export function POST(req: Request) {
     await limitRequest(req);
     const draft = new URL(req.url).searchParams.get("draft") === "1";
     const out = await createAnalysis(await readJsonBody(req, MAX_ANALYSIS_BODY), { draft });
-    return Response.json(out, { status: 201 });
+    return jsonBytesResponse(createdAnalysisBody(out), 201);
   });
 }

@@ -1,5 +1,5 @@
-import { MAX_ANALYSIS_BODY, previewAnalysis } from "@/lib/service/analyses";
-import { readJsonBody, respond } from "@/lib/service/http";
+import { MAX_ANALYSIS_BODY, previewAnalysisJson } from "@/lib/service/analyses";
+import { jsonBytesResponse, readJsonBody, respond } from "@/lib/service/http";
 import { limitRequest } from "@/lib/service/rateLimit";
 
 export const dynamic = "force-dynamic";
@@ -8,6 +8,7 @@ export const dynamic = "force-dynamic";
 export function POST(req: Request) {
   return respond(async () => {
     await limitRequest(req);
-    return Response.json(await previewAnalysis(await readJsonBody(req, MAX_ANALYSIS_BODY)));
+    const result = await previewAnalysisJson(await readJsonBody(req, MAX_ANALYSIS_BODY));
+    return jsonBytesResponse(['{"result":', result, "}"]);
   });
 }
