@@ -257,7 +257,6 @@ export function Explorer(props: Props) {
             detailLimit={view.detail}
             onDetailLimit={(detail) => setViewPart({ detail })}
             detail={detail}
-            largeMechanism={large}
             onFit={() => net.current?.fit()}
             onZoom={(f) => net.current?.zoomBy(f)}
             loading={analysis.loading}

@@ -11,8 +11,6 @@ interface Props {
   detailLimit: number;
   onDetailLimit(limit: number): void;
   detail: ReactionDetail | null;
-  /** the mechanism is so large that only the species of the drawn reactions are shown */
-  largeMechanism: boolean;
   onFit(): void;
   onZoom(factor: number): void;
   loading: boolean;
@@ -33,7 +31,6 @@ export function Toolbar({
   detailLimit,
   onDetailLimit,
   detail,
-  largeMechanism,
   onFit,
   onZoom,
   loading,
@@ -93,7 +90,6 @@ export function Toolbar({
           <span data-testid="hidden-count" className="tabular-nums text-stone-500">
             {detail.shown.length} drawn · {detail.hidden} hidden
             {detail.zeroFlux ? ` (${detail.zeroFlux} with zero flux)` : ""}
-            {largeMechanism ? " · large mechanism: only the species of the drawn reactions are shown" : ""}
           </span>
         ) : null}
       </span>
