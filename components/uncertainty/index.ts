@@ -1,6 +1,5 @@
 export { AnalysisUncertaintyRunner } from "./AnalysisUncertaintyRunner";
 export { JobBar } from "./JobBar";
-export { ProfileBands } from "./ProfileBands";
 export { ProfileShareBandsChart } from "./ProfileShareBandsChart";
 export { ProfileUncertaintyRunner } from "./ProfileUncertaintyRunner";
 export { RangeTable } from "./RangeTable";

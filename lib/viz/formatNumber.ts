@@ -1,7 +1,15 @@
 /**
  * Number formatting for the panels: scientific notation with a real
- * superscript exponent ("3.2 × 10⁶"), or plain text ("3.2e6") for exports.
+ * superscript exponent ("3.2 × 10⁶") and a true minus sign ("−4.6"), for
+ * reading. Exports (CSV, JSON) keep plain ASCII ("-4.6e-12") and do not use
+ * these functions.
  */
+
+/** U+2212 MINUS SIGN: the typographic minus, not the hyphen-minus. */
+export const MINUS = "\u2212";
+
+/** A leading hyphen-minus written as the minus sign. */
+const withMinus = (s: string): string => (s.startsWith("-") ? MINUS + s.slice(1) : s);
 
 const SUPERSCRIPT: Record<string, string> = {
   "-": "⁻",
@@ -28,7 +36,7 @@ export function formatNumber(v: number | null | undefined, digits = 3): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return "—";
   if (v === 0) return "0";
   const a = Math.abs(v);
-  if (a >= 0.01 && a < 1e4) return Number(v.toPrecision(digits)).toString();
+  if (a >= 0.01 && a < 1e4) return withMinus(Number(v.toPrecision(digits)).toString());
   const e = Math.floor(Math.log10(a));
   let m = Number((v / 10 ** e).toPrecision(digits));
   let exp = e;
@@ -36,7 +44,7 @@ export function formatNumber(v: number | null | undefined, digits = 3): string {
     m /= 10;
     exp += 1;
   }
-  return `${m} × 10${superscript(String(exp))}`;
+  return `${withMinus(String(m))} × 10${superscript(String(exp))}`;
 }
 
 /** "10⁶" for a power of ten. */
@@ -47,7 +55,7 @@ export function formatPercent(fraction: number): string {
   if (!Number.isFinite(fraction)) return "—";
   const p = fraction * 100;
   if (p > 0 && p < 0.1) return "<0.1 %";
-  return `${p < 10 ? p.toFixed(1) : p.toFixed(0)} %`;
+  return `${withMinus(Math.abs(p) < 10 ? p.toFixed(1) : p.toFixed(0))} %`;
 }
 
 /** Mixing ratio with a unit chosen for legibility: ppmv, ppbv or pptv. */

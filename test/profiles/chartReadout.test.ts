@@ -126,10 +126,10 @@ describe("readout rows", () => {
     const r = differenceReadout(levels, fam, "linear", { maxFamilies: 2 });
     expect(r.series.map((x) => [x.key, x.label])).toEqual(s.lines.map((l) => [l.key, l.label]));
     expect(readoutRows(r, 1).map((row) => row.text)).toEqual([
-      "-2 × 10⁵ molecules cm⁻³ s⁻¹",
-      "-1.5 × 10⁵ molecules cm⁻³ s⁻¹",
-      "-3 × 10⁴ molecules cm⁻³ s⁻¹",
-      "-2 × 10⁴ molecules cm⁻³ s⁻¹",
+      "−2 × 10⁵ molecules cm⁻³ s⁻¹",
+      "−1.5 × 10⁵ molecules cm⁻³ s⁻¹",
+      "−3 × 10⁴ molecules cm⁻³ s⁻¹",
+      "−2 × 10⁴ molecules cm⁻³ s⁻¹",
     ]);
     // the total's marker sits on its line: the line passes through (x, y) of the readout
     const total = readoutRows(r, 1)[0];

@@ -188,7 +188,11 @@ describe("explorer query", () => {
 describe("number formatting", () => {
   it("writes scientific notation with superscript exponents", () => {
     expect(formatNumber(3.2e6)).toBe("3.2 × 10⁶");
-    expect(formatNumber(-4.56e-12, 2)).toBe("-4.6 × 10⁻¹²");
+    // the mantissa's sign is U+2212 (the minus sign), the exponent's the superscript minus
+    expect(formatNumber(-4.56e-12, 2)).toBe("\u22124.6 × 10⁻¹²");
+    expect(formatNumber(-0.5)).toBe("\u22120.5");
+    expect(formatPercent(-0.25)).toBe("\u221225 %");
+    expect(formatPercent(-0.052)).toBe("\u22125.2 %");
     expect(formatNumber(12.345)).toBe("12.3");
     expect(formatNumber(9.996e5, 3)).toBe("1 × 10⁶");
     expect(formatNumber(null)).toBe("—");
