@@ -9,6 +9,7 @@ import type { Core, ElementDefinition, SingularElementReturnValue, StylesheetJso
 import { forwardRef, useEffect, useImperativeHandle, useRef, useState } from "react";
 import type { Highlight } from "@/lib/viz/cycleHighlight";
 import { formatNumber } from "@/lib/viz/formatNumber";
+import { frameBoxes } from "@/lib/viz/frameBoxes";
 import type { StyleRule } from "@/lib/viz/networkStyle";
 import type { GraphElement, Point } from "@/lib/viz/types";
 
@@ -36,7 +37,8 @@ declare global {
     /** read-only view of the canvas for the browser tests */
     __ozoneNetwork?: {
       edges(): { id: string; color: string; width: number; classes: string[] }[];
-      nodes(): { id: string; classes: string[]; x: number; y: number }[];
+      /** positions in model px; `w` and `h` are the node's width and height */
+      nodes(): { id: string; classes: string[]; x: number; y: number; w: number; h: number }[];
       /** position of a node on screen relative to the canvas, px */
       rendered(id: string): { x: number; y: number } | null;
     };
@@ -49,6 +51,8 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 ) {
   const box = useRef<HTMLDivElement>(null);
   const cyRef = useRef<Core | null>(null);
+  /** a chip has been dragged by hand since the graph was built: the frames then follow the chips, not the layout */
+  const moved = useRef(false);
   const [tip, setTip] = useState<{ x: number; y: number; title: string; detail: string } | null>(null);
   const latest = useRef({ elements, highlight, selected, onSelect });
   latest.current = { elements, highlight, selected, onSelect };
@@ -114,6 +118,11 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
         });
       });
       cy.on("mouseout", "node", () => setTip(null));
+      // a chip dragged by hand takes its frame along
+      cy.on("drag", "node.species", () => {
+        moved.current = true;
+        if (cy) fitFrames(cy);
+      });
       cy.on("viewport", () => setTip(null));
       cyRef.current = cy;
       window.__ozoneNetwork = {
@@ -129,10 +138,16 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
           return n?.nonempty() ? { ...n.renderedPosition() } : null;
         },
         nodes: () =>
-          cyRef.current
-            ?.nodes()
-            .map((n) => ({ id: n.id(), classes: n.classes(), x: n.position("x"), y: n.position("y") })) ?? [],
+          cyRef.current?.nodes().map((n) => ({
+            id: n.id(),
+            classes: n.classes(),
+            x: n.position("x"),
+            y: n.position("y"),
+            w: n.width(),
+            h: n.height(),
+          })) ?? [],
       };
+      moved.current = false;
       apply(cy, latest.current.elements, latest.current.highlight, latest.current.selected);
       box.current.dataset.ready = "true";
     });
@@ -145,7 +160,10 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   }, [layoutKey]);
 
   useEffect(() => {
-    if (cyRef.current) apply(cyRef.current, elements, highlight, selected);
+    const cy = cyRef.current;
+    if (!cy) return;
+    apply(cy, elements, highlight, selected);
+    if (moved.current) fitFrames(cy);
   }, [elements, highlight, selected]);
 
   // a newly chosen cycle is brought into view; clearing it returns to the whole network
@@ -205,9 +223,7 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
     });
     const on = new Set(hl.on);
     const lit = (id: string) => (on.size === 0 ? "" : on.has(id) ? " hl" : " dim");
-    // frames first so that children find their parent
-    const sorted = [...elements].sort((a, b) => rank(a) - rank(b));
-    for (const el of sorted) {
+    for (const el of elements) {
       const classes = `${el.classes}${lit(el.data.id)}`;
       const ex = have.get(el.data.id);
       if (!ex) {
@@ -226,6 +242,12 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
       }
       if (any) ex.data(changed);
       if (!sameClasses(ex.classes(), classes)) ex.classes(classes);
+      // a frame's box follows the chips that are drawn (the detail control changes them)
+      if (el.group === "nodes" && el.data.kind === "frame" && el.position) {
+        const p = ex.position();
+        const want = el.position;
+        if (p.x !== want.x || p.y !== want.y) ex.position(want);
+      }
     }
     const sel = cy.$(":selected");
     if (selected === null) {
@@ -264,4 +286,31 @@ function sameClasses(have: string[], want: string): boolean {
   return have.length === w.length && w.every((c) => have.includes(c));
 }
 
-const rank = (e: GraphElement) => (e.data.kind === "frame" ? 0 : e.group === "nodes" ? 1 : 2);
+/**
+ * Frames are plain nodes (a compound parent would make cytoscape re-derive
+ * every ancestor on each change), so a chip dragged by hand takes its frame
+ * along here: the boxes of the frames are worked out again from where the
+ * chips now are, as the SVG export does.
+ */
+function fitFrames(cy: Core): void {
+  const chips = cy.nodes("node.species").map((n) => ({
+    frame: n.data("frame") as string,
+    ...n.position(),
+    width: n.data("width") as number,
+  }));
+  const frames = cy.nodes("node.frame");
+  const boxes = frameBoxes(chips, new Map(frames.map((f) => [f.id(), f.data("minWidth") as number])));
+  cy.batch(() => {
+    frames.forEach((f) => {
+      const b = boxes.get(f.id());
+      if (!b) return;
+      const width = b.x1 - b.x0;
+      const height = b.y1 - b.y0;
+      if (f.data("width") !== width || f.data("height") !== height) f.data({ width, height });
+      const p = f.position();
+      const x = (b.x0 + b.x1) / 2;
+      const y = (b.y0 + b.y1) / 2;
+      if (p.x !== x || p.y !== y) f.position({ x, y });
+    });
+  });
+}

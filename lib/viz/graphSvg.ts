@@ -4,6 +4,7 @@
  * like the canvas). Pure: string in the end, no DOM.
  */
 import { escapeXml } from "./escapeXml";
+import { frameBoxes } from "./frameBoxes";
 import { NETWORK_FONT } from "./networkStyle";
 import type { GraphElement, Point, SpeciesNodeData } from "./types";
 
@@ -42,35 +43,21 @@ export function graphSvg(elements: readonly GraphElement[], options: SvgOptions 
   const pos = new Map<string, Point>();
   const half = new Map<string, { w: number; h: number }>();
   for (const el of elements) {
-    if (el.group !== "nodes" || !el.position) continue;
+    if (el.group !== "nodes" || !el.position || el.data.kind === "frame") continue;
     pos.set(el.data.id, options.positions?.[el.data.id] ?? el.position);
     const d = el.data;
     if (d.kind === "species") half.set(d.id, { w: d.width / 2, h: o.chipHeight_px / 2 });
     if (d.kind === "reaction") half.set(d.id, { w: d.size / 2, h: d.size / 2 });
     if (d.kind === "stub") half.set(d.id, { w: d.width / 2, h: 7.5 });
   }
-  const frames = new Map<string, Box>();
-  for (const el of elements) {
-    if (el.data.kind !== "species") continue;
-    const p = pos.get(el.data.id)!;
-    const h = half.get(el.data.id)!;
-    const b = frames.get(el.data.parent) ?? { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
-    frames.set(el.data.parent, {
-      x0: Math.min(b.x0, p.x - h.w - o.framePadding_px),
-      y0: Math.min(b.y0, p.y - h.h - o.framePadding_px),
-      x1: Math.max(b.x1, p.x + h.w + o.framePadding_px),
-      y1: Math.max(b.y1, p.y + h.h + o.framePadding_px),
-    });
-  }
-  for (const el of elements) {
-    if (el.data.kind !== "frame") continue;
-    const b = frames.get(el.data.id);
-    if (b && b.x1 - b.x0 < el.data.minWidth) {
-      const grow = (el.data.minWidth - (b.x1 - b.x0)) / 2;
-      b.x0 -= grow;
-      b.x1 += grow;
-    }
-  }
+  // the frames' boxes from the chips where they are drawn (after a drag, too)
+  const frames = frameBoxes(
+    elements.flatMap((el) =>
+      el.data.kind === "species" ? [{ frame: el.data.frame, ...pos.get(el.data.id)!, width: el.data.width }] : [],
+    ),
+    new Map(elements.flatMap((el) => (el.data.kind === "frame" ? [[el.data.id, el.data.minWidth] as const] : []))),
+    { padding_px: o.framePadding_px, chipHeight_px: o.chipHeight_px },
+  );
   const all: Box = { x0: Infinity, y0: Infinity, x1: -Infinity, y1: -Infinity };
   for (const b of frames.values()) grow(all, { ...b, y0: b.y0 - 20 });
   for (const [id, p] of pos) {

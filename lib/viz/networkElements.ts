@@ -17,6 +17,7 @@ import { divergingColor } from "./divergingColor";
 import { equationView } from "./equationView";
 import { familyLabel } from "./familyLabel";
 import { familyStyle } from "./familyStyle";
+import { frameBoxes } from "./frameBoxes";
 import { isolateText } from "./isolateText";
 import { stubWidth } from "./labelBox";
 import { logScale } from "./logScale";
@@ -95,6 +96,8 @@ export function networkElements(
         family: f,
         label: isolateText(familyLabel(f)),
         minWidth: frameTitleWidth(familyLabel(f)),
+        width: 0,
+        height: 0,
         fill: st.frame,
         stroke: st.frameInk,
       },
@@ -125,7 +128,7 @@ export function networkElements(
         speciesId: s.id,
         label: isolateText(s.label || s.id),
         family: p.family,
-        parent: frameNodeId(p.family),
+        frame: frameNodeId(p.family),
         role: s.role,
         spectator,
         fill: spectator ? "#ffffff" : st.chip,
@@ -137,6 +140,22 @@ export function networkElements(
       position: { x: p.x, y: p.y },
       classes: `species${spectator ? " spectator" : ""}`,
     });
+  }
+
+  // each frame is a plain node with the box of its chips
+  const boxes = frameBoxes(
+    nodes.flatMap((n) =>
+      n.data.kind === "species" && n.position ? [{ frame: n.data.frame, ...n.position, width: n.data.width }] : [],
+    ),
+    new Map(nodes.flatMap((n) => (n.data.kind === "frame" ? [[n.data.id, n.data.minWidth] as const] : []))),
+  );
+  for (const n of nodes) {
+    if (n.data.kind !== "frame") continue;
+    const b = boxes.get(n.data.id);
+    if (!b) continue;
+    n.data.width = round(b.x1 - b.x0);
+    n.data.height = round(b.y1 - b.y0);
+    n.position = { x: round((b.x0 + b.x1) / 2), y: round((b.y0 + b.y1) / 2) };
   }
 
   const edges: GraphEdge[] = [];

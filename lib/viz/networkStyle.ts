@@ -17,17 +17,17 @@ export const NETWORK_FONT = 'ui-sans-serif, system-ui, "Segoe UI", Roboto, "Helv
 export function networkStyle(): StyleRule[] {
   return [
     {
+      // a plain node with its box in the data (frameBoxes), drawn beneath everything else
       selector: "node.frame",
       style: {
         shape: "round-rectangle",
+        width: "data(width)",
+        height: "data(height)",
         "background-color": "data(fill)",
         "border-width": 1,
         "border-color": "data(stroke)",
         "border-opacity": 0.35,
-        padding: "26px",
-        "min-width": "data(minWidth)",
-        "min-width-bias-left": "50%",
-        "min-width-bias-right": "50%",
+        "z-compound-depth": "bottom",
         events: "no",
       },
     },

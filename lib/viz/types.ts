@@ -73,8 +73,8 @@ export interface SpeciesNodeData {
   speciesId: string;
   label: string;
   family: string;
-  /** frame node id this species sits in */
-  parent: string;
+  /** frame node id this species sits in (not cytoscape's "parent": frames are plain nodes) */
+  frame: string;
   role: SpeciesRole;
   /** true for held and third-body species */
   spectator: boolean;
@@ -114,6 +114,9 @@ export interface FrameNodeData {
   stroke: string;
   /** smallest width that holds the title, px */
   minWidth: number;
+  /** the frame's box around its chips (frameBoxes), px; the node's position is its centre */
+  width: number;
+  height: number;
 }
 
 export interface EdgeData {

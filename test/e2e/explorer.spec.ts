@@ -12,7 +12,7 @@ type EdgeInfo = { id: string; color: string; width: number; classes: string[] };
 const edges = (page: Page) => page.evaluate(() => window.__ozoneNetwork?.edges() ?? []) as Promise<EdgeInfo[]>;
 const nodes = (page: Page) =>
   page.evaluate(() => window.__ozoneNetwork?.nodes() ?? []) as Promise<
-    { id: string; classes: string[]; x: number; y: number }[]
+    { id: string; classes: string[]; x: number; y: number; w: number; h: number }[]
   >;
 
 async function openExplorer(page: Page, query: string) {
@@ -172,6 +172,28 @@ test("pointing at a reaction shows its equation and rate", async ({ page }) => {
   await expect(tip).toContainText("O + O3 -> 2 O2");
   await expect(tip).toContainText("cm⁻³ s⁻¹");
   await shot(page, "explorer-hover");
+});
+
+test("a chip dragged out of its frame takes the frame along, and the next step keeps it there", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=30");
+  const frameOf = async () => (await nodes(page)).find((n) => n.id === "f:ClOx")!;
+  const before = await frameOf();
+  const box = (await page.getByTestId("network").boundingBox())!;
+  const at = (await page.evaluate(() => window.__ozoneNetwork?.rendered("s:ClO") ?? null))!;
+  await page.mouse.move(box.x + at.x, box.y + at.y);
+  await page.mouse.down();
+  await page.mouse.move(box.x + at.x, box.y + at.y + 120, { steps: 8 });
+  await page.mouse.up();
+  const chip = (await nodes(page)).find((n) => n.id === "s:ClO")!;
+  const after = await frameOf();
+  expect(after.y + after.h / 2).toBeGreaterThan(before.y + before.h / 2);
+  // the chip sits inside its frame, with room to spare (the frame's padding)
+  expect(chip.y + chip.h / 2).toBeLessThan(after.y + after.h / 2);
+  // a recompute repaints colours and widths; the frame stays around the dragged chip
+  await page.getByLabel("Altitude").focus();
+  await page.keyboard.press("ArrowRight");
+  await expect(page.getByTestId("status")).toContainText("30.5 km");
+  await expect.poll(async () => (await frameOf()).h).toBe(after.h);
 });
 
 test("a species and a reaction can be inspected", async ({ page }) => {
