@@ -59,11 +59,16 @@ export function reactionDetail(
   const cap = options.cap ?? Infinity;
   if (!(cap > 0)) throw new RangeError(`reactionDetail: invalid cap: ${cap} (expected a positive count)`);
   const ids = mech.reactions.map((r) => r.id);
+  /** `chosen` with the kept reactions that exist added */
+  const withKept = (chosen: Set<string>): Set<string> => {
+    if (!o.keep?.length) return chosen;
+    const exists = new Set(ids);
+    for (const id of o.keep) if (exists.has(id)) chosen.add(id);
+    return chosen;
+  };
   if (!result) {
     if (ids.length <= cap) return { shown: ids, hidden: 0, zeroFlux: 0, covered: null };
-    const chosen = new Set(ids.slice(0, Math.min(cap, o.limit)));
-    const exists = new Set(ids);
-    for (const id of o.keep ?? []) if (exists.has(id)) chosen.add(id);
+    const chosen = withKept(new Set(ids.slice(0, Math.min(cap, o.limit))));
     return { shown: ids.filter((id) => chosen.has(id)), hidden: ids.length - chosen.size, zeroFlux: 0, covered: null };
   }
   const order = new Map(ids.map((id, i) => [id, i]));
@@ -75,9 +80,7 @@ export function reactionDetail(
   const ranked = [...flowing].sort(
     (a, b) => weight(b) - weight(a) || (rate.get(b) ?? 0) - (rate.get(a) ?? 0) || order.get(a)! - order.get(b)!,
   );
-  const chosen = new Set(ranked.slice(0, Math.min(o.limit, cap, ranked.length)));
-  const exists = new Set(ids);
-  for (const id of o.keep ?? []) if (exists.has(id)) chosen.add(id);
+  const chosen = withKept(new Set(ranked.slice(0, Math.min(o.limit, cap, ranked.length))));
   const total = flowing.reduce((a, id) => a + weight(id), 0);
   const carried = [...chosen].reduce((a, id) => a + weight(id), 0);
   return {
