@@ -29,7 +29,7 @@ export function stampedCliBundles(root) {
   for (const [rel, mtimeMs] of stamp.dirs) if (!same(rel, null, mtimeMs)) return null;
   for (const [rel, size, mtimeMs] of stamp.files) if (!same(rel, size, mtimeMs)) return null;
   const bundles = cliBundlePaths(dir, stamp.key);
-  for (const f of [bundles.cli, bundles.worker, bundles.storedJson])
+  for (const f of [bundles.cli, bundles.worker, bundles.storedJson, bundles.storedTables])
     if (!statSync(f, { throwIfNoEntry: false })) return null;
   return { cli: bundles.cli, worker: bundles.worker };
 }
@@ -40,6 +40,7 @@ export function cliBundlePaths(dir, key) {
     cli: path.join(dir, `cli-${key}.cjs`),
     worker: path.join(dir, `cli-worker-${key}.mjs`),
     storedJson: path.join(dir, `cli-stored-${key}.json`),
+    storedTables: path.join(dir, `cli-stored-${key}.tables`),
     codeCache: path.join(dir, `cli-${key}.cache`),
   };
 }
