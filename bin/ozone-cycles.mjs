@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // `ozone-cycles`: the command line of Ozone Loss Cycles (lib/cli). Runs the
 // engine in this process; `ozone-cycles --help` lists the commands.
+import { isAscii } from "node:buffer";
 import { createHash } from "node:crypto";
 import { readFileSync, renameSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
@@ -32,7 +33,11 @@ function loadBundle(file, command) {
   try {
     cachedData = readFileSync(cacheFile);
   } catch {}
-  const wrapped = `(function (exports, require, module, __filename, __dirname) {${readFileSync(file, "utf8")}\n})`;
+  // the bundle is ASCII (scripts/cli-bundle.mjs): read as Latin-1, the same text, it is copied into a one-byte
+  // string without UTF-8 decoding; a bundle that is not (a non-ASCII regular expression) is decoded as UTF-8
+  const bytes = readFileSync(file);
+  const source = isAscii(bytes) ? bytes.toString("latin1") : bytes.toString("utf8");
+  const wrapped = `(function (exports, require, module, __filename, __dirname) {${source}\n})`;
   const script = new vm.Script(wrapped, { filename: file, cachedData });
   const module = { exports: {} };
   script.runInThisContext()(module.exports, createRequire(file), module, file, path.dirname(file));

@@ -93,7 +93,17 @@ export async function ensureCliBundles(root) {
       [
         cli,
         "lib/cli/main.ts",
-        { packages: undefined, format: "cjs", banner: {}, plugins: [serverOnlyStub, prebuilt(storedCjs)] },
+        {
+          packages: undefined,
+          format: "cjs",
+          banner: {},
+          plugins: [serverOnlyStub, prebuilt(storedCjs)],
+          // no comments and ASCII only: Node reads an ASCII file into a one-byte string several times faster than
+          // one with a single non-ASCII character (the source's comments have µm², cm⁻³, →), 1.9 MB → 1.3 MB
+          minifyWhitespace: true,
+          legalComments: "none",
+          charset: "ascii",
+        },
       ],
       [worker, "lib/runtime/workerEntry.ts", {}],
     ].map(async ([out, entry, extra]) => {
