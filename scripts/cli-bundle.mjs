@@ -8,9 +8,11 @@
 // alone, so an unchanged tree starts without loading this module.
 // The engine's spectral tables (lib/photolysis/spectralTables.ts, ~0.3 s of
 // CPU to build) and the loaded built-in mechanisms (the reference YAML takes
-// ~0.15 s to parse) are made once here and stored in both bundles in place of
+// ~0.15 s to parse) are made once here and stored beside the bundles
+// (.engine/cli-stored-<key>.tables and .json), read in place of
 // lib/photolysis/prebuiltSpectralTables.ts and lib/mechanism/prebuiltMechanisms.ts,
-// so a run does neither.
+// so a run does neither. The runs themselves keep their solved radiative
+// columns in .engine/cli-fields-<key>/ (lib/cli/diskFieldStore.ts).
 import { createHash } from "node:crypto";
 import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from "node:fs";
 import path from "node:path";
