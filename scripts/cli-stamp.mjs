@@ -23,7 +23,9 @@ export function stampedCliBundles(root) {
   }
   if (!stamp || typeof stamp.key !== "string" || !Array.isArray(stamp.files) || !Array.isArray(stamp.dirs)) return null;
   const same = (rel, size, mtimeMs) => {
-    const s = statSync(path.join(root, rel), { throwIfNoEntry: false });
+    // joined by hand: the paths are path.relative's, already normal, and a cold path.join over ~400 of them
+    // doubled the check's CPU (25 against 13 ms, 3 runs each at load 11)
+    const s = statSync(root + path.sep + rel, { throwIfNoEntry: false });
     return s !== undefined && s.mtimeMs === mtimeMs && (size === null || s.size === size);
   };
   for (const [rel, mtimeMs] of stamp.dirs) if (!same(rel, null, mtimeMs)) return null;
