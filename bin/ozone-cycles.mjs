@@ -1,6 +1,8 @@
 #!/usr/bin/env node
 // `ozone-cycles`: the command line of Ozone Loss Cycles (lib/cli). Runs the
 // engine in this process; `ozone-cycles --help` lists the commands.
+import { isAscii } from "node:buffer";
+import { createHash } from "node:crypto";
 import { readFileSync, renameSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import path from "node:path";
@@ -22,12 +24,20 @@ const COMMANDS = new Set(["analyse", "analyze", "sweep", "check", "compare"]);
  */
 function loadBundle(file, command) {
   const key = path.basename(file).replace(/^cli-|\.cjs$/g, "");
-  const cacheFile = cliBundlePaths(path.dirname(file), key).codeCache.replace(/\.cache$/, `.${command}.cache`);
+  // V8 refuses a cache written under other flags, so runs with other node flags keep their own
+  const flags = process.execArgv.length
+    ? `-${createHash("sha1").update(process.execArgv.join("\0")).digest("hex").slice(0, 8)}`
+    : "";
+  const cacheFile = cliBundlePaths(path.dirname(file), key).codeCache.replace(/\.cache$/, `.${command}${flags}.cache`);
   let cachedData;
   try {
     cachedData = readFileSync(cacheFile);
   } catch {}
-  const wrapped = `(function (exports, require, module, __filename, __dirname) {${readFileSync(file, "utf8")}\n})`;
+  // the bundle is ASCII (scripts/cli-bundle.mjs): read as Latin-1, the same text, it is copied into a one-byte
+  // string without UTF-8 decoding; a bundle that is not (a non-ASCII regular expression) is decoded as UTF-8
+  const bytes = readFileSync(file);
+  const source = isAscii(bytes) ? bytes.toString("latin1") : bytes.toString("utf8");
+  const wrapped = `(function (exports, require, module, __filename, __dirname) {${source}\n})`;
   const script = new vm.Script(wrapped, { filename: file, cachedData });
   const module = { exports: {} };
   script.runInThisContext()(module.exports, createRequire(file), module, file, path.dirname(file));
@@ -56,6 +66,8 @@ try {
     stderr: (s) => process.stderr.write(s),
     stderrIsTTY: Boolean(process.stderr.isTTY),
     workerScript: worker,
+    // solved radiative columns, kept per bundle key (lib/cli/diskFieldStore.ts)
+    fieldStoreDir: cli.replace(/cli-([0-9a-f]{16})\.cjs$/, "cli-fields-$1"),
   });
   writeCache();
 } catch (e) {

@@ -23,13 +23,15 @@ export function stampedCliBundles(root) {
   }
   if (!stamp || typeof stamp.key !== "string" || !Array.isArray(stamp.files) || !Array.isArray(stamp.dirs)) return null;
   const same = (rel, size, mtimeMs) => {
-    const s = statSync(path.join(root, rel), { throwIfNoEntry: false });
+    // joined by hand: the paths are path.relative's, already normal, and a cold path.join over ~400 of them
+    // doubled the check's CPU (25 against 13 ms, 3 runs each at load 11)
+    const s = statSync(root + path.sep + rel, { throwIfNoEntry: false });
     return s !== undefined && s.mtimeMs === mtimeMs && (size === null || s.size === size);
   };
   for (const [rel, mtimeMs] of stamp.dirs) if (!same(rel, null, mtimeMs)) return null;
   for (const [rel, size, mtimeMs] of stamp.files) if (!same(rel, size, mtimeMs)) return null;
   const bundles = cliBundlePaths(dir, stamp.key);
-  for (const f of [bundles.cli, bundles.worker, bundles.storedJson])
+  for (const f of [bundles.cli, bundles.worker, bundles.storedJson, bundles.storedTables])
     if (!statSync(f, { throwIfNoEntry: false })) return null;
   return { cli: bundles.cli, worker: bundles.worker };
 }
@@ -40,6 +42,7 @@ export function cliBundlePaths(dir, key) {
     cli: path.join(dir, `cli-${key}.cjs`),
     worker: path.join(dir, `cli-worker-${key}.mjs`),
     storedJson: path.join(dir, `cli-stored-${key}.json`),
+    storedTables: path.join(dir, `cli-stored-${key}.tables`),
     codeCache: path.join(dir, `cli-${key}.cache`),
   };
 }

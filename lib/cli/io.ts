@@ -2,7 +2,8 @@
  * What the command line reads and writes, passed in so that the commands run
  * the same in the real binary and in-process: the caller's working folder,
  * the two output streams, whether stderr is a terminal (progress is drawn only
- * then), and the engine's worker-thread script for sweeps.
+ * then), the engine's worker-thread script for sweeps, and the folder where
+ * solved radiative columns are kept between runs.
  */
 import fs from "node:fs";
 import path from "node:path";
@@ -16,6 +17,8 @@ export interface CliIo {
   stderrIsTTY: boolean;
   /** the bundled engine worker (lib/runtime/workerEntry.ts) for sweeps; absent: levels run in this thread */
   workerScript?: string;
+  /** folder of the diffuse fields kept between runs (diskFieldStore.ts); absent: every run solves its columns */
+  fieldStoreDir?: string;
 }
 
 /** Exit codes, as common command-line practice has them. */

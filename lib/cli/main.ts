@@ -5,11 +5,14 @@
  */
 import { CommanderError } from "commander";
 import { EngineError, MechanismError } from "../errors";
+import { setDiffuseFieldStore } from "../photolysis/diffuseFieldStore";
+import { diskFieldStore } from "./diskFieldStore";
 import { CliError, type CliIo, EXIT } from "./io";
 import { buildProgram, CLI_NAME } from "./program";
 
 export async function main(argv: string[], io: CliIo): Promise<number> {
   let code: number = EXIT.ok;
+  if (io.fieldStoreDir) setDiffuseFieldStore(diskFieldStore(io.fieldStoreDir));
   const program = buildProgram(io, (c) => {
     code = c;
   });

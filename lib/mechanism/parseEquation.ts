@@ -57,7 +57,8 @@ function readSide(side: string, which: string): { terms: EquationTerm[]; hv: num
 
 export function parseEquation(equation: string): EquationResult {
   if (typeof equation !== "string") return { ok: false, message: "expected a string" };
-  const sides = equation.split(/->|→/);
+  // \u2192 is the arrow →, escaped so that the bundles stay ASCII (scripts/cli-bundle.mjs)
+  const sides = equation.split(/->|\u2192/);
   if (sides.length !== 2) {
     return {
       ok: false,

@@ -29,7 +29,8 @@
  *
  * A field is cached per (zenith angle, albedo, τ550, O3 factor, Rayleigh
  * switch): the levels of a profile and the zenith angles of a repeated
- * 24-hour day share their columns.
+ * 24-hour day share their columns. Behind that cache may sit a store that
+ * outlives the process (diffuseFieldStore.ts; the command line's is on disk).
  * Units: km, molecules cm⁻², photons cm⁻² s⁻¹ per bin.
  */
 import {
@@ -39,6 +40,7 @@ import {
   ozoneColumnAbove_cm2,
   standardAtmosphere,
 } from "../atmosphere";
+import { type DiffuseField, diffuseFieldStore } from "./diffuseFieldStore";
 import { slantColumns } from "./slantColumns";
 import { SPECTRAL_TABLES, temperatureWeights } from "./spectralTables";
 import { newTwoStreamWork, solveTwoStream, type TwoStreamColumn } from "./twoStream";
@@ -85,19 +87,7 @@ export interface ColumnSettings {
   rayleigh: boolean;
 }
 
-/** The diffuse actinic flux on the column's interfaces. */
-export interface DiffuseField {
-  /** interface altitudes, km, top first (the first is the top of the atmosphere, +∞) */
-  z_km: Float64Array;
-  /** first bin of the grid with diffuse light */
-  firstBin: number;
-  /** number of bins with diffuse light (firstBin … firstBin + bins − 1) */
-  bins: number;
-  /** diffuse actinic flux, photons cm⁻² s⁻¹ per bin, at [interface·bins + bin − firstBin] */
-  flux: Float32Array;
-  /** false when no interface sees the sun (all zero) */
-  sunlit: boolean;
-}
+export type { DiffuseField } from "./diffuseFieldStore";
 
 interface Geometry {
   layers: number;
@@ -135,7 +125,9 @@ interface ColumnOptics {
   o3Interface: Float64Array;
 }
 
-const OPTICS: ColumnOptics = buildOptics();
+let optics: ColumnOptics | undefined;
+/** Built on the first column solved (~30 ms of CPU cold), so that a process whose fields all come from a store skips it. */
+const columnOptics = (): ColumnOptics => (optics ??= buildOptics());
 
 function buildOptics(): ColumnOptics {
   const G = WAVELENGTH_GRID;
@@ -269,7 +261,12 @@ export function diffuseField(settings: ColumnSettings): DiffuseField {
     cache.set(key, hit);
     return hit;
   }
-  const field = computeDiffuseField(settings);
+  const store = diffuseFieldStore();
+  let field = store?.get(key);
+  if (!field) {
+    field = computeDiffuseField(settings);
+    store?.put(key, field);
+  }
   cache.set(key, field);
   if (cache.size > DEFAULTS.cacheSize) cache.delete(cache.keys().next().value as string);
   return field;
@@ -314,7 +311,7 @@ export function computeDiffuseField(settings: ColumnSettings): DiffuseField {
   const o3s = settings.o3Scale;
   const dark = Number.POSITIVE_INFINITY;
 
-  const X = OPTICS;
+  const X = columnOptics();
   for (let b = firstBin; b < G.n; b++) {
     const j = b - firstBin;
     const lambda = 0.5 * (G.lower_nm[b] + G.upper_nm[b]);

@@ -158,12 +158,7 @@ export function buildSpectralTables(): SpectralTables {
   return { fixed, byTemperature, o3ByTemperature, o2, srMin, srMax, rayleigh, binRange };
 }
 
-/** The tables as plain JSON (every Float64Array as its numbers), for a bundle to keep them between runs. */
-export function spectralTablesJson(t: SpectralTables): string {
-  return JSON.stringify(t, (_, v) => (v instanceof Float64Array ? Array.from(v) : v));
-}
-
-/** Tables from their JSON form (spectralTablesJson, parsed). */
+/** Tables from a stored form: V8's serialised one (the command line's bundle), or plain JSON with the arrays as numbers. */
 export function reviveSpectralTables(data: unknown): SpectralTables {
   const d = data as Record<string, unknown>;
   const arr = (v: unknown) => Float64Array.from(v as number[]);
