@@ -43,6 +43,14 @@ declare global {
   }
 }
 
+/**
+ * Starts loading the canvas library, so that its download and evaluation (a task of its own) happen
+ * while the layout is computed rather than in front of the first drawing.
+ */
+export function preloadNetworkView(): void {
+  void import("cytoscape");
+}
+
 export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView(
   { layoutKey, elements, stylesheet, highlight, selected, onSelect },
   ref,
@@ -76,15 +84,18 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
     },
   }));
 
-  // one instance per mechanism layout
+  // one instance per mechanism layout, set up over several tasks (see nextTask) so that none of them
+  // holds the page for long: the module's evaluation, the instance with its stylesheet, the elements,
+  // then the fit (which measures every label)
   useEffect(() => {
     let cancelled = false;
     let cy: Core | null = null;
-    import("cytoscape").then(({ default: cytoscape }) => {
+    const setUp = async () => {
+      const { default: cytoscape } = await import("cytoscape");
+      await nextTask();
       if (cancelled || !box.current) return;
       cy = cytoscape({
         container: box.current,
-        elements: latest.current.elements as unknown as ElementDefinition[],
         style: stylesheet as unknown as StylesheetJson,
         layout: { name: "preset" },
         minZoom: 0.15,
@@ -94,13 +105,13 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
         selectionType: "single",
       });
       drawWithoutCaches(cy);
-      cy.fit(undefined, 24);
-      cy.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
-      cy.on("tap", (ev) => {
-        if (ev.target === cy) latest.current.onSelect(null);
+      const c = cy;
+      c.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
+      c.on("tap", (ev) => {
+        if (ev.target === c) latest.current.onSelect(null);
       });
       // a short read-out under the pointer: the equation and rate of a reaction, the amount of a species
-      cy.on("mouseover", "node.species, node.reaction", (ev) => {
+      c.on("mouseover", "node.species, node.reaction", (ev) => {
         const d = ev.target.data();
         const p = ev.renderedPosition ?? ev.target.renderedPosition();
         setTip({
@@ -113,9 +124,13 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
               : `${formatNumber(d.numberDensity_cm3)} cm⁻³`,
         });
       });
-      cy.on("mouseout", "node", () => setTip(null));
-      cy.on("viewport", () => setTip(null));
-      cyRef.current = cy;
+      c.on("mouseout", "node", () => setTip(null));
+      c.on("viewport", () => setTip(null));
+      await nextTask();
+      if (cancelled || !box.current) return;
+      // from here on the element effect below keeps the canvas in step
+      cyRef.current = c;
+      apply(c, latest.current.elements, latest.current.highlight, latest.current.selected);
       window.__ozoneNetwork = {
         edges: () =>
           (cyRef.current?.edges().map((e) => ({
@@ -133,9 +148,12 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
             ?.nodes()
             .map((n) => ({ id: n.id(), classes: n.classes(), x: n.position("x"), y: n.position("y") })) ?? [],
       };
-      apply(cy, latest.current.elements, latest.current.highlight, latest.current.selected);
+      await nextTask();
+      if (cancelled || !box.current) return;
+      c.fit(undefined, 24);
       box.current.dataset.ready = "true";
-    });
+    };
+    void setUp();
     return () => {
       cancelled = true;
       cy?.destroy();
@@ -257,6 +275,21 @@ function drawWithoutCaches(cy: Core): void {
   r.drawLayeredElements = function drawDirect(context: CanvasRenderingContext2D, eles: ArrayLike<unknown>) {
     for (let i = 0; i < eles.length; i++) drawElement.call(r, context, eles[i]);
   };
+}
+
+/**
+ * Resolves in a later task of the event loop (a message to a channel of its own, which, unlike a
+ * nested setTimeout, is not clamped to 4 ms), so that the browser can paint and answer input in between.
+ */
+function nextTask(): Promise<void> {
+  return new Promise((resolve) => {
+    const ch = new MessageChannel();
+    ch.port1.onmessage = () => {
+      ch.port1.close();
+      resolve();
+    };
+    ch.port2.postMessage(null);
+  });
 }
 
 function sameClasses(have: string[], want: string): boolean {
