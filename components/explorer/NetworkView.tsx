@@ -59,6 +59,8 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   const cyRef = useRef<Core | null>(null);
   const [tip, setTip] = useState<{ x: number; y: number; title: string; detail: string } | null>(null);
   const latest = useRef({ elements, highlight, selected, onSelect });
+  /** true until the first change of the elements' data after the set-up */
+  const firstChange = useRef(false);
   latest.current = { elements, highlight, selected, onSelect };
 
   useImperativeHandle(ref, () => ({
@@ -85,15 +87,17 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   }));
 
   // one instance per mechanism layout, set up over several tasks (see nextTask) so that none of them
-  // holds the page for long: the module's evaluation, the instance with its stylesheet, the elements,
-  // then the fit (which measures every label)
+  // holds the page for long: the module's evaluation, the instance with its stylesheet, the elements
+  // in slices, their styles and label sizes in slices (cytoscape would otherwise compute them all in
+  // the first frame it draws), then the fit
   useEffect(() => {
     let cancelled = false;
     let cy: Core | null = null;
+    const gone = () => cancelled || !box.current;
     const setUp = async () => {
       const { default: cytoscape } = await import("cytoscape");
       await nextTask();
-      if (cancelled || !box.current) return;
+      if (gone()) return;
       cy = cytoscape({
         container: box.current,
         style: stylesheet as unknown as StylesheetJson,
@@ -106,6 +110,26 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
       });
       drawWithoutCaches(cy);
       const c = cy;
+      // nothing is drawn until the elements are complete and styled: cytoscape draws nothing in a batch
+      c.startBatch();
+      await nextTask();
+      if (gone() || !(await addInSlices(c, () => latest.current, gone))) return;
+      await nextTask();
+      if (gone()) return;
+      // the end of the batch marks every element's style out of date (and queues them for the renderer);
+      // a second batch holds the drawing while they are computed
+      c.endBatch();
+      c.startBatch();
+      await nextTask();
+      if (gone() || !(await styleInSlices(c, gone))) return;
+      c.endBatch();
+      // from here on the element effect below keeps the canvas in step
+      firstChange.current = true;
+      cyRef.current = c;
+      apply(c, latest.current.elements, latest.current.highlight, latest.current.selected);
+      await nextTask();
+      if (gone()) return;
+      c.fit(undefined, 24);
       c.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
       c.on("tap", (ev) => {
         if (ev.target === c) latest.current.onSelect(null);
@@ -126,11 +150,6 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
       });
       c.on("mouseout", "node", () => setTip(null));
       c.on("viewport", () => setTip(null));
-      await nextTask();
-      if (cancelled || !box.current) return;
-      // from here on the element effect below keeps the canvas in step
-      cyRef.current = c;
-      apply(c, latest.current.elements, latest.current.highlight, latest.current.selected);
       window.__ozoneNetwork = {
         edges: () =>
           (cyRef.current?.edges().map((e) => ({
@@ -148,10 +167,7 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
             ?.nodes()
             .map((n) => ({ id: n.id(), classes: n.classes(), x: n.position("x"), y: n.position("y") })) ?? [],
       };
-      await nextTask();
-      if (cancelled || !box.current) return;
-      c.fit(undefined, 24);
-      box.current.dataset.ready = "true";
+      box.current!.dataset.ready = "true";
     };
     void setUp();
     return () => {
@@ -163,7 +179,28 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   }, [layoutKey]);
 
   useEffect(() => {
-    if (cyRef.current) apply(cyRef.current, elements, highlight, selected);
+    const cy = cyRef.current;
+    if (!cy) return;
+    if (!firstChange.current) {
+      apply(cy, elements, highlight, selected);
+      return;
+    }
+    // the first change of the data after the set-up (the first analysis, which recolours and resizes
+    // nearly everything) is restyled in slices like the set-up; later ones (a key step) at once, since
+    // their repaint should come as soon as it can
+    cy.startBatch();
+    if (apply(cy, elements, highlight, selected) === 0) {
+      cy.endBatch();
+      return;
+    }
+    firstChange.current = false;
+    cy.endBatch();
+    cy.startBatch();
+    void nextTask()
+      .then(() => (cy.destroyed() ? false : styleInSlices(cy, () => cy.destroyed())))
+      .then((done) => {
+        if (done) cy.endBatch();
+      });
   }, [elements, highlight, selected]);
 
   // a newly chosen cycle is brought into view; clearing it returns to the whole network
@@ -208,9 +245,11 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 /**
  * Brings the canvas in step with the element data. Only what changed is
  * touched: every data() or classes() call makes cytoscape restyle that
- * element, which is most of the cost of a repaint.
+ * element, which is most of the cost of a repaint. Returns how many elements'
+ * data changed.
  */
-function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): void {
+function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): number {
+  let changedData = 0;
   cy.batch(() => {
     const want = new Set(elements.map((e) => e.data.id));
     const all = cy.elements();
@@ -242,7 +281,10 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
           any = true;
         }
       }
-      if (any) ex.data(changed);
+      if (any) {
+        ex.data(changed);
+        changedData++;
+      }
       if (!sameClasses(ex.classes(), classes)) ex.classes(classes);
     }
     const sel = cy.$(":selected");
@@ -253,6 +295,7 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
       cy.getElementById(selected).select();
     }
   });
+  return changedData;
 }
 
 /**
@@ -275,6 +318,86 @@ function drawWithoutCaches(cy: Core): void {
   r.drawLayeredElements = function drawDirect(context: CanvasRenderingContext2D, eles: ArrayLike<unknown>) {
     for (let i = 0; i < eles.length; i++) drawElement.call(r, context, eles[i]);
   };
+}
+
+/** Work per slice of the canvas's set-up, ms. */
+const SLICE_MS = 30;
+
+/**
+ * Adds the elements (frames first, so that children find their parent) in slices of at most SLICE_MS,
+ * yielding between them; false when the view went away meanwhile.
+ */
+async function addInSlices(
+  cy: Core,
+  now: () => { elements: GraphElement[]; highlight: Highlight },
+  gone: () => boolean,
+): Promise<boolean> {
+  const sorted = [...now().elements].sort((a, b) => rank(a) - rank(b));
+  const on = new Set(now().highlight.on);
+  let i = 0;
+  while (i < sorted.length) {
+    const end = performance.now() + SLICE_MS;
+    const slice: ElementDefinition[] = [];
+    // a few elements at a time, so that the clock is read often enough
+    while (i < sorted.length && performance.now() < end) {
+      for (const el of sorted.slice(i, i + 16)) {
+        const lit = on.size === 0 ? "" : on.has(el.data.id) ? " hl" : " dim";
+        slice.push({ ...(el as unknown as ElementDefinition), classes: `${el.classes}${lit}` });
+      }
+      cy.add(slice.splice(0));
+      i += 16;
+    }
+    if (i < sorted.length) {
+      await nextTask();
+      if (gone()) return false;
+    }
+  }
+  return true;
+}
+
+/**
+ * Computes every element's style and rendered style (label sizes, edge paths) in slices of at most
+ * SLICE_MS: species and reactions, then the frames around them, then the edges between them. Cytoscape
+ * computes these lazily, all of them in the first frame it draws after a change (over half a second
+ * for the reference mechanism on this machine); done here, that frame finds them clean and only draws.
+ * The caller holds a batch meanwhile, which keeps cytoscape's render loop from drawing.
+ * `cleanStyle`, `recalculateRenderedStyle` and the `rstyle.cleanConnected` flag are cytoscape's own
+ * (untyped) pieces that its renderer uses the same way; should a release drop them, the first frame
+ * simply does the work again.
+ */
+async function styleInSlices(cy: Core, gone: () => boolean): Promise<boolean> {
+  type Inner = {
+    cleanStyle?: () => void;
+    recalculateRenderedStyle?: () => void;
+    _private?: { rstyle?: { cleanConnected?: boolean } };
+  };
+  const order = [
+    ...cy
+      .nodes()
+      .filter((n) => !n.isParent())
+      .toArray(),
+    ...cy
+      .nodes()
+      .filter((n) => n.isParent())
+      .toArray(),
+    ...cy.edges().toArray(),
+  ];
+  let i = 0;
+  while (i < order.length) {
+    const end = performance.now() + SLICE_MS;
+    while (i < order.length && performance.now() < end) {
+      const el = order[i++];
+      const inner = el as unknown as Inner;
+      inner.cleanStyle?.();
+      if (el.isNode() && inner._private?.rstyle) inner._private.rstyle.cleanConnected = true;
+      inner.recalculateRenderedStyle?.();
+    }
+    if (i < order.length) {
+      await nextTask();
+      if (gone()) return false;
+    }
+  }
+  return true;
 }
 
 /**
