@@ -361,15 +361,14 @@ async function addInSlices(
  * computes these lazily, all of them in the first frame it draws after a change (over half a second
  * for the reference mechanism on this machine); done here, that frame finds them clean and only draws.
  * The caller holds a batch meanwhile, which keeps cytoscape's render loop from drawing.
- * `cleanStyle`, `recalculateRenderedStyle` and the `rstyle.cleanConnected` flag are cytoscape's own
- * (untyped) pieces that its renderer uses the same way; should a release drop them, the first frame
- * simply does the work again.
+ * `cleanStyle` and `recalculateRenderedStyle` are cytoscape's own (untyped) collection methods that
+ * its renderer uses the same way; should a release drop them, the first frame simply does the work
+ * again. The frame still recomputes the edges' paths (a node's edges are queued once its style changed).
  */
 async function styleInSlices(cy: Core, gone: () => boolean): Promise<boolean> {
   type Inner = {
     cleanStyle?: () => void;
-    recalculateRenderedStyle?: () => void;
-    _private?: { rstyle?: { cleanConnected?: boolean } };
+    recalculateRenderedStyle?: (useCache: boolean) => void;
   };
   const order = [
     ...cy
@@ -389,8 +388,8 @@ async function styleInSlices(cy: Core, gone: () => boolean): Promise<boolean> {
       const el = order[i++];
       const inner = el as unknown as Inner;
       inner.cleanStyle?.();
-      if (el.isNode() && inner._private?.rstyle) inner._private.rstyle.cleanConnected = true;
-      inner.recalculateRenderedStyle?.();
+      // false: recompute even where cytoscape's flags say clean (a data change does not clear them)
+      inner.recalculateRenderedStyle?.(false);
     }
     if (i < order.length) {
       await nextTask();
