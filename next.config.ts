@@ -10,6 +10,8 @@ const nextConfig: NextConfig = {
   outputFileTracingIncludes: { "/**": ["./lib/mechanisms/*.yaml"] },
   // No X-Powered-By: the framework is nobody's business.
   poweredByHeader: false,
+  // NEXT_BROWSER_SOURCE_MAPS=1: browser source maps, for reading a profile (bench/trace-first-load.mjs)
+  productionBrowserSourceMaps: process.env.NEXT_BROWSER_SOURCE_MAPS === "1",
   // Security headers (lib/service/securityHeaders.ts); pages get their CSP with a nonce from proxy.ts.
   async headers() {
     return [

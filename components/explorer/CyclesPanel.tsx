@@ -2,6 +2,8 @@
  * The catalytic cycles of the analysis, largest ozone loss first. A cycle is a
  * toggle button: pressing it highlights its steps in the network.
  */
+
+import { useState } from "react";
 import type { CatalyticCycle, CycleReport } from "@/lib/analysis/types";
 import { formatNumber, formatPercent } from "@/lib/viz/formatNumber";
 import { Panel } from "./Panel";
@@ -72,14 +74,35 @@ export function CyclesPanel({ report, selected, onSelect, onInspectReaction }: P
           </ul>
         </details>
       ) : null}
-      {report && report.warnings.length > 0 ? (
-        <ul className="border-t border-stone-200 px-3 py-1 text-[11px] text-amber-800">
-          {report.warnings.map((w) => (
-            <li key={w}>⚠ {w}</li>
-          ))}
-        </ul>
-      ) : null}
+      {report && report.warnings.length > 0 ? <Warnings warnings={report.warnings} /> : null}
     </Panel>
+  );
+}
+
+/** Warnings shown at once; the rest behind a button (a large network can have over a thousand). */
+const WARNINGS_SHOWN = 5;
+
+/**
+ * The analysis's warnings, the first WARNINGS_SHOWN at once and the others when asked for: a list of
+ * 1,500 (one per species a search left unsplit, 2,000-species network) was a React render and a
+ * layout of its own on the first result.
+ */
+function Warnings({ warnings }: { warnings: string[] }) {
+  const [all, setAll] = useState(false);
+  const shown = all ? warnings : warnings.slice(0, WARNINGS_SHOWN);
+  return (
+    <div className="border-t border-stone-200 px-3 py-1 text-[11px] text-amber-800">
+      <ul data-testid="cycle-warnings">
+        {shown.map((w) => (
+          <li key={w}>⚠ {w}</li>
+        ))}
+      </ul>
+      {warnings.length > shown.length ? (
+        <button type="button" className="underline hover:text-amber-950" onClick={() => setAll(true)}>
+          Show all {warnings.length} warnings
+        </button>
+      ) : null}
+    </div>
   );
 }
 

@@ -29,7 +29,7 @@ import { ExportBar } from "./ExportBar";
 import { Inspector } from "./Inspector";
 import { LargeMechanismNotice } from "./LargeMechanismNotice";
 import { LegendCard } from "./LegendCard";
-import { type NetworkHandle, NetworkView } from "./NetworkView";
+import { type NetworkHandle, NetworkView, preloadNetworkView } from "./NetworkView";
 import { Toolbar } from "./Toolbar";
 import { UncertaintyCard } from "./UncertaintyCard";
 import { useAnalysis } from "./useAnalysis";
@@ -78,6 +78,8 @@ export function Explorer(props: Props) {
   const touched = useRef(!props.stored);
   const net = useRef<NetworkHandle>(null);
   const mechanism = cache[mechanismId] ?? null;
+
+  useEffect(preloadNetworkView, []);
 
   useEffect(() => {
     if (mechanisms.length === 0)

@@ -45,6 +45,14 @@ declare global {
   }
 }
 
+/**
+ * Starts loading the canvas library, so that its download and evaluation (a task of its own) happen
+ * while the layout is computed rather than in front of the first drawing.
+ */
+export function preloadNetworkView(): void {
+  void import("cytoscape");
+}
+
 export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView(
   { layoutKey, elements, stylesheet, highlight, selected, onSelect },
   ref,
@@ -55,6 +63,8 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   const moved = useRef(false);
   const [tip, setTip] = useState<{ x: number; y: number; title: string; detail: string } | null>(null);
   const latest = useRef({ elements, highlight, selected, onSelect });
+  /** true until the first change of the elements' data after the set-up */
+  const firstChange = useRef(false);
   latest.current = { elements, highlight, selected, onSelect };
 
   useImperativeHandle(ref, () => ({
@@ -80,15 +90,20 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
     },
   }));
 
-  // one instance per mechanism layout
+  // one instance per mechanism layout, set up over several tasks (see nextTask) so that none of them
+  // holds the page for long: the module's evaluation, the instance with its stylesheet, the elements
+  // in slices, their styles and label sizes in slices (cytoscape would otherwise compute them all in
+  // the first frame it draws), then the fit
   useEffect(() => {
     let cancelled = false;
     let cy: Core | null = null;
-    import("cytoscape").then(({ default: cytoscape }) => {
-      if (cancelled || !box.current) return;
+    const gone = () => cancelled || !box.current;
+    const setUp = async () => {
+      const { default: cytoscape } = await import("cytoscape");
+      await nextTask();
+      if (gone()) return;
       cy = cytoscape({
         container: box.current,
-        elements: latest.current.elements as unknown as ElementDefinition[],
         style: stylesheet as unknown as StylesheetJson,
         layout: { name: "preset" },
         minZoom: 0.15,
@@ -98,13 +113,34 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
         selectionType: "single",
       });
       drawWithoutCaches(cy);
-      cy.fit(undefined, 24);
-      cy.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
-      cy.on("tap", (ev) => {
-        if (ev.target === cy) latest.current.onSelect(null);
+      const c = cy;
+      // nothing is drawn until the elements are complete and styled: cytoscape draws nothing in a batch
+      c.startBatch();
+      await nextTask();
+      if (gone() || !(await addInSlices(c, () => latest.current, gone))) return;
+      await nextTask();
+      if (gone()) return;
+      // the end of the batch marks every element's style out of date (and queues them for the renderer);
+      // a second batch holds the drawing while they are computed
+      c.endBatch();
+      c.startBatch();
+      await nextTask();
+      if (gone() || !(await styleInSlices(c, gone))) return;
+      c.endBatch();
+      // from here on the element effect below keeps the canvas in step
+      firstChange.current = true;
+      moved.current = false;
+      cyRef.current = c;
+      apply(c, latest.current.elements, latest.current.highlight, latest.current.selected);
+      await nextTask();
+      if (gone()) return;
+      c.fit(undefined, 24);
+      c.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
+      c.on("tap", (ev) => {
+        if (ev.target === c) latest.current.onSelect(null);
       });
       // a short read-out under the pointer: the equation and rate of a reaction, the amount of a species
-      cy.on("mouseover", "node.species, node.reaction", (ev) => {
+      c.on("mouseover", "node.species, node.reaction", (ev) => {
         const d = ev.target.data();
         const p = ev.renderedPosition ?? ev.target.renderedPosition();
         setTip({
@@ -117,14 +153,13 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
               : `${formatNumber(d.numberDensity_cm3)} cm⁻³`,
         });
       });
-      cy.on("mouseout", "node", () => setTip(null));
+      c.on("mouseout", "node", () => setTip(null));
+      c.on("viewport", () => setTip(null));
       // a chip dragged by hand takes its frame along
-      cy.on("drag", "node.species", () => {
+      c.on("drag", "node.species", () => {
         moved.current = true;
-        if (cy) fitFrames(cy);
+        fitFrames(c);
       });
-      cy.on("viewport", () => setTip(null));
-      cyRef.current = cy;
       window.__ozoneNetwork = {
         edges: () =>
           (cyRef.current?.edges().map((e) => ({
@@ -147,10 +182,9 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
             h: n.height(),
           })) ?? [],
       };
-      moved.current = false;
-      apply(cy, latest.current.elements, latest.current.highlight, latest.current.selected);
-      box.current.dataset.ready = "true";
-    });
+      box.current!.dataset.ready = "true";
+    };
+    void setUp();
     return () => {
       cancelled = true;
       cy?.destroy();
@@ -162,8 +196,27 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   useEffect(() => {
     const cy = cyRef.current;
     if (!cy) return;
-    apply(cy, elements, highlight, selected);
-    if (moved.current) fitFrames(cy);
+    if (!firstChange.current) {
+      apply(cy, elements, highlight, selected);
+      if (moved.current) fitFrames(cy);
+      return;
+    }
+    // the first change of the data after the set-up (the first analysis, which recolours and resizes
+    // nearly everything) is restyled in slices like the set-up; later ones (a key step) at once, since
+    // their repaint should come as soon as it can
+    cy.startBatch();
+    if (apply(cy, elements, highlight, selected) === 0) {
+      cy.endBatch();
+      return;
+    }
+    firstChange.current = false;
+    cy.endBatch();
+    cy.startBatch();
+    void nextTask()
+      .then(() => (cy.destroyed() ? false : styleInSlices(cy, () => cy.destroyed())))
+      .then((done) => {
+        if (done) cy.endBatch();
+      });
   }, [elements, highlight, selected]);
 
   // a newly chosen cycle is brought into view; clearing it returns to the whole network
@@ -208,9 +261,11 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 /**
  * Brings the canvas in step with the element data. Only what changed is
  * touched: every data() or classes() call makes cytoscape restyle that
- * element, which is most of the cost of a repaint.
+ * element, which is most of the cost of a repaint. Returns how many elements'
+ * data changed.
  */
-function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): void {
+function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: string | null): number {
+  let changedData = 0;
   cy.batch(() => {
     const want = new Set(elements.map((e) => e.data.id));
     const all = cy.elements();
@@ -230,7 +285,7 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
         cy.add({ ...(el as unknown as ElementDefinition), classes });
         continue;
       }
-      // id, parent and edge ends are fixed for a given layout; cytoscape refuses to change them through data()
+      // id and edge ends are fixed for a given layout; cytoscape refuses to change them through data()
       const changed: Record<string, unknown> = {};
       let any = false;
       for (const [k, v] of Object.entries(el.data)) {
@@ -240,7 +295,10 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
           any = true;
         }
       }
-      if (any) ex.data(changed);
+      if (any) {
+        ex.data(changed);
+        changedData++;
+      }
       if (!sameClasses(ex.classes(), classes)) ex.classes(classes);
       // a frame's box follows the chips that are drawn (the detail control changes them)
       if (el.group === "nodes" && el.data.kind === "frame" && el.position) {
@@ -257,6 +315,7 @@ function apply(cy: Core, elements: GraphElement[], hl: Highlight, selected: stri
       cy.getElementById(selected).select();
     }
   });
+  return changedData;
 }
 
 /**
@@ -279,6 +338,90 @@ function drawWithoutCaches(cy: Core): void {
   r.drawLayeredElements = function drawDirect(context: CanvasRenderingContext2D, eles: ArrayLike<unknown>) {
     for (let i = 0; i < eles.length; i++) drawElement.call(r, context, eles[i]);
   };
+}
+
+/** Work per slice of the canvas's set-up, ms. */
+const SLICE_MS = 30;
+
+/**
+ * Adds the elements in slices of at most SLICE_MS, yielding between them; false when the view went
+ * away meanwhile.
+ */
+async function addInSlices(
+  cy: Core,
+  now: () => { elements: GraphElement[]; highlight: Highlight },
+  gone: () => boolean,
+): Promise<boolean> {
+  const sorted = now().elements;
+  const on = new Set(now().highlight.on);
+  let i = 0;
+  while (i < sorted.length) {
+    const end = performance.now() + SLICE_MS;
+    const slice: ElementDefinition[] = [];
+    // a few elements at a time, so that the clock is read often enough
+    while (i < sorted.length && performance.now() < end) {
+      for (const el of sorted.slice(i, i + 16)) {
+        const lit = on.size === 0 ? "" : on.has(el.data.id) ? " hl" : " dim";
+        slice.push({ ...(el as unknown as ElementDefinition), classes: `${el.classes}${lit}` });
+      }
+      cy.add(slice.splice(0));
+      i += 16;
+    }
+    if (i < sorted.length) {
+      await nextTask();
+      if (gone()) return false;
+    }
+  }
+  return true;
+}
+
+/**
+ * Computes every element's style and rendered style (label sizes, edge paths) in slices of at most
+ * SLICE_MS: the nodes, then the edges between them. Cytoscape
+ * computes these lazily, all of them in the first frame it draws after a change (over half a second
+ * for the reference mechanism on this machine); done here, that frame finds them clean and only draws.
+ * The caller holds a batch meanwhile, which keeps cytoscape's render loop from drawing.
+ * `cleanStyle` and `recalculateRenderedStyle` are cytoscape's own (untyped) collection methods that
+ * its renderer uses the same way; should a release drop them, the first frame simply does the work
+ * again. The frame still recomputes the edges' paths (a node's edges are queued once its style changed).
+ */
+async function styleInSlices(cy: Core, gone: () => boolean): Promise<boolean> {
+  type Inner = {
+    cleanStyle?: () => void;
+    recalculateRenderedStyle?: (useCache: boolean) => void;
+  };
+  const order = [...cy.nodes().toArray(), ...cy.edges().toArray()];
+  let i = 0;
+  while (i < order.length) {
+    const end = performance.now() + SLICE_MS;
+    while (i < order.length && performance.now() < end) {
+      const el = order[i++];
+      const inner = el as unknown as Inner;
+      inner.cleanStyle?.();
+      // false: recompute even where cytoscape's flags say clean (a data change does not clear them)
+      inner.recalculateRenderedStyle?.(false);
+    }
+    if (i < order.length) {
+      await nextTask();
+      if (gone()) return false;
+    }
+  }
+  return true;
+}
+
+/**
+ * Resolves in a later task of the event loop (a message to a channel of its own, which, unlike a
+ * nested setTimeout, is not clamped to 4 ms), so that the browser can paint and answer input in between.
+ */
+function nextTask(): Promise<void> {
+  return new Promise((resolve) => {
+    const ch = new MessageChannel();
+    ch.port1.onmessage = () => {
+      ch.port1.close();
+      resolve();
+    };
+    ch.port2.postMessage(null);
+  });
 }
 
 function sameClasses(have: string[], want: string): boolean {

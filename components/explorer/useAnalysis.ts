@@ -18,7 +18,7 @@
  * again. A dragged slider changes faster than that, so a drag asks for nothing
  * extra.
  */
-import { useCallback, useEffect, useRef, useState } from "react";
+import { startTransition, useCallback, useEffect, useRef, useState } from "react";
 import type { AnalysisRequest, AnalysisResult } from "@/lib/engine/types";
 import { recentCache } from "@/lib/viz/recentCache";
 import { ApiError } from "../ui/apiClient";
@@ -105,8 +105,14 @@ export function useAnalysis(
         .then((result) => {
           // an answer that arrives after a newer request was made is kept in the cache but not painted
           if (ctrl.signal.aborted) return;
+          const first = shownKey.current === null;
           shownKey.current = key;
-          setState({ id: null, result, loading: false, error: null });
+          const show = () => setState({ id: null, result, loading: false, error: null });
+          // the first result fills every panel at once: as a transition React renders it in slices that
+          // yield to the browser, where an urgent update would be one long task; later ones stay urgent
+          // so that a key step repaints as soon as it can
+          if (first) startTransition(show);
+          else show();
         })
         .catch((e: unknown) => {
           if ((e as Error).name === "AbortError" || ctrl.signal.aborted) return;
