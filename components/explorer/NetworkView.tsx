@@ -198,6 +198,7 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
     if (!cy) return;
     if (!firstChange.current) {
       apply(cy, elements, highlight, selected);
+      // a frame follows its dragged chips, not the layout's box
       if (moved.current) fitFrames(cy);
       return;
     }
@@ -205,7 +206,9 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
     // nearly everything) is restyled in slices like the set-up; later ones (a key step) at once, since
     // their repaint should come as soon as it can
     cy.startBatch();
-    if (apply(cy, elements, highlight, selected) === 0) {
+    const changed = apply(cy, elements, highlight, selected);
+    if (moved.current) fitFrames(cy);
+    if (changed === 0) {
       cy.endBatch();
       return;
     }
