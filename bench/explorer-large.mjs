@@ -15,10 +15,8 @@
 // BENCH_SIZES=reference,500,2000 and BENCH_REPEATS=3 change what is run.
 import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
-import path from "node:path";
-import { pathToFileURL } from "node:url";
 import { chromium } from "@playwright/test";
-import { build } from "esbuild";
+import { loadOpenNetwork } from "./loadOpenNetwork.mjs";
 
 const base = process.env.BENCH_URL ?? "http://127.0.0.1:3000";
 const sizes = (process.env.BENCH_SIZES ?? "reference,500,1000,2000")
@@ -26,17 +24,7 @@ const sizes = (process.env.BENCH_SIZES ?? "reference,500,1000,2000")
   .map((s) => (s === "reference" ? s : Number(s)));
 const repeats = Number(process.env.BENCH_REPEATS ?? 1);
 
-const gen = path.resolve(".engine/bench/openNetwork.mjs");
-mkdirSync(path.dirname(gen), { recursive: true });
-await build({
-  entryPoints: ["bench/generators/openNetwork.ts"],
-  outfile: gen,
-  bundle: true,
-  platform: "node",
-  format: "esm",
-  logLevel: "warning",
-});
-const { openNetwork } = await import(pathToFileURL(gen).href);
+const openNetwork = await loadOpenNetwork();
 
 const median = (xs) => {
   const s = [...xs].sort((a, b) => a - b);

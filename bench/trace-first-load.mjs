@@ -13,9 +13,8 @@
 // and TRACE_DIST (default .next) the build folder of that server for the maps.
 import { existsSync, readFileSync } from "node:fs";
 import path from "node:path";
-import { pathToFileURL } from "node:url";
 import { chromium } from "@playwright/test";
-import { build } from "esbuild";
+import { loadOpenNetwork } from "./loadOpenNetwork.mjs";
 
 const base = process.env.TRACE_URL ?? "http://127.0.0.1:3000";
 const size = process.env.TRACE_SIZE ?? "reference";
@@ -32,16 +31,7 @@ const context = await browser.newContext({ viewport: { width: 1280, height: 800 
 const page = await context.newPage();
 let id = "reference";
 if (size !== "reference") {
-  const gen = path.resolve(".engine/bench/openNetwork.mjs");
-  await build({
-    entryPoints: ["bench/generators/openNetwork.ts"],
-    outfile: gen,
-    bundle: true,
-    platform: "node",
-    format: "esm",
-    logLevel: "warning",
-  });
-  const { openNetwork } = await import(pathToFileURL(gen).href);
+  const openNetwork = await loadOpenNetwork();
   const n = Number(size);
   const up = await page.request.post(`${base}/api/mechanisms`, {
     headers: { "content-type": "application/json" },

@@ -15,22 +15,12 @@ import { intersects, type Rect, rectAround } from "@/lib/viz/labelBox";
 import { networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
 import { reactionDetail } from "@/lib/viz/reactionDetail";
-import type { GraphNode, MechanismView } from "@/lib/viz/types";
+import type { GraphNode } from "@/lib/viz/types";
+import { builtinView } from "./builtinView";
 
 const ALTITUDES_KM = [20, 30, 40];
 
-function view(id: string): MechanismView {
-  const m = loadBuiltinMechanism(id).mechanism;
-  return {
-    id,
-    title: m.title,
-    description: m.description,
-    builtin: true,
-    species: m.species.map((s) => ({ id: s.id, label: s.label, role: s.role, group: s.group, atoms: s.atoms })),
-    reactions: m.reactions.map((r) => ({ id: r.id, equation: r.equation, rate: r.rate })),
-    pools: [],
-  };
-}
+const view = builtinView;
 
 const results = new Map<string, AnalysisResult>();
 beforeAll(() => {

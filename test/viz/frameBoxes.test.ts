@@ -3,13 +3,13 @@
  * (frameBoxes), the same box on the canvas and in the SVG export.
  */
 import { describe, expect, it } from "vitest";
-import { loadBuiltinMechanism } from "@/lib/mechanism";
 import { BUILTIN_MECHANISMS } from "@/lib/mechanisms";
 import { CHIP_HEIGHT_PX } from "@/lib/viz/chipWidth";
 import { FRAME_DEFAULTS, frameBoxes } from "@/lib/viz/frameBoxes";
 import { networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
-import type { GraphNode, MechanismView } from "@/lib/viz/types";
+import type { GraphNode } from "@/lib/viz/types";
+import { builtinView } from "./builtinView";
 
 describe("frameBoxes", () => {
   it("wraps the chips of each frame with the padding on every side", () => {
@@ -35,18 +35,7 @@ describe("frameBoxes", () => {
   });
 });
 
-function view(id: string): MechanismView {
-  const m = loadBuiltinMechanism(id).mechanism;
-  return {
-    id,
-    title: m.title,
-    description: m.description,
-    builtin: true,
-    species: m.species.map((s) => ({ id: s.id, label: s.label, role: s.role, group: s.group, atoms: s.atoms })),
-    reactions: m.reactions.map((r) => ({ id: r.id, equation: r.equation, rate: r.rate })),
-    pools: [],
-  };
-}
+const view = builtinView;
 
 describe.each(BUILTIN_MECHANISMS.map((m) => m.id))("the frames of the %s network", (id) => {
   const mech = view(id);
