@@ -10,9 +10,18 @@
  * through 20–50 km by the golden ratio's fraction of a kilometre. The
  * "identical" cases send one condition from all 8 clients (a class on the
  * same step): after the first batch they measure the cache, not the engine.
+ *
+ * The server is `npm start`'s (scripts/serve.mjs, NODE_ENV=production). The
+ * client asks as Node's fetch and browsers do (Accept-Encoding: gzip,
+ * deflate) and times each request to the last byte of the body as sent: the
+ * bytes are counted, never decompressed or parsed, so that the client's own
+ * CPU on the same 2 cores is small (0.7–1.6 ms a request by process.cpuUsage
+ * for the same client code, bench/results/service-p95/b-load-client.mjs) and
+ * the same whatever the server sends.
  */
 import { type ChildProcess, spawn } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import http from "node:http";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import type { BenchCase } from "../types";
@@ -29,16 +38,43 @@ function nextAltitude(): number {
   return 20 + ((step * 0.6180339887498949) % 30);
 }
 
-/** One analysis at `altitude_km` (default: a new one); `path` is the storing route or the preview. */
+const agent = new http.Agent({ keepAlive: true, maxSockets: 16 });
+
+/**
+ * One analysis at `altitude_km` (default: a new one); `path` is the storing
+ * route or the preview. Resolves with the body's length in bytes as sent, at its last byte.
+ */
 function analysis(path = "/api/analyses", altitude_km = nextAltitude()): Promise<number> {
-  return fetch(`${base}${path}`, {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ mechanismId: "reference", condition: { altitude_km, zenith_deg: 40 } }),
-  }).then(async (r) => {
-    if (!r.ok) throw new Error(`status ${r.status}`);
-    await r.arrayBuffer();
-    return r.status;
+  const body = JSON.stringify({ mechanismId: "reference", condition: { altitude_km, zenith_deg: 40 } });
+  return new Promise((resolve, reject) => {
+    const req = http.request(
+      {
+        host: "127.0.0.1",
+        port: PORT,
+        path,
+        method: "POST",
+        agent,
+        headers: {
+          "content-type": "application/json",
+          "content-length": Buffer.byteLength(body),
+          "accept-encoding": "gzip, deflate",
+        },
+      },
+      (res) => {
+        let bytes = 0;
+        res.on("data", (chunk: Buffer) => {
+          bytes += chunk.byteLength;
+        });
+        res.on("end", () => {
+          const ok = res.statusCode === 200 || res.statusCode === 201;
+          if (ok) resolve(bytes);
+          else reject(new Error(`status ${res.statusCode}`));
+        });
+        res.on("error", reject);
+      },
+    );
+    req.on("error", reject);
+    req.end(body);
   });
 }
 
@@ -52,9 +88,15 @@ export async function setup(): Promise<BenchCase[]> {
     return [];
   }
   dataDir = mkdtempSync(path.join(tmpdir(), "ozone-bench-"));
-  server = spawn("node_modules/.bin/next", ["start", "-p", String(PORT)], {
+  server = spawn("node", ["scripts/serve.mjs", String(PORT)], {
     // the rate limit (600 a minute per address by default) is not what is measured here
-    env: { ...process.env, OZONE_DATA_DIR: dataDir, NEXT_TELEMETRY_DISABLED: "1", OZONE_RATE_LIMIT: "100000" },
+    env: {
+      ...process.env,
+      NODE_ENV: "production",
+      OZONE_DATA_DIR: dataDir,
+      NEXT_TELEMETRY_DISABLED: "1",
+      OZONE_RATE_LIMIT: "100000",
+    },
     stdio: "ignore",
   });
   const end = Date.now() + 60_000;
@@ -91,6 +133,7 @@ export async function setup(): Promise<BenchCase[]> {
 }
 
 export async function teardown(): Promise<void> {
+  agent.destroy();
   server?.kill("SIGKILL");
   if (dataDir) rmSync(dataDir, { recursive: true, force: true });
 }

@@ -9,9 +9,17 @@ import { Worker } from "node:worker_threads";
 import { EngineError } from "../errors";
 import type { EngineJob, EngineJobResult } from "./taskTable";
 
+/** OZONE_ENGINE_WORKERS when set (a whole number ≥ 1), else the number of cores. */
+function workerCount(env: string | undefined): number {
+  if (env === undefined || env === "") return Math.max(1, availableParallelism());
+  const n = Number(env);
+  if (!Number.isInteger(n) || n < 1) throw new RangeError(`EnginePool: invalid OZONE_ENGINE_WORKERS: ${env}`);
+  return n;
+}
+
 export const POOL_DEFAULTS = {
-  /** worker threads; default: the number of cores */
-  size: Math.max(1, availableParallelism()),
+  /** worker threads; default: the number of cores, or OZONE_ENGINE_WORKERS */
+  size: workerCount(process.env.OZONE_ENGINE_WORKERS),
   /** ms a job may run before its worker is terminated */
   timeout_ms: Number(process.env.OZONE_JOB_TIMEOUT_MS ?? 30_000),
   /** the bundled worker script */
