@@ -24,10 +24,13 @@ const COMMANDS = new Set(["analyse", "analyze", "sweep", "check", "compare"]);
  */
 function loadBundle(file, command) {
   const key = path.basename(file).replace(/^cli-|\.cjs$/g, "");
-  // V8 refuses a cache written under other flags, so runs with other node flags keep their own
-  const flags = process.execArgv.length
-    ? `-${createHash("sha1").update(process.execArgv.join("\0")).digest("hex").slice(0, 8)}`
-    : "";
+  // V8 refuses a cache written under other flags, so runs with other node flags keep their own; the flags that
+  // name a file, a port or a folder (a profile's name, an inspector) change nothing V8 compiles and are left out,
+  // so that they do not leave a cache per value, and NODE_OPTIONS counts as the command line does
+  const v8Flags = [...(process.env.NODE_OPTIONS ?? "").split(/\s+/), ...process.execArgv].filter(
+    (f) => f && !/^--(cpu-prof|heap-prof|inspect|debug-port|diagnostic-dir|report-)/.test(f),
+  );
+  const flags = v8Flags.length ? `-${createHash("sha1").update(v8Flags.join("\0")).digest("hex").slice(0, 8)}` : "";
   const cacheFile = cliBundlePaths(path.dirname(file), key).codeCache.replace(/\.cache$/, `.${command}${flags}.cache`);
   let cachedData;
   try {

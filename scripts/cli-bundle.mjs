@@ -18,12 +18,14 @@ import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, statSync, write
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import v8 from "node:v8";
-import { cliBundlePaths, STAMP_FILE } from "./cli-stamp.mjs";
+import { CLI_RUNTIME, cliBundlePaths, STAMP_FILE } from "./cli-stamp.mjs";
 import { NODE_BUNDLE, serverOnlyStub } from "./node-bundle.mjs";
 
 /** The bundle key, and the stamp (scripts/cli-stamp.mjs) that lets the launcher re-check it by statting alone. */
 export function sourceKey(root) {
   const h = createHash("sha256");
+  // the stored tables, fields and code caches are V8's own formats (CLI_RUNTIME)
+  h.update(`runtime:${CLI_RUNTIME}\n`);
   const files = [];
   const dirs = [];
   const add = (rel, s) => {
@@ -43,7 +45,7 @@ export function sourceKey(root) {
     add(f, statSync(path.join(root, f)));
   }
   const key = h.digest("hex").slice(0, 16);
-  return { key, stamp: { key, files, dirs } };
+  return { key, stamp: { key, runtime: CLI_RUNTIME, files, dirs } };
 }
 
 /** Writes the stamp of `key` (temporary file and rename: several processes may write at once). */
@@ -149,7 +151,8 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
         'import { deserialize } from "node:v8";',
         "let data;",
         `const stored = () => (data ??= JSON.parse(readFileSync(new URL(${JSON.stringify(`./${path.basename(json)}`)}, import.meta.url), "utf8")));`,
-        `export const prebuiltSpectralTables = () => deserialize(readFileSync(new URL(${JSON.stringify(`./${path.basename(tablesFile)}`)}, import.meta.url)));`,
+        // a file that cannot be read back (damaged) gives undefined: the engine builds its tables then
+        `export const prebuiltSpectralTables = () => { try { return deserialize(readFileSync(new URL(${JSON.stringify(`./${path.basename(tablesFile)}`)}, import.meta.url))); } catch { return undefined; } };`,
         "export const prebuiltMechanisms = () => stored().mechanisms;",
         "",
       ].join("\n"),
@@ -163,7 +166,7 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
         'const { deserialize } = require("node:v8");',
         "let data;",
         `const stored = () => (data ??= JSON.parse(readFileSync(join(__dirname, ${JSON.stringify(path.basename(json))}), "utf8")));`,
-        `exports.prebuiltSpectralTables = () => deserialize(readFileSync(join(__dirname, ${JSON.stringify(path.basename(tablesFile))})));`,
+        `exports.prebuiltSpectralTables = () => { try { return deserialize(readFileSync(join(__dirname, ${JSON.stringify(path.basename(tablesFile))}))); } catch { return undefined; } };`,
         "exports.prebuiltMechanisms = () => stored().mechanisms;",
         "",
       ].join("\n"),

@@ -12,6 +12,12 @@ import path from "node:path";
 
 export const STAMP_FILE = "cli-stamp.json";
 
+/**
+ * The runtime the stored files belong to: V8's serialised tables, the radiative fields and the code caches
+ * are read back only by the V8 (and CPU architecture) that wrote them, so a change of Node is a new key.
+ */
+export const CLI_RUNTIME = `v8 ${process.versions.v8} ${process.arch}`;
+
 /** `{ cli, worker }` when the stamp in `root`/.engine still matches the sources and the bundles are there, else null. */
 export function stampedCliBundles(root) {
   const dir = path.join(root, ".engine");
@@ -22,6 +28,7 @@ export function stampedCliBundles(root) {
     return null;
   }
   if (!stamp || typeof stamp.key !== "string" || !Array.isArray(stamp.files) || !Array.isArray(stamp.dirs)) return null;
+  if (stamp.runtime !== CLI_RUNTIME) return null;
   const same = (rel, size, mtimeMs) => {
     // joined by hand: the paths are path.relative's, already normal, and a cold path.join over ~400 of them
     // doubled the check's CPU (25 against 13 ms, 3 runs each at load 11)

@@ -5,7 +5,19 @@
 // a client's header as it is). The rate limits count by that entry
 // (lib/service/rateLimit.ts; OZONE_TRUSTED_PROXIES for proxies in front).
 import { createServer } from "node:http";
+import { availableParallelism } from "node:os";
 import next from "next";
+
+// OZONE_ENGINE_WORKERS is checked as lib/runtime/pool.ts checks it (engineWorkerCount), before anything
+// listens, so that a bad value stops the start instead of failing the first analysis
+const workers = process.env.OZONE_ENGINE_WORKERS;
+const maxWorkers = 4 * Math.max(1, availableParallelism());
+if (workers && !(/^[1-9][0-9]*$/.test(workers) && Number(workers) <= maxWorkers)) {
+  console.error(
+    `serve: invalid OZONE_ENGINE_WORKERS: ${JSON.stringify(workers)} (expected a whole number from 1 to ${maxWorkers})`,
+  );
+  process.exit(2);
+}
 
 const port = Number(process.argv[2] ?? process.env.PORT ?? 3000);
 const hostname = process.env.HOST || undefined;

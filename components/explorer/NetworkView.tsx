@@ -61,6 +61,8 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
   const cyRef = useRef<Core | null>(null);
   /** a chip has been dragged by hand since the graph was built: the frames then follow the chips, not the layout */
   const moved = useRef(false);
+  /** the highlighted ids last brought into view, joined by spaces */
+  const lastKey = useRef("");
   const [tip, setTip] = useState<{ x: number; y: number; title: string; detail: string } | null>(null);
   const latest = useRef({ elements, highlight, selected, onSelect });
   /** true until the first change of the elements' data after the set-up */
@@ -114,27 +116,7 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
       });
       drawWithoutCaches(cy);
       const c = cy;
-      // nothing is drawn until the elements are complete and styled: cytoscape draws nothing in a batch
-      c.startBatch();
-      await nextTask();
-      if (gone() || !(await addInSlices(c, () => latest.current, gone))) return;
-      await nextTask();
-      if (gone()) return;
-      // the end of the batch marks every element's style out of date (and queues them for the renderer);
-      // a second batch holds the drawing while they are computed
-      c.endBatch();
-      c.startBatch();
-      await nextTask();
-      if (gone() || !(await styleInSlices(c, gone))) return;
-      c.endBatch();
-      // from here on the element effect below keeps the canvas in step
-      firstChange.current = true;
-      moved.current = false;
-      cyRef.current = c;
-      apply(c, latest.current.elements, latest.current.highlight, latest.current.selected);
-      await nextTask();
-      if (gone()) return;
-      c.fit(undefined, 24);
+      // the listeners first: a chip can be grabbed as soon as anything is drawn
       c.on("tap", "node.species, node.reaction", (ev) => latest.current.onSelect(ev.target.id()));
       c.on("tap", (ev) => {
         if (ev.target === c) latest.current.onSelect(null);
@@ -160,6 +142,42 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
         moved.current = true;
         fitFrames(c);
       });
+      // nothing is drawn until the elements are complete and styled: cytoscape draws nothing in a batch
+      c.startBatch();
+      await nextTask();
+      if (gone() || !(await addInSlices(c, () => latest.current, gone))) return;
+      await nextTask();
+      if (gone()) return;
+      // the end of the batch marks every element's style out of date (and queues them for the renderer);
+      // a second batch holds the drawing while they are computed
+      c.endBatch();
+      c.startBatch();
+      await nextTask();
+      if (gone() || !(await styleInSlices(c, gone))) return;
+      c.endBatch();
+      // from here on the element effect below keeps the canvas in step
+      moved.current = false;
+      cyRef.current = c;
+      // The elements were added with the data of when the set-up began. An analysis that came since (the
+      // usual case: the answer is quicker than the set-up) is restyled in slices here; one that was there
+      // from the start (a permalink) needs nothing more. Either way, the next change is a step and is
+      // applied at once. Only while no analysis has been drawn is the first one left to be sliced.
+      firstChange.current = false;
+      c.startBatch();
+      const changed = apply(c, latest.current.elements, latest.current.highlight, latest.current.selected);
+      c.endBatch();
+      if (changed > 0) {
+        c.startBatch();
+        await nextTask();
+        if (gone() || !(await styleInSlices(c, gone))) return;
+        c.endBatch();
+      } else if (!analysed(latest.current.elements)) firstChange.current = true;
+      await nextTask();
+      if (gone()) return;
+      c.fit(undefined, 24);
+      // a cycle chosen before the canvas was ready (or given in the address) is brought into view now
+      lastKey.current = latest.current.highlight.on.join(" ");
+      if (lastKey.current) bringIntoView(c, lastKey.current);
       window.__ozoneNetwork = {
         edges: () =>
           (cyRef.current?.edges().map((e) => ({
@@ -224,16 +242,11 @@ export const NetworkView = forwardRef<NetworkHandle, Props>(function NetworkView
 
   // a newly chosen cycle is brought into view; clearing it returns to the whole network
   const hlKey = highlight.on.join(" ");
-  const lastKey = useRef("");
   useEffect(() => {
     const cy = cyRef.current;
     if (!cy || hlKey === lastKey.current) return;
     lastKey.current = hlKey;
-    let target = cy.collection();
-    if (hlKey) for (const id of hlKey.split(" ")) target = target.union(cy.getElementById(id));
-    else target = cy.elements();
-    cy.stop();
-    cy.animate({ fit: { eles: target, padding: hlKey ? 70 : 24 } }, { duration: 350 });
+    bringIntoView(cy, hlKey);
   }, [hlKey]);
 
   return (
@@ -426,6 +439,19 @@ function nextTask(): Promise<void> {
     ch.port2.postMessage(null);
   });
 }
+
+/** Animates the view to the elements of `key` (ids joined by spaces), or to the whole network when it is empty. */
+function bringIntoView(cy: Core, key: string): void {
+  let target = cy.collection();
+  if (key) for (const id of key.split(" ")) target = target.union(cy.getElementById(id));
+  else target = cy.elements();
+  cy.stop();
+  cy.animate({ fit: { eles: target, padding: key ? 70 : 24 } }, { duration: 350 });
+}
+
+/** Whether the elements carry an analysis: some reaction is drawn with a flux. */
+const analysed = (elements: GraphElement[]): boolean =>
+  elements.some((e) => e.data.kind === "reaction" && !e.classes.split(" ").includes("idle"));
 
 function sameClasses(have: string[], want: string): boolean {
   const w = want.split(" ").filter(Boolean);

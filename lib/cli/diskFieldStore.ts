@@ -8,8 +8,10 @@
  * altitudes as float64 and the flux as float32), so a field read back is the
  * solved one bit for bit. Unreadable, short or foreign files are ignored and
  * the column solved; files are written to a temporary name and renamed, as
- * several runs may write at once; at most `maxFiles` are kept (a run beyond
- * that solves its columns and keeps none).
+ * several runs may write at once (a temporary file an interrupted run left
+ * is removed after an hour); at most `maxFiles` fields are kept (counted when
+ * a run first writes, and by each run as it writes; beyond that a run solves
+ * its columns and keeps none).
  */
 import { createHash } from "node:crypto";
 import fs from "node:fs";
@@ -21,13 +23,14 @@ const FORMAT = 1;
 const HEADER_BYTES = 24;
 
 export const DISK_FIELD_STORE_DEFAULTS = {
-  /** files kept in the folder (one field of the reference grid is ~50 kB) */
+  /** fields kept in the folder (one field of the reference grid is ~92 kB) */
   maxFiles: 2000,
 };
 
 export function diskFieldStore(dir: string, maxFiles = DISK_FIELD_STORE_DEFAULTS.maxFiles): DiffuseFieldStore {
   const file = (key: string) => path.join(dir, `${createHash("sha1").update(key).digest("hex").slice(0, 24)}.field`);
-  let room: boolean | undefined;
+  /** fields in the folder as this run counts them; undefined until its first write */
+  let count: number | undefined;
   return {
     get(key) {
       let buf: Buffer;
@@ -40,18 +43,31 @@ export function diskFieldStore(dir: string, maxFiles = DISK_FIELD_STORE_DEFAULTS
     },
     put(key, field) {
       try {
-        if (room === undefined) {
-          fs.mkdirSync(dir, { recursive: true });
-          room = fs.readdirSync(dir).length < maxFiles;
-        }
-        if (!room) return;
+        if (count === undefined) count = countFields(dir);
+        if (count >= maxFiles) return;
         const target = file(key);
         const tmp = `${target}.${process.pid}.tmp`;
         fs.writeFileSync(tmp, encodeField(field));
         fs.renameSync(tmp, target);
+        count++;
       } catch {} // a field that cannot be kept is solved again by the next run
     },
   };
+}
+
+/** The `.field` files in `dir` (made if missing); temporary files older than an hour are removed on the way. */
+function countFields(dir: string): number {
+  fs.mkdirSync(dir, { recursive: true });
+  const hourAgo = Date.now() - 3_600_000;
+  let n = 0;
+  for (const name of fs.readdirSync(dir)) {
+    if (name.endsWith(".field")) n++;
+    else if (name.endsWith(".tmp"))
+      try {
+        if (fs.statSync(path.join(dir, name)).mtimeMs < hourAgo) fs.unlinkSync(path.join(dir, name));
+      } catch {} // another run took it
+  }
+  return n;
 }
 
 export function encodeField(field: DiffuseField): Buffer {
@@ -70,7 +86,9 @@ export function decodeField(buf: Buffer): DiffuseField | undefined {
   // copied out, so that the arrays are aligned whatever the Buffer's offset
   const head = new Int32Array(buf.buffer.slice(buf.byteOffset, buf.byteOffset + HEADER_BYTES));
   const [format, sunlit, firstBin, bins, nz, n] = head;
-  if (format !== FORMAT || nz < 0 || n < 0 || buf.length !== HEADER_BYTES + 8 * nz + 4 * n) return undefined;
+  if (format !== FORMAT || (sunlit !== 0 && sunlit !== 1) || firstBin < 0 || bins < 0 || nz < 0) return undefined;
+  // the flux is one value per interface and bin: a header that says otherwise is not a field of this format
+  if (n !== nz * bins || buf.length !== HEADER_BYTES + 8 * nz + 4 * n) return undefined;
   const at = buf.byteOffset + HEADER_BYTES;
   return {
     sunlit: sunlit === 1,

@@ -9,17 +9,28 @@ import { Worker } from "node:worker_threads";
 import { EngineError } from "../errors";
 import type { EngineJob, EngineJobResult } from "./taskTable";
 
-/** OZONE_ENGINE_WORKERS when set (a whole number ≥ 1), else the number of cores. */
-function workerCount(env: string | undefined): number {
+/** The most engine workers OZONE_ENGINE_WORKERS may ask for: 4 a core (each loads the engine and its tables). */
+export const MAX_ENGINE_WORKERS = 4 * Math.max(1, availableParallelism());
+
+/**
+ * OZONE_ENGINE_WORKERS when set (digits only, 1 to MAX_ENGINE_WORKERS), else
+ * the number of cores. It sizes the server's pool and the command line's
+ * sweep lanes alike. scripts/serve.mjs checks it the same way before the
+ * server listens, so a bad value stops the start, not a later request.
+ */
+export function engineWorkerCount(env: string | undefined): number {
   if (env === undefined || env === "") return Math.max(1, availableParallelism());
-  const n = Number(env);
-  if (!Number.isInteger(n) || n < 1) throw new RangeError(`EnginePool: invalid OZONE_ENGINE_WORKERS: ${env}`);
+  const n = /^[1-9][0-9]*$/.test(env) ? Number(env) : Number.NaN;
+  if (!(n >= 1 && n <= MAX_ENGINE_WORKERS))
+    throw new RangeError(
+      `EnginePool: invalid OZONE_ENGINE_WORKERS: ${JSON.stringify(env)} (expected a whole number from 1 to ${MAX_ENGINE_WORKERS})`,
+    );
   return n;
 }
 
 export const POOL_DEFAULTS = {
   /** worker threads; default: the number of cores, or OZONE_ENGINE_WORKERS */
-  size: workerCount(process.env.OZONE_ENGINE_WORKERS),
+  size: engineWorkerCount(process.env.OZONE_ENGINE_WORKERS),
   /** ms a job may run before its worker is terminated */
   timeout_ms: Number(process.env.OZONE_JOB_TIMEOUT_MS ?? 30_000),
   /** the bundled worker script */

@@ -3,12 +3,12 @@
  * the bundler wrote is accepted while nothing changed, and refused after an edit in place, an added or removed
  * file, or a missing bundle, so the launcher falls back to the full check that rebuilds.
  */
-import { mkdirSync, mkdtempSync, rmSync, utimesSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, utimesSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { sourceKey, writeStamp } from "../../scripts/cli-bundle.mjs";
-import { cliBundlePaths, stampedCliBundles } from "../../scripts/cli-stamp.mjs";
+import { CLI_RUNTIME, cliBundlePaths, STAMP_FILE, stampedCliBundles } from "../../scripts/cli-stamp.mjs";
 
 let root: string;
 const file = (rel: string, text = "x") => {
@@ -72,5 +72,15 @@ describe("stampedCliBundles", () => {
     expect(stampedCliBundles(root)).toBeNull();
     rmSync(path.join(root, ".engine"), { recursive: true });
     expect(stampedCliBundles(root)).toBeNull();
+  });
+
+  it("refuses a stamp of another V8 or architecture, whose stored tables and fields this one may not read", () => {
+    stampAndBundles();
+    const stampFile = path.join(root, ".engine", STAMP_FILE);
+    const stamp = JSON.parse(readFileSync(stampFile, "utf8"));
+    expect(stamp.runtime).toBe(CLI_RUNTIME);
+    writeFileSync(stampFile, JSON.stringify({ ...stamp, runtime: "v8 0.0.0 none" }));
+    expect(stampedCliBundles(root)).toBeNull();
+    expect(CLI_RUNTIME).toBe(`v8 ${process.versions.v8} ${process.arch}`);
   });
 });

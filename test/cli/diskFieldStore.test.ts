@@ -4,7 +4,7 @@
  * in the store gives the analysis a run that solves it gives, and files that are not whole fields are ignored.
  * These are identities of the code, not outside references.
  */
-import { mkdtempSync, readdirSync, rmSync, writeFileSync } from "node:fs";
+import { mkdtempSync, readdirSync, rmSync, utimesSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
@@ -62,6 +62,11 @@ describe("diskFieldStore", () => {
     other.writeInt32LE(2, 0);
     expect(decodeField(other)).toBeUndefined();
     expect(decodeField(Buffer.alloc(3))).toBeUndefined();
+    // a header whose sizes do not fit the grid (one value per interface and bin), though the length adds up
+    const misshapen = Buffer.from(whole);
+    misshapen.writeInt32LE(field.bins + 1, 12);
+    expect(field.bins).toBeGreaterThan(0);
+    expect(decodeField(misshapen)).toBeUndefined();
     const store = diskFieldStore(dir);
     store.put("a", field);
     const [name] = readdirSync(dir);
@@ -70,6 +75,27 @@ describe("diskFieldStore", () => {
     const full = diskFieldStore(dir, 1);
     full.put("b", field);
     expect(readdirSync(dir)).toEqual([name]);
+  });
+
+  it("removes a temporary file an interrupted run left over an hour ago, and counts only fields", () => {
+    const field = computeDiffuseField({
+      zenith_deg: 50,
+      albedo: 0.1,
+      aerosolOpticalDepth: 0,
+      o3Scale: 1,
+      rayleigh: true,
+    });
+    const stale = path.join(dir, "abc.field.123.tmp");
+    const fresh = path.join(dir, "def.field.456.tmp");
+    writeFileSync(stale, "x");
+    writeFileSync(fresh, "x");
+    const twoHoursAgo = (Date.now() - 7_200_000) / 1000;
+    utimesSync(stale, twoHoursAgo, twoHoursAgo);
+    // two temporary files, no field: a store of one field still has room
+    diskFieldStore(dir, 1).put("a", field);
+    const names = readdirSync(dir);
+    expect(names.filter((n) => n.endsWith(".tmp"))).toEqual([path.basename(fresh)]);
+    expect(names.filter((n) => n.endsWith(".field"))).toHaveLength(1);
   });
 
   it("serves the engine's columns: an analysis from stored fields equals one from solved fields", async () => {

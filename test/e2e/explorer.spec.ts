@@ -162,6 +162,30 @@ test("selecting a cycle lights its steps in the graph and dims the rest", async 
   expect((await nodes(page)).some((x) => x.classes.includes("dim"))).toBe(false);
 });
 
+test("a cycle given in the address is brought into view once the canvas is ready", async ({ page }) => {
+  await openExplorer(page, "m=reference&z=40");
+  await page.getByTestId("cycle").first().getByRole("button").first().click();
+  await expect(page).toHaveURL(/cycle=/);
+  const withCycle = page.url();
+  const lit = (await nodes(page)).filter((x) => x.classes.includes("hl") && x.id.startsWith("r:")).map((x) => x.id);
+  expect(lit.length).toBeGreaterThan(1);
+  /** the on-screen width and height of the box around the cycle's reactions, px */
+  const spread = () =>
+    page.evaluate((ids) => {
+      const at = ids.map((id) => window.__ozoneNetwork?.rendered(id)).filter((p) => p !== null && p !== undefined);
+      const xs = at.map((p) => p.x);
+      const ys = at.map((p) => p.y);
+      return Math.max(Math.max(...xs) - Math.min(...xs), Math.max(...ys) - Math.min(...ys));
+    }, lit);
+  await openExplorer(page, "m=reference&z=40");
+  await page.waitForTimeout(500);
+  const whole = await spread();
+  await page.goto(withCycle);
+  await expect(page.getByTestId("network")).toHaveAttribute("data-ready", "true", { timeout: 30_000 });
+  // the view zooms to the cycle (an animation of 350 ms) instead of showing the whole network
+  await expect.poll(spread, { timeout: 5_000 }).toBeGreaterThan(whole * 1.3);
+});
+
 test("pointing at a reaction shows its equation and rate", async ({ page }) => {
   await openExplorer(page, "m=oxygen&z=30");
   const box = (await page.getByTestId("network").boundingBox())!;
