@@ -24,6 +24,10 @@ afterEach(() => {
   rmSync(dir, { recursive: true, force: true });
 });
 
+/** A sunlit column at 50°, albedo 0.1, no aerosol. */
+const sunAt50 = () =>
+  computeDiffuseField({ zenith_deg: 50, albedo: 0.1, aerosolOpticalDepth: 0, o3Scale: 1, rayleigh: true });
+
 const bits = (a: Float32Array | Float64Array) => Buffer.from(a.buffer, a.byteOffset, a.byteLength).toString("hex");
 
 describe("diskFieldStore", () => {
@@ -49,13 +53,7 @@ describe("diskFieldStore", () => {
   });
 
   it("ignores a file cut short or of another format, and stops writing at maxFiles", () => {
-    const field = computeDiffuseField({
-      zenith_deg: 50,
-      albedo: 0.1,
-      aerosolOpticalDepth: 0,
-      o3Scale: 1,
-      rayleigh: true,
-    });
+    const field = sunAt50();
     const whole = encodeField(field);
     expect(decodeField(whole.subarray(0, whole.length - 4))).toBeUndefined();
     const other = Buffer.from(whole);
@@ -78,13 +76,7 @@ describe("diskFieldStore", () => {
   });
 
   it("removes a temporary file an interrupted run left over an hour ago, and counts only fields", () => {
-    const field = computeDiffuseField({
-      zenith_deg: 50,
-      albedo: 0.1,
-      aerosolOpticalDepth: 0,
-      o3Scale: 1,
-      rayleigh: true,
-    });
+    const field = sunAt50();
     const stale = path.join(dir, "abc.field.123.tmp");
     const fresh = path.join(dir, "def.field.456.tmp");
     writeFileSync(stale, "x");
