@@ -20,8 +20,6 @@ import { builtinView } from "./builtinView";
 
 const ALTITUDES_KM = [20, 30, 40];
 
-const view = builtinView;
-
 const results = new Map<string, AnalysisResult>();
 beforeAll(() => {
   for (const { id } of BUILTIN_MECHANISMS) {
@@ -47,7 +45,7 @@ const positions = (els: ReturnType<typeof networkElements>) =>
   new Map(els.filter((e): e is GraphNode => e.group === "nodes" && !!e.position).map((e) => [e.data.id, e.position!]));
 
 describe.each(BUILTIN_MECHANISMS.map((m) => m.id))("the %s network", (id) => {
-  const mech = view(id);
+  const mech = builtinView(id);
   const layout = networkLayout(mech);
 
   it("has no two label boxes that intersect (chips, frame titles, reaction ids, stubs)", () => {
@@ -119,7 +117,7 @@ describe.each(BUILTIN_MECHANISMS.map((m) => m.id))("the %s network", (id) => {
 
 describe("the default detail of the reference mechanism", () => {
   it("draws at most 40 reactions between 30 and 40 km", () => {
-    const mech = view("reference");
+    const mech = builtinView("reference");
     const m = loadBuiltinMechanism("reference").mechanism;
     for (const z of [30, 35, 40]) {
       const r =

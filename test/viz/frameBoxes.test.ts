@@ -8,7 +8,7 @@ import { CHIP_HEIGHT_PX } from "@/lib/viz/chipWidth";
 import { FRAME_DEFAULTS, frameBoxes } from "@/lib/viz/frameBoxes";
 import { networkElements } from "@/lib/viz/networkElements";
 import { networkLayout } from "@/lib/viz/networkLayout";
-import type { GraphNode } from "@/lib/viz/types";
+import type { FrameNodeData, GraphNode, SpeciesNodeData } from "@/lib/viz/types";
 import { builtinView } from "./builtinView";
 
 describe("frameBoxes", () => {
@@ -35,45 +35,35 @@ describe("frameBoxes", () => {
   });
 });
 
-const view = builtinView;
+type FrameNode = GraphNode & { data: FrameNodeData };
+type ChipNode = GraphNode & { data: SpeciesNodeData };
 
 describe.each(BUILTIN_MECHANISMS.map((m) => m.id))("the frames of the %s network", (id) => {
-  const mech = view(id);
+  const mech = builtinView(id);
   const layout = networkLayout(mech);
   const nodes = networkElements(mech, layout, null).filter((e): e is GraphNode => e.group === "nodes");
 
-  it("hold every chip of their family inside the padding, touch the outermost ones' padding, and sit under their title", () => {
-    const frames = nodes.filter((n) => n.data.kind === "frame");
+  it("wrap their family's chips with the padding, widened evenly to the title's width, and sit under their title", () => {
+    const frames = nodes.filter((n): n is FrameNode => n.data.kind === "frame");
     expect(frames.length).toBeGreaterThan(0);
     const pad = FRAME_DEFAULTS.padding_px;
     for (const f of frames) {
-      if (f.data.kind !== "frame") continue;
       const { x, y } = f.position!;
-      const box = {
-        x0: x - f.data.width / 2,
-        x1: x + f.data.width / 2,
-        y0: y - f.data.height / 2,
-        y1: y + f.data.height / 2,
-      };
-      const chips = nodes.filter((n) => n.data.kind === "species" && n.data.frame === f.data.id);
+      const chips = nodes.filter((n): n is ChipNode => n.data.kind === "species" && n.data.frame === f.data.id);
       expect(chips.length, f.data.id).toBeGreaterThan(0);
-      const edges = { left: Infinity, right: -Infinity, top: Infinity, bottom: -Infinity };
-      for (const c of chips) {
-        if (c.data.kind !== "species") continue;
-        const p = c.position!;
-        edges.left = Math.min(edges.left, p.x - c.data.width / 2);
-        edges.right = Math.max(edges.right, p.x + c.data.width / 2);
-        edges.top = Math.min(edges.top, p.y - CHIP_HEIGHT_PX / 2);
-        edges.bottom = Math.max(edges.bottom, p.y + CHIP_HEIGHT_PX / 2);
-      }
+      const left = Math.min(...chips.map((c) => c.position!.x - c.data.width / 2)) - pad;
+      const right = Math.max(...chips.map((c) => c.position!.x + c.data.width / 2)) + pad;
+      const top = Math.min(...chips.map((c) => c.position!.y)) - CHIP_HEIGHT_PX / 2 - pad;
+      const bottom = Math.max(...chips.map((c) => c.position!.y)) + CHIP_HEIGHT_PX / 2 + pad;
       // rounded to 0.01 px in the element data
-      expect(box.y0, f.data.id).toBeCloseTo(edges.top - pad, 1);
-      expect(box.y1, f.data.id).toBeCloseTo(edges.bottom + pad, 1);
-      expect(box.x0, f.data.id).toBeLessThanOrEqual(edges.left - pad + 0.01);
-      expect(box.x1, f.data.id).toBeGreaterThanOrEqual(edges.right + pad - 0.01);
-      expect(box.x1 - box.x0 + 0.01, f.data.id).toBeGreaterThanOrEqual(f.data.minWidth);
+      expect(f.data.width, f.data.id).toBeCloseTo(Math.max(right - left, f.data.minWidth), 1);
+      expect(f.data.height, f.data.id).toBeCloseTo(bottom - top, 1);
+      expect(x, f.data.id).toBeCloseTo((left + right) / 2, 1);
+      expect(y, f.data.id).toBeCloseTo((top + bottom) / 2, 1);
+      // every frame of the built-ins has its title, above its top edge
       const title = layout.labels.find((b) => b.kind === "frame" && b.id === f.data.id);
-      if (title) expect(title.y1, `${f.data.id}'s title`).toBeLessThanOrEqual(box.y0 + 0.01);
+      expect(title, `${f.data.id}'s title`).toBeDefined();
+      expect(title!.y1, `${f.data.id}'s title`).toBeLessThanOrEqual(top + 0.01);
     }
   });
 });
