@@ -46,22 +46,21 @@ export type EngineJobResult =
   | { kind: "check-upload"; result: UploadCheck & { text: string } }
   | { kind: "describe-mechanism"; result: ReturnType<typeof summarise> };
 
+/** One analysis of a request against its mechanism, as both analysis task kinds compute it. */
+function analyse(
+  job: { mechanism: MechanismSource; request: AnalysisRequest },
+  initialState?: number[],
+): AnalysisResult {
+  const mech = compileSource(job.mechanism);
+  return runAnalysis(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.request, { initialState });
+}
+
 export function runJob(job: EngineJob): EngineJobResult {
   switch (job.kind) {
-    case "analysis": {
-      const mech = compileSource(job.mechanism);
-      return {
-        kind: "analysis",
-        result: runAnalysis(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.request, {
-          initialState: job.initialState,
-        }),
-      };
-    }
-    case "analysis-json": {
-      const mech = compileSource(job.mechanism);
-      const result = runAnalysis(mech, { id: job.mechanism.id, title: job.mechanism.title }, job.request);
-      return { kind: "analysis-json", result: new TextEncoder().encode(JSON.stringify(result)) };
-    }
+    case "analysis":
+      return { kind: "analysis", result: analyse(job, job.initialState) };
+    case "analysis-json":
+      return { kind: "analysis-json", result: new TextEncoder().encode(JSON.stringify(analyse(job))) };
     case "profile-levels": {
       const mech = compileSource(job.mechanism);
       return {
