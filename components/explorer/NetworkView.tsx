@@ -12,6 +12,7 @@ import { formatNumber } from "@/lib/viz/formatNumber";
 import { frameBoxes } from "@/lib/viz/frameBoxes";
 import type { StyleRule } from "@/lib/viz/networkStyle";
 import type { GraphElement, Point } from "@/lib/viz/types";
+import { nextTask } from "./nextTask";
 
 export interface NetworkHandle {
   /** PNG of the whole graph as a Blob */
@@ -423,21 +424,6 @@ async function styleInSlices(cy: Core, gone: () => boolean): Promise<boolean> {
     }
   }
   return true;
-}
-
-/**
- * Resolves in a later task of the event loop (a message to a channel of its own, which, unlike a
- * nested setTimeout, is not clamped to 4 ms), so that the browser can paint and answer input in between.
- */
-function nextTask(): Promise<void> {
-  return new Promise((resolve) => {
-    const ch = new MessageChannel();
-    ch.port1.onmessage = () => {
-      ch.port1.close();
-      resolve();
-    };
-    ch.port2.postMessage(null);
-  });
 }
 
 /** Animates the view to the elements of `key` (ids joined by spaces), or to the whole network when it is empty. */

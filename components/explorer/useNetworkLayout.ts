@@ -10,6 +10,7 @@
 import { useEffect, useState } from "react";
 import { type NetworkLayout, networkLayoutSteps } from "@/lib/viz/networkLayout";
 import type { MechanismView } from "@/lib/viz/types";
+import { nextTask } from "./nextTask";
 
 /** Work per slice, ms. */
 const SLICE_MS = 30;
@@ -28,7 +29,6 @@ export function useNetworkLayout(mechanism: MechanismView | null): LayoutProgres
   useEffect(() => {
     if (!mechanism) return;
     let cancelled = false;
-    let timer: ReturnType<typeof setTimeout> | undefined;
     const steps = networkLayoutSteps(mechanism);
     setPlaced(0);
     const slice = () => {
@@ -41,12 +41,11 @@ export function useNetworkLayout(mechanism: MechanismView | null): LayoutProgres
         return;
       }
       setPlaced(step.value);
-      timer = setTimeout(slice, 0);
+      void nextTask().then(slice);
     };
-    timer = setTimeout(slice, 0);
+    void nextTask().then(slice);
     return () => {
       cancelled = true;
-      clearTimeout(timer);
     };
   }, [mechanism]);
 
