@@ -24,7 +24,7 @@ const LAYERS = [
   ["service", "^lib/service/"],
   // the queue worker's process (scripts/worker.mjs bundles it): the service's job handlers on the engine pool
   ["worker", "^lib/worker/"],
-  // the command line (bin/ozone-cycles.mjs): the engine and the service's store-free parts, in one process
+  // the command line (bin/ozone-cycles.cjs): the engine and the service's store-free parts, in one process
   // the typed client of the routes (its types come from the layers below, the service's included)
   ["client", "^lib/client/"],
   ["cli", "^lib/cli/"],

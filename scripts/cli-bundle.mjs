@@ -4,7 +4,7 @@
 // .engine/cli-worker-<key>.mjs (the engine's worker thread, for sweeps). The
 // key hashes the path, size and modification time of every source file, so
 // a clone runs without a build step; the stamp written beside the bundles
-// (scripts/cli-stamp.mjs) lets the launcher re-check the key by statting
+// (scripts/cli-stamp.cjs) lets the launcher re-check the key by statting
 // alone, so an unchanged tree starts without loading this module.
 // The engine's spectral tables (lib/photolysis/spectralTables.ts, ~0.3 s of
 // CPU to build) and the loaded built-in mechanisms (the reference YAML takes
@@ -18,10 +18,10 @@ import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, statSync, write
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import v8 from "node:v8";
-import { CLI_RUNTIME, cliBundlePaths, STAMP_FILE } from "./cli-stamp.mjs";
+import { CLI_RUNTIME, cliBundlePaths, STAMP_FILE } from "./cli-stamp.cjs";
 import { NODE_BUNDLE, serverOnlyStub } from "./node-bundle.mjs";
 
-/** The bundle key, and the stamp (scripts/cli-stamp.mjs) that lets the launcher re-check it by statting alone. */
+/** The bundle key, and the stamp (scripts/cli-stamp.cjs) that lets the launcher re-check it by statting alone. */
 export function sourceKey(root) {
   const h = createHash("sha256");
   // the stored tables, fields and code caches are V8's own formats (CLI_RUNTIME)
@@ -41,7 +41,7 @@ export function sourceKey(root) {
     }
   };
   walk(path.join(root, "lib"));
-  for (const f of ["scripts/cli-bundle.mjs", "scripts/cli-stamp.mjs", "scripts/node-bundle.mjs", "package.json"]) {
+  for (const f of ["scripts/cli-bundle.mjs", "scripts/cli-stamp.cjs", "scripts/node-bundle.mjs", "package.json"]) {
     add(f, statSync(path.join(root, f)));
   }
   const key = h.digest("hex").slice(0, 16);

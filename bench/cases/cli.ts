@@ -1,5 +1,5 @@
 /**
- * The command line (bin/ozone-cycles.mjs) as a user runs it: a new Node
+ * The command line (bin/ozone-cycles.cjs) as a user runs it: a new Node
  * process each time, its bundles already built. "First output" is the time
  * from spawning to the first bytes on stdout; the sweep is the whole process
  * over the 51 levels of the standard profile (10–60 km), set beside the same
@@ -17,7 +17,7 @@ import { inlineExecutor } from "../../lib/profiles/runSweep";
 import { startBenchServer } from "../server.mjs";
 import type { BenchCase } from "../types";
 
-const BIN = "bin/ozone-cycles.mjs";
+const BIN = "bin/ozone-cycles.cjs";
 
 /** ms from spawning the binary to its first output on stdout (the process is then left to finish). */
 function firstOutput(args: string[]): Promise<number> {

@@ -1,5 +1,5 @@
 /**
- * Entry of the command line (bin/ozone-cycles.mjs runs it): parses argv,
+ * Entry of the command line (bin/ozone-cycles.cjs runs it): parses argv,
  * runs the command, and maps every error to one line on stderr and an exit
  * code (0 ok, 1 failure, 2 usage); the stack only with --debug.
  */

@@ -1,5 +1,5 @@
 /**
- * The launcher's stat-only check (scripts/cli-stamp.mjs) against the bundle key of scripts/cli-bundle.mjs: a stamp
+ * The launcher's stat-only check (scripts/cli-stamp.cjs) against the bundle key of scripts/cli-bundle.mjs: a stamp
  * the bundler wrote is accepted while nothing changed, and refused after an edit in place, an added or removed
  * file, or a missing bundle, so the launcher falls back to the full check that rebuilds.
  */
@@ -8,7 +8,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterEach, beforeEach, describe, expect, it } from "vitest";
 import { sourceKey, writeStamp } from "../../scripts/cli-bundle.mjs";
-import { CLI_RUNTIME, cliBundlePaths, STAMP_FILE, stampedCliBundles } from "../../scripts/cli-stamp.mjs";
+import { CLI_RUNTIME, cliBundlePaths, STAMP_FILE, stampedCliBundles } from "../../scripts/cli-stamp.cjs";
 
 let root: string;
 const file = (rel: string, text = "x") => {
@@ -28,7 +28,7 @@ function stampAndBundles(): string {
 
 beforeEach(() => {
   root = mkdtempSync(path.join(tmpdir(), "cli-stamp-"));
-  for (const f of ["scripts/cli-bundle.mjs", "scripts/cli-stamp.mjs", "scripts/node-bundle.mjs", "package.json"])
+  for (const f of ["scripts/cli-bundle.mjs", "scripts/cli-stamp.cjs", "scripts/node-bundle.mjs", "package.json"])
     file(f);
   file("lib/errors.ts", "export const a = 1;");
   file("lib/solver/newton.ts", "export const b = 2;");

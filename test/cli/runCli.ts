@@ -1,9 +1,9 @@
-/** Runs the real binary (bin/ozone-cycles.mjs) as a child process, as a user's shell would. */
+/** Runs the real binary (bin/ozone-cycles.cjs) as a child process, as a user's shell would. */
 import { execFile } from "node:child_process";
 import path from "node:path";
 
 export const ROOT = path.resolve(import.meta.dirname, "../..");
-export const BIN = path.join(ROOT, "bin", "ozone-cycles.mjs");
+export const BIN = path.join(ROOT, "bin", "ozone-cycles.cjs");
 export const FIXTURES = path.join(import.meta.dirname, "fixtures");
 
 export interface CliRun {

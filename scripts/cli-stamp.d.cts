@@ -1,4 +1,4 @@
-/** Types of scripts/cli-stamp.mjs (the launcher's stat-only check of the command line's bundles). */
+/** Types of scripts/cli-stamp.cjs (the launcher's stat-only check of the command line's bundles). */
 export declare const STAMP_FILE: string;
 /** "v8 <version> <arch>": the runtime whose formats the stored files are in */
 export declare const CLI_RUNTIME: string;

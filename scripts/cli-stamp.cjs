@@ -7,19 +7,20 @@
 // size or time, and a file added, removed or renamed changes its folder's
 // time. When anything differs the launcher falls back to the full check in
 // scripts/cli-bundle.mjs, which rebuilds only when the key has changed.
-import { readFileSync, statSync } from "node:fs";
-import path from "node:path";
+// CommonJS, so that the launcher (bin/ozone-cycles.cjs) starts without the ES module loader.
+const { readFileSync, statSync } = require("node:fs");
+const path = require("node:path");
 
-export const STAMP_FILE = "cli-stamp.json";
+const STAMP_FILE = "cli-stamp.json";
 
 /**
  * The runtime the stored files belong to: V8's serialised tables, the radiative fields and the code caches
  * are read back only by the V8 (and CPU architecture) that wrote them, so a change of Node is a new key.
  */
-export const CLI_RUNTIME = `v8 ${process.versions.v8} ${process.arch}`;
+const CLI_RUNTIME = `v8 ${process.versions.v8} ${process.arch}`;
 
 /** `{ cli, worker }` when the stamp in `root`/.engine still matches the sources and the bundles are there, else null. */
-export function stampedCliBundles(root) {
+function stampedCliBundles(root) {
   const dir = path.join(root, ".engine");
   let stamp;
   try {
@@ -44,7 +45,7 @@ export function stampedCliBundles(root) {
 }
 
 /** The files of the bundles of key `key` in `dir`. */
-export function cliBundlePaths(dir, key) {
+function cliBundlePaths(dir, key) {
   return {
     cli: path.join(dir, `cli-${key}.cjs`),
     worker: path.join(dir, `cli-worker-${key}.mjs`),
@@ -53,3 +54,5 @@ export function cliBundlePaths(dir, key) {
     codeCache: path.join(dir, `cli-${key}.cache`),
   };
 }
+
+module.exports = { STAMP_FILE, CLI_RUNTIME, stampedCliBundles, cliBundlePaths };

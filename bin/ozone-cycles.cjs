@@ -1,0 +1,104 @@
+#!/usr/bin/env node
+// `ozone-cycles`: the command line of Ozone Loss Cycles (lib/cli). Runs the
+// engine in this process; `ozone-cycles --help` lists the commands.
+// CommonJS, and no node:crypto: an ES module entry starts Node's module loader and importing node:crypto compiles
+// it, together ~10 ms of a ~300 ms analysis (the bundler, an ES module, is imported only when the stamp fails).
+"use strict";
+const { isAscii } = require("node:buffer");
+const { readFileSync, renameSync, writeFileSync } = require("node:fs");
+const { createRequire } = require("node:module");
+const path = require("node:path");
+const vm = require("node:vm");
+const { cliBundlePaths, stampedCliBundles } = require("../scripts/cli-stamp.cjs");
+
+const root = path.resolve(__dirname, "..");
+const cwd = process.cwd();
+const debug = process.argv.includes("--debug");
+
+const COMMANDS = new Set(["analyse", "analyze", "sweep", "check", "compare"]);
+
+/**
+ * Runs the CommonJS bundle `file` as a vm.Script with V8's code cache beside it, one per command (the cache holds
+ * the functions that had been compiled when it was written, so a --help run's would not serve an analysis): the
+ * first run of a command writes its cache once the command is done, later runs skip compiling those functions.
+ * A cache V8 refuses (another Node, other flags) is written again.
+ */
+/** 32-bit FNV-1a of `text`, 8 hex digits: names a code cache per set of node flags (a clash only costs a rewrite). */
+function fnv1a(text) {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193) >>> 0;
+  return h.toString(16).padStart(8, "0");
+}
+
+function loadBundle(file, command) {
+  const key = path.basename(file).replace(/^cli-|\.cjs$/g, "");
+  // V8 refuses a cache written under other flags, so runs with other node flags keep their own; the flags that
+  // name a file, a port or a folder (a profile's name, an inspector) change nothing V8 compiles and are left out,
+  // so that they do not leave a cache per value, and NODE_OPTIONS counts as the command line does
+  // (with the value after such a flag, `--cpu-prof-interval 100`)
+  const v8Flags = [];
+  let dropValue = false;
+  for (const f of [...(process.env.NODE_OPTIONS ?? "").split(/\s+/), ...process.execArgv]) {
+    if (!f) continue;
+    if (!f.startsWith("-") && dropValue) {
+      dropValue = false;
+      continue;
+    }
+    dropValue = /^--(cpu-prof|heap-prof|inspect|debug-port|diagnostic-dir|report-)/.test(f);
+    if (!dropValue) v8Flags.push(f);
+  }
+  const flags = v8Flags.length ? `-${fnv1a(v8Flags.join("\0"))}` : "";
+  const cacheFile = cliBundlePaths(path.dirname(file), key).codeCache.replace(/\.cache$/, `.${command}${flags}.cache`);
+  let cachedData;
+  try {
+    cachedData = readFileSync(cacheFile);
+  } catch {}
+  // the bundle is ASCII (scripts/cli-bundle.mjs): read as Latin-1, the same text, it is copied into a one-byte
+  // string without UTF-8 decoding; a bundle that is not (a non-ASCII regular expression) is decoded as UTF-8
+  const bytes = readFileSync(file);
+  const source = isAscii(bytes) ? bytes.toString("latin1") : bytes.toString("utf8");
+  const wrapped = `(function (exports, require, module, __filename, __dirname) {${source}\n})`;
+  const script = new vm.Script(wrapped, { filename: file, cachedData });
+  const module = { exports: {} };
+  script.runInThisContext()(module.exports, createRequire(file), module, file, path.dirname(file));
+  const writeCache = () => {
+    if (cachedData && !script.cachedDataRejected) return;
+    try {
+      const tmp = `${cacheFile}.${process.pid}.tmp`;
+      writeFileSync(tmp, script.createCachedData());
+      renameSync(tmp, cacheFile);
+    } catch {} // a cache that cannot be written only costs the next run its compile
+  };
+  return { main: module.exports.main, writeCache };
+}
+
+async function run() {
+  try {
+    // the stamp check stats the sources; only when it fails is the bundler's module loaded (it walks lib/ and may rebuild)
+    const { cli, worker } =
+      stampedCliBundles(root) ?? (await (await import("../scripts/cli-bundle.mjs")).ensureCliBundles(root));
+    // the engine reads its built-in documents relative to the working folder; the caller's files are read relative to `cwd`
+    process.chdir(root);
+    const command = process.argv.slice(2).find((a) => !a.startsWith("-"));
+    const { main, writeCache } = loadBundle(
+      cli,
+      COMMANDS.has(command) ? command.replace("analyze", "analyse") : "other",
+    );
+    process.exitCode = await main(process.argv.slice(2), {
+      cwd,
+      stdout: (s) => process.stdout.write(s),
+      stderr: (s) => process.stderr.write(s),
+      stderrIsTTY: Boolean(process.stderr.isTTY),
+      workerScript: worker,
+      // solved radiative columns, kept per bundle key (lib/cli/diskFieldStore.ts)
+      fieldStoreDir: cli.replace(/cli-([0-9a-f]{16})\.cjs$/, "cli-fields-$1"),
+    });
+    writeCache();
+  } catch (e) {
+    process.stderr.write(`ozone-cycles: ${e instanceof Error ? e.message : e}\n`);
+    if (debug && e instanceof Error) process.stderr.write(`${e.stack}\n`);
+    process.exitCode = 1;
+  }
+}
+
+run();
