@@ -17,12 +17,6 @@ const debug = process.argv.includes("--debug");
 
 const COMMANDS = new Set(["analyse", "analyze", "sweep", "check", "compare"]);
 
-/**
- * Runs the CommonJS bundle `file` as a vm.Script with V8's code cache beside it, one per command (the cache holds
- * the functions that had been compiled when it was written, so a --help run's would not serve an analysis): the
- * first run of a command writes its cache once the command is done, later runs skip compiling those functions.
- * A cache V8 refuses (another Node, other flags) is written again.
- */
 /** 32-bit FNV-1a of `text`, 8 hex digits: names a code cache per set of node flags (a clash only costs a rewrite). */
 function fnv1a(text) {
   let h = 0x811c9dc5;
@@ -30,6 +24,12 @@ function fnv1a(text) {
   return h.toString(16).padStart(8, "0");
 }
 
+/**
+ * Runs the CommonJS bundle `file` as a vm.Script with V8's code cache beside it, one per command (the cache holds
+ * the functions that had been compiled when it was written, so a --help run's would not serve an analysis): the
+ * first run of a command that succeeds writes its cache once the command is done, later runs skip compiling those functions.
+ * A cache V8 refuses (another Node, other flags) is written again.
+ */
 function loadBundle(file, command) {
   const key = path.basename(file).replace(/^cli-|\.cjs$/g, "");
   // V8 refuses a cache written under other flags, so runs with other node flags keep their own; the flags that
@@ -93,7 +93,8 @@ async function run() {
       // solved radiative columns, kept per bundle key (lib/cli/diskFieldStore.ts)
       fieldStoreDir: cli.replace(/cli-([0-9a-f]{16})\.cjs$/, "cli-fields-$1"),
     });
-    writeCache();
+    // only a run that did its work compiled what the command needs (a usage error's cache would hold the parser alone)
+    if (process.exitCode === 0) writeCache();
   } catch (e) {
     process.stderr.write(`ozone-cycles: ${e instanceof Error ? e.message : e}\n`);
     if (debug && e instanceof Error) process.stderr.write(`${e.stack}\n`);
