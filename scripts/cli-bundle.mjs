@@ -125,6 +125,7 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
   const tmp = `${out}.${process.pid}.build.mjs`;
   const entry = [
     'export { SPECTRAL_TABLES } from "./lib/photolysis/spectralTables.ts";',
+    'export { WAVELENGTH_GRID } from "./lib/photolysis/wavelengthGrid.ts";',
     'export { loadBuiltinMechanism } from "./lib/mechanism/builtinMechanisms.ts";',
     'export { BUILTIN_MECHANISMS } from "./lib/mechanisms/index.ts";',
   ].join("\n");
@@ -138,7 +139,7 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
     // tables (60,000 float64) are V8's serialised form, whose Float64Arrays are their bytes: read back 3-5 times
     // faster than parsing them as JSON numbers (measured 13-30 ms against 64-78 ms at load 4-6), bit for bit alike
     const tablesPart = `${tablesFile}.${process.pid}.tmp`;
-    writeFileSync(tablesPart, v8.serialize(m.SPECTRAL_TABLES));
+    writeFileSync(tablesPart, v8.serialize({ tables: m.SPECTRAL_TABLES, grid: m.WAVELENGTH_GRID }));
     renameSync(tablesPart, tablesFile);
     const json = out.replace(/\.mjs$/, ".json");
     const part = `${json}.${process.pid}.tmp`;
@@ -150,9 +151,12 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
         'import { readFileSync } from "node:fs";',
         'import { deserialize } from "node:v8";',
         "let data;",
+        "let spectral;",
         `const stored = () => (data ??= JSON.parse(readFileSync(new URL(${JSON.stringify(`./${path.basename(json)}`)}, import.meta.url), "utf8")));`,
-        // a file that cannot be read back (damaged) gives undefined: the engine builds its tables then
-        `export const prebuiltSpectralTables = () => { try { return deserialize(readFileSync(new URL(${JSON.stringify(`./${path.basename(tablesFile)}`)}, import.meta.url))); } catch { return undefined; } };`,
+        // a file that cannot be read back (damaged) gives undefined: the engine builds its grid and tables then
+        `const storedSpectral = () => (spectral ??= (() => { try { return deserialize(readFileSync(new URL(${JSON.stringify(`./${path.basename(tablesFile)}`)}, import.meta.url))); } catch { return {}; } })());`,
+        "export const prebuiltSpectralTables = () => storedSpectral().tables;",
+        "export const prebuiltWavelengthGrid = () => storedSpectral().grid;",
         "export const prebuiltMechanisms = () => stored().mechanisms;",
         "",
       ].join("\n"),
@@ -165,8 +169,11 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
         'const { join } = require("node:path");',
         'const { deserialize } = require("node:v8");',
         "let data;",
+        "let spectral;",
         `const stored = () => (data ??= JSON.parse(readFileSync(join(__dirname, ${JSON.stringify(path.basename(json))}), "utf8")));`,
-        `exports.prebuiltSpectralTables = () => { try { return deserialize(readFileSync(join(__dirname, ${JSON.stringify(path.basename(tablesFile))}))); } catch { return undefined; } };`,
+        `const storedSpectral = () => (spectral ??= (() => { try { return deserialize(readFileSync(join(__dirname, ${JSON.stringify(path.basename(tablesFile))}))); } catch { return {}; } })());`,
+        "exports.prebuiltSpectralTables = () => storedSpectral().tables;",
+        "exports.prebuiltWavelengthGrid = () => storedSpectral().grid;",
         "exports.prebuiltMechanisms = () => stored().mechanisms;",
         "",
       ].join("\n"),
@@ -182,7 +189,7 @@ async function storeComputed(build, options, root, out, outCjs, tablesFile) {
 const prebuilt = (file) => ({
   name: "prebuilt",
   setup(b) {
-    b.onResolve({ filter: /^\.\/prebuilt(SpectralTables|Mechanisms)$/ }, (args) =>
+    b.onResolve({ filter: /^\.\/prebuilt(SpectralTables|WavelengthGrid|Mechanisms)$/ }, (args) =>
       /lib[\\/](photolysis|mechanism)[\\/]/.test(args.importer) ? { path: file } : undefined,
     );
   },

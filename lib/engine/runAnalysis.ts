@@ -3,7 +3,7 @@
  * (instantaneous, or the periodic 24-hour solution), and analyse the
  * catalytic cycles and the odd-oxygen budget.
  */
-import { analyseCycles } from "../analysis";
+import { analyseCycles } from "../analysis/analyseCycles";
 import type { CycleReport } from "../analysis/types";
 import { CONDITION_DEFAULTS, solarZenithAngle } from "../atmosphere";
 import type { CompiledMechanism } from "../mechanism/types";

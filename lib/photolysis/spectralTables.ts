@@ -161,7 +161,8 @@ export function buildSpectralTables(): SpectralTables {
 /** Tables from a stored form: V8's serialised one (the command line's bundle), or plain JSON with the arrays as numbers. */
 export function reviveSpectralTables(data: unknown): SpectralTables {
   const d = data as Record<string, unknown>;
-  const arr = (v: unknown) => Float64Array.from(v as number[]);
+  // V8's serialised form gives Float64Arrays back (kept as they are, not copied); JSON gives number arrays
+  const arr = (v: unknown) => (v instanceof Float64Array ? v : Float64Array.from(v as number[]));
   const each = <T>(o: unknown, f: (v: unknown) => T) =>
     Object.fromEntries(Object.entries(o as Record<string, unknown>).map(([k, v]) => [k, f(v)]));
   return {

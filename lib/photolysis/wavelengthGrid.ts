@@ -12,6 +12,7 @@
  */
 
 import { interpolateNodes } from "./interpolateNodes";
+import { prebuiltWavelengthGrid } from "./prebuiltWavelengthGrid";
 import { SRB_GRID } from "./tables/schumannRunge";
 import { LYMAN_ALPHA_FLUX_cm2s, SOLAR_IRRADIANCE } from "./tables/solarSpectrum";
 
@@ -73,5 +74,20 @@ function buildGrid(): WavelengthGrid {
   return { n, lower_nm, upper_nm, flux_cm2s, lymanAlpha: 0, srFirst, srEnd };
 }
 
-/** The fixed wavelength grid (built once). */
-export const WAVELENGTH_GRID: WavelengthGrid = buildGrid();
+/**
+ * A grid from its stored form (V8's serialised one, as the command line's bundle keeps it), or undefined when it
+ * is not a grid of this shape (a damaged or older file): the caller builds it then.
+ */
+export function reviveWavelengthGrid(data: unknown): WavelengthGrid | undefined {
+  const d = data as Partial<WavelengthGrid> | null;
+  if (!d || typeof d !== "object" || !Number.isInteger(d.n)) return undefined;
+  const n = d.n as number;
+  const arrays = [d.lower_nm, d.upper_nm, d.flux_cm2s];
+  if (!arrays.every((a) => a instanceof Float64Array && a.length === n)) return undefined;
+  if (![d.lymanAlpha, d.srFirst, d.srEnd].every((i) => Number.isInteger(i) && (i as number) >= 0 && (i as number) <= n))
+    return undefined;
+  return d as WavelengthGrid;
+}
+
+/** The fixed wavelength grid: built once at first import, or the one a bundle stored (prebuiltWavelengthGrid.ts). */
+export const WAVELENGTH_GRID: WavelengthGrid = reviveWavelengthGrid(prebuiltWavelengthGrid()) ?? buildGrid();

@@ -10,7 +10,8 @@
  * integrated state less what compression along a trajectory changed
  * (`closure`). Units: cm⁻³ per day.
  */
-import { analyseCycles, oxWeights } from "../analysis";
+import { analyseCycles } from "../analysis/analyseCycles";
+import { oxWeights } from "../analysis/oxWeights";
 import type { CompiledMechanism } from "../mechanism/types";
 import type { RunDay, RunOptions } from "./types";
 

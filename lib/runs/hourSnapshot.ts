@@ -5,7 +5,7 @@
  * analysis of those rates, in which each species' net change at that moment
  * is storage or release (Lehmann 2004, J. Atmos. Chem. 47, 45–78).
  */
-import { analyseCycles } from "../analysis";
+import { analyseCycles } from "../analysis/analyseCycles";
 import type { AnalysisResult } from "../engine/types";
 import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";

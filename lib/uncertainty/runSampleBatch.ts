@@ -8,7 +8,7 @@
  *
  * Units: as in `OutputDef.unit`.
  */
-import { analyseCycles } from "../analysis";
+import { analyseCycles } from "../analysis/analyseCycles";
 import type { CycleOptions } from "../analysis/types";
 import { InputError } from "../errors";
 import type { CompiledMechanism } from "../mechanism/types";

@@ -21,7 +21,7 @@
  * A photolysis channel's coefficient is the sum over the reactions that use
  * it (k ∝ J for each). Units: dimensionless.
  */
-import { analyseCycles } from "../analysis";
+import { analyseCycles } from "../analysis/analyseCycles";
 import type { CycleOptions, CycleReport } from "../analysis/types";
 import { InputError } from "../errors";
 import { ownValue } from "../idRecord";
