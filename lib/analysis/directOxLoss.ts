@@ -56,26 +56,54 @@ interface CarriedBalance {
 function carriedBalance(mech: CompiledMechanism, raw: Float64Array, rates: number[]): CarriedBalance {
   const nS = mech.species.length;
   const hydrogenous = mech.species.map((sp) => sp.role === "solved" && (sp.atoms.H ?? 0) > 0);
-  const hReactants = mech.reactions.map((r) => r.reactants.map((t) => t.species).filter((i) => hydrogenous[i]));
   const P = new Float64Array(nS);
   mech.reactions.forEach((r, j) => {
     for (const t of r.products) if (hydrogenous[t.species]) P[t.species] += t.coef * rates[j];
   });
+  // The reactions that pass a balance on (a rate > 0 and a hydrogen-containing product), flattened once: their
+  // hydrogen-containing reactants (hStart..), and their hydrogen-containing products with coef·share, where an
+  // event's balance is shared among its hydrogen-containing product molecules (O(1D) + H2O -> 2 OH destroys one
+  // Ox, so each OH owes half of it). The sweeps below visit these in reaction order, as the plain loop would.
+  const active: number[] = [];
+  const hStart = [0];
+  const hSpecies: number[] = [];
+  const pStart = [0];
+  const pSpecies: number[] = [];
+  const pShare: number[] = [];
+  mech.reactions.forEach((r, j) => {
+    const hProducts = r.products.reduce((n, t) => (hydrogenous[t.species] ? n + t.coef : n), 0);
+    if (!(rates[j] > 0) || hProducts === 0) return;
+    active.push(j);
+    for (const t of r.reactants) if (hydrogenous[t.species]) hSpecies.push(t.species);
+    hStart.push(hSpecies.length);
+    const share = rates[j] / hProducts;
+    for (const t of r.products)
+      if (hydrogenous[t.species]) {
+        pSpecies.push(t.species);
+        pShare.push(t.coef * share);
+      }
+    pStart.push(pSpecies.length);
+  });
   let deficit = new Float64Array(nS);
   let surplus = new Float64Array(nS);
-  // hydrogen-containing product molecules of each reaction: an event's balance is shared among them
-  // (O(1D) + H2O -> 2 OH destroys one Ox, so each OH owes half of it)
-  const hProducts = mech.reactions.map((r) =>
-    r.products.reduce((n, t) => (hydrogenous[t.species] ? n + t.coef : n), 0),
-  );
+  // two buffers for the next shares, swapped with the current ones after each sweep
+  let nextD = new Float64Array(nS);
+  let nextS = new Float64Array(nS);
   for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
-    const nextD = new Float64Array(nS);
-    const nextS = new Float64Array(nS);
-    mech.reactions.forEach((r, j) => {
-      if (!(rates[j] > 0)) return;
-      const h = hReactants[j];
-      const d = h.length ? h.reduce((s, i) => s + deficit[i], 0) / h.length : 0;
-      const u = h.length ? h.reduce((s, i) => s + surplus[i], 0) / h.length : 0;
+    nextD.fill(0);
+    nextS.fill(0);
+    for (let a = 0; a < active.length; a++) {
+      const j = active[a];
+      const h0 = hStart[a];
+      const nh = hStart[a + 1] - h0;
+      let d = 0;
+      let u = 0;
+      if (nh > 0) {
+        for (let q = h0; q < h0 + nh; q++) d += deficit[hSpecies[q]];
+        d /= nh;
+        for (let q = h0; q < h0 + nh; q++) u += surplus[hSpecies[q]];
+        u /= nh;
+      }
       let toD = d;
       let toS = u;
       if (raw[j] > 0) {
@@ -83,24 +111,26 @@ function carriedBalance(mech: CompiledMechanism, raw: Float64Array, rates: numbe
         toS = 0;
       } else if (raw[j] < 0) {
         toD = 0;
-        toS = h.length ? 1 - d : 0;
+        toS = nh > 0 ? 1 - d : 0;
       }
-      if ((toD === 0 && toS === 0) || hProducts[j] === 0) return;
-      const share = rates[j] / hProducts[j];
-      for (const t of r.products)
-        if (hydrogenous[t.species]) {
-          nextD[t.species] += t.coef * share * toD;
-          nextS[t.species] += t.coef * share * toS;
-        }
-    });
+      if (toD === 0 && toS === 0) continue;
+      for (let q = pStart[a]; q < pStart[a + 1]; q++) {
+        nextD[pSpecies[q]] += pShare[q] * toD;
+        nextS[pSpecies[q]] += pShare[q] * toS;
+      }
+    }
     let change = 0;
     for (let i = 0; i < nS; i++) {
       nextD[i] = P[i] > 0 ? Math.min(1, nextD[i] / P[i]) : 0;
       nextS[i] = P[i] > 0 ? Math.min(1 - nextD[i], nextS[i] / P[i]) : 0;
       change = Math.max(change, Math.abs(nextD[i] - deficit[i]), Math.abs(nextS[i] - surplus[i]));
     }
+    const oldD = deficit;
+    const oldS = surplus;
     deficit = nextD;
     surplus = nextS;
+    nextD = oldD;
+    nextS = oldS;
     if (change <= TOLERANCE) break;
   }
   return { deficit, surplus };

@@ -64,7 +64,7 @@ export function eliminationWork(nSpecies: number): EliminationWork {
 /** Fills work.a with the rows `isRow` of the columns' nets; returns the shape. */
 function fill(
   columns: ArrayLike<number>,
-  nets: SparseVector[],
+  nets: readonly SparseVector[],
   isRow: (species: number) => boolean,
   work: EliminationWork,
 ): { m: number; n: number } {
@@ -131,7 +131,7 @@ function rref(a: Float64Array, m: number, n: number, pivots: Int32Array): number
 /** True when the pathway with support `columns` has no proper balanced sub-pathway (null space of dimension ≤ 1). */
 export function isElementary(
   columns: ArrayLike<number>,
-  nets: SparseVector[],
+  nets: readonly SparseVector[],
   isRow: (species: number) => boolean,
   work: EliminationWork,
 ): boolean {
@@ -159,7 +159,7 @@ interface Split {
 
 function nullBasis(
   columns: ArrayLike<number>,
-  nets: SparseVector[],
+  nets: readonly SparseVector[],
   isRow: (s: number) => boolean,
   work: EliminationWork,
 ): Split {
@@ -370,7 +370,7 @@ function decomposePlanar(flux: number[], sp: Split): { multiplicity: number[]; r
 export function decomposeElementary(
   flux: number[],
   columns: number[],
-  nets: SparseVector[],
+  nets: readonly SparseVector[],
   isRow: (species: number) => boolean,
   work: EliminationWork,
 ): { multiplicity: number[]; rate: number }[] | null {

@@ -109,10 +109,10 @@ export function findPathways(
       if (v > 0) deletedPos[s] += v;
       else deletedNeg[s] -= v;
     }
-    for (const [name, w] of tracked) {
-      const dx = rate * weightedSum(net, w);
-      if (dx > 0) deletedTracked[name].produced_cm3s += dx;
-      else deletedTracked[name].destroyed_cm3s -= dx;
+    for (let t = 0; t < tracked.length; t++) {
+      const dx = rate * weightedSum(net, tracked[t][1]);
+      if (dx > 0) trackedSums[t].produced_cm3s += dx;
+      else trackedSums[t].destroyed_cm3s -= dx;
     }
   };
 
@@ -150,7 +150,8 @@ export function findPathways(
     list.sort((x, y) => x - y);
     const idx: number[] = [];
     const val: number[] = [];
-    for (const sp of list) {
+    for (let t = 0; t < list.length; t++) {
+      const sp = list[t];
       const v = snap(scratch[sp]);
       scratch[sp] = 0;
       seen[sp] = 0;
@@ -215,8 +216,15 @@ export function findPathways(
     const [k, l] = w.parents;
     if (!k.elementary || !l.elementary) return false;
     const e = ++touchEpoch;
-    for (const j of k.rx) for (const s of nets[j].idx) if (processed[s] === 1) touched[s] = e;
-    for (const j of l.rx) for (const s of nets[j].idx) if (s !== b && touched[s] === e) return false;
+    // indexed loops: this runs for every new pathway, much of it before V8 optimises it, where for-of allocates
+    for (let t = 0; t < k.rx.length; t++) {
+      const idx = nets[k.rx[t]].idx;
+      for (let q = 0; q < idx.length; q++) if (processed[idx[q]] === 1) touched[idx[q]] = e;
+    }
+    for (let t = 0; t < l.rx.length; t++) {
+      const idx = nets[l.rx[t]].idx;
+      for (let q = 0; q < idx.length; q++) if (idx[q] !== b && touched[idx[q]] === e) return false;
+    }
     return true;
   };
   const storage: PathwaySet["storage"] = [];
@@ -231,7 +239,8 @@ export function findPathways(
     const next = current;
     let Pcur = 0;
     let Dcur = 0;
-    for (const w of current.values()) {
+    // forEach, not for-of: the same entries in the same order, without an iterator result per entry in cold code
+    current.forEach((w) => {
       const v = valueAt(w.net, b);
       if (v > 0) {
         producers.push(w);
@@ -242,7 +251,7 @@ export function findPathways(
         Dcur -= w.rate * v;
         current.delete(w.key);
       }
-    }
+    });
     if (joins + producers.length * consumers.length > opt.maxJoins) {
       // over budget: b and the species after it stay as they are
       for (const w of producers) current.set(w.key, w);
@@ -380,7 +389,7 @@ export function findPathways(
           }
         }
         let g = 0;
-        for (const m of mx) g = gcd(g, m);
+        for (let t = 0; t < mx.length; t++) g = gcd(g, mx[t]);
         if (g > 1) for (let t = 0; t < mx.length; t++) mx[t] /= g;
         rate *= g;
         const net = axpy(a / g, k.net, c / g, l.net);
@@ -402,20 +411,20 @@ export function findPathways(
       remove((l.rate * dP) / T, l);
     }
 
-    for (const w of created.values()) {
+    created.forEach((w) => {
       const parents = w.parents;
       w.parents = undefined;
       if (next.has(w.key) || w.net.idx.length === 0) {
         add(next, w);
-        continue;
+        return;
       }
       // Every elementary part of w runs at most at rate·max(multiplicity) < f_min, so all of them would be
       // deleted: deleting w whole removes the same flux and net effect, without the split.
       let mMax = 0;
-      for (const m of w.mx) mMax = Math.max(mMax, m);
+      for (let t = 0; t < w.mx.length; t++) mMax = Math.max(mMax, w.mx[t]);
       if (w.rate * mMax < fmin) {
         remove(w.rate, w);
-        continue;
+        return;
       }
       w.parents = parents;
       const shortcut = joinIsElementary(w, b);
@@ -424,7 +433,7 @@ export function findPathways(
       if (shortcut || isElementary(w.rx, nets, isRow, work)) {
         w.elementary = true;
         add(next, w);
-        continue;
+        return;
       }
       const parts = decomposeElementary(
         w.mx.map((m) => m * w.rate),
@@ -438,7 +447,7 @@ export function findPathways(
           `a pathway through ${mech.species[b].id} could not be split into elementary pathways; kept whole`,
         );
         add(next, w);
-        continue;
+        return;
       }
       for (const part of parts) {
         const rx: number[] = [];
@@ -457,7 +466,7 @@ export function findPathways(
         }
         add(next, { rx, mx, net: known ? known.net : combineNets(rx, mx), rate: part.rate, key, elementary: true });
       }
-    }
+    });
 
     if (next.size > opt.maxPathways) {
       const sorted = [...next.values()].sort((x, y) => y.rate - x.rate);
