@@ -6,7 +6,7 @@ describe("reactionNet", () => {
   it("gives products − reactants per reaction, sorted, with M, hv and exact cancellations left out", () => {
     const mech = handMechanism(
       "nets",
-      { O: "solved", O2: "fixed", O3: "solved", OH: "solved", HO2: "solved", H2O2: "solved" },
+      { O: "solved", O2: "held", O3: "solved", OH: "solved", HO2: "solved", H2O2: "solved" },
       {
         r1: "O + O2 + M -> O3 + M",
         r2: "O3 + hv -> O + O2",
