@@ -16,7 +16,11 @@ export interface DemoOption {
 const field = "rounded border border-stone-300 px-2 py-1 text-[13px]";
 
 export function RunForm({ mechanisms, demos }: { mechanisms: { id: string; title: string }[]; demos: DemoOption[] }) {
-  const [mechanismId, setMechanismId] = useState(mechanisms[0]?.id ?? "reference");
+  // the full reference chemistry, as the sweep form and the command line default to, not the list's first entry
+  // (pure oxygen, which has no catalytic cycles to follow over days)
+  const [mechanismId, setMechanismId] = useState(
+    mechanisms.find((m) => m.id === "reference")?.id ?? mechanisms[0]?.id ?? "reference",
+  );
   const [altitude, setAltitude] = useState("20");
   const [latitude, setLatitude] = useState(String(CONDITION_DEFAULTS.latitude_deg));
   const [date, setDate] = useState<string>(CONDITION_DEFAULTS.date);

@@ -6,6 +6,8 @@ test("the invented cold-vortex parcel runs from the runs page, shows ozone falli
   test.setTimeout(300_000);
   await page.goto("/runs");
   await expect(page.getByRole("heading", { level: 1 })).toHaveText("Runs over days");
+  // the own-run form starts on the full reference chemistry, as the sweep form does
+  await expect(page.getByRole("form", { name: "Run" }).getByLabel("Mechanism")).toHaveValue("reference");
   await page.getByTestId("demo-invented-vortex-parcel").click();
   await expect(page.getByRole("progressbar")).toBeVisible();
   await page.waitForURL(/\/runs\/[A-Za-z0-9_-]{16}$/, { timeout: 240_000 });
