@@ -12,6 +12,11 @@ const TOOLS = [
     text: "Sweep an altitude profile and see how the loss is split among the families at every level.",
   },
   {
+    href: "/runs",
+    title: "Runs over days",
+    text: "One air parcel over 1–60 days with the sun moving, at a fixed place or along a trajectory: ozone lost day by day, split by family and cycle.",
+  },
+  {
     href: "/compare",
     title: "Compare",
     text: "Two profiles, mechanisms or loadings side by side, with the difference and the cycles that explain it.",
@@ -20,6 +25,11 @@ const TOOLS = [
     href: "/assess",
     title: "Assessments",
     text: "For instructors: question variants with answer keys computed by the same engine, printable sheets and marking.",
+  },
+  {
+    href: "/api/openapi.json",
+    title: "From scripts",
+    text: "The same engine from the command line (npx ozone-cycles analyse, sweep, compare) or over HTTP; the OpenAPI document lists every route.",
   },
 ] as const;
 
@@ -31,7 +41,9 @@ export default function Home() {
         Load a chemical mechanism, pick a place and time in the stratosphere, and this tool computes the photochemical
         steady state, the rate of every reaction and the odd-oxygen budget split among the pure-oxygen, HOx, NOx, ClOx
         and BrOx families. For each catalytic cycle it finds by pathway analysis it reports the rate, the rate-limiting
-        step and the chain length, and it draws the reaction network coloured by flux and by ozone destroyed.
+        step and the chain length, and it draws the reaction network coloured by flux and by ozone destroyed. Light
+        includes scattered sunlight; cold sulfate, NAT and ice surfaces activate chlorine; and a parcel can be followed
+        over days.
       </p>
       <p className="mt-8">
         <Link
