@@ -6,12 +6,13 @@
 // (default 2) more on the same server, each timed from the POST to the job's
 // done state (polled every 20 ms). Prints the medians of the first and of
 // the later sweeps and writes bench/results/cold-service.json. No pass/fail:
-// figures from a shared 2-core machine are noisy. Needs `npm run build`.
+// figures from a shared 2-core machine are noisy. Needs `npm run build`; the servers listen on
+// BENCH_COLD_SERVICE_PORT (default 3295).
 import { existsSync, mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
-import { startBenchServer } from "./server.mjs";
+import { startBenchServer, sweepAsJob } from "./server.mjs";
 
-const PORT = Number(process.env.BENCH_CLI_PORT ?? 3295);
+const PORT = Number(process.env.BENCH_COLD_SERVICE_PORT ?? 3295);
 const servers = Number(process.env.BENCH_SERVERS ?? 3);
 const after = Number(process.env.BENCH_AFTER ?? 2);
 const base = `http://127.0.0.1:${PORT}`;
@@ -21,22 +22,11 @@ if (!existsSync(".next/BUILD_ID") || !existsSync(".engine/worker.mjs")) {
   process.exit(1);
 }
 
-/** ms from the POST of a standard-profile sweep to its job's done state. */
+/** ms from the POST of the sweep to its job's done state. */
 async function timedSweep() {
   const t0 = performance.now();
-  const r = await fetch(`${base}/api/profiles`, {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ mechanismId: "reference", profile: { kind: "standard" } }),
-  });
-  if (!r.ok) throw new Error(`POST /api/profiles: ${r.status} ${await r.text()}`);
-  const job = await r.json();
-  for (;;) {
-    const s = await (await fetch(`${base}/api/jobs/${job.id}`)).json();
-    if (s.state === "done") return performance.now() - t0;
-    if (s.state !== "queued" && s.state !== "running") throw new Error(`sweep ${s.state}: ${s.error?.message}`);
-    await new Promise((res) => setTimeout(res, 20));
-  }
+  await sweepAsJob(base);
+  return performance.now() - t0;
 }
 
 const median = (xs) => {

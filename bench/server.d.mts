@@ -5,3 +5,6 @@ export function startBenchServer(
   port: number,
   env?: Record<string, string>,
 ): Promise<{ proc: ChildProcess; stop(): void }>;
+
+/** See bench/server.mjs: the reference sweep of the standard profile as a job of the server at `base`; its result id. */
+export function sweepAsJob(base: string): Promise<string>;

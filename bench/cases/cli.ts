@@ -14,7 +14,7 @@ import { compileSource } from "../../lib/engine/mechanismSource";
 import { prepareSweep, runPreparedSweep } from "../../lib/profiles/prepareSweep";
 import { runLevelBatch } from "../../lib/profiles/runLevelBatch";
 import { inlineExecutor } from "../../lib/profiles/runSweep";
-import { startBenchServer } from "../server.mjs";
+import { startBenchServer, sweepAsJob } from "../server.mjs";
 import type { BenchCase } from "../types";
 
 const BIN = "bin/ozone-cycles.cjs";
@@ -48,21 +48,10 @@ async function post(path: string, body: unknown): Promise<{ id: string }> {
   return r.json();
 }
 
-/** A sweep as a job of the service, from the POST to the job's done state. */
-async function serviceSweep(): Promise<string> {
-  const job = await post("/api/profiles", { mechanismId: "reference", profile: { kind: "standard" } });
-  for (;;) {
-    const s = await (await fetch(`${base}/api/jobs/${job.id}`)).json();
-    if (s.state === "done") return s.resultId;
-    if (s.state !== "queued" && s.state !== "running") throw new Error(`sweep ${s.state}: ${s.error?.message}`);
-    await new Promise((r) => setTimeout(r, 20));
-  }
-}
-
 const serviceCases: BenchCase[] = [
   {
     name: "service sweep, reference over the 51-level standard profile (POST to job done)",
-    run: serviceSweep,
+    run: () => sweepAsJob(base),
     iterations: 3,
     note: "set beside the cli sweep above: the issue's aim is within 20 %",
   },
